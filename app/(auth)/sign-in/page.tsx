@@ -1,0 +1,21 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { SignInForm } from './sign-in-form';
+
+export const metadata: Metadata = { title: 'Sign in' };
+
+export default async function SignInPage({ searchParams }: { searchParams: Promise<{ next?: string }> }) {
+  const { next } = await searchParams;
+  return (
+    <>
+      <h1 className="text-lg font-semibold">Sign in</h1>
+      <SignInForm next={next?.startsWith('/') && !next.startsWith('//') ? next : '/routes'} />
+      <p className="mt-4 text-sm text-ink-soft">
+        New here?{' '}
+        <Link href="/sign-up" className="text-pine-700 underline">
+          Start a team
+        </Link>
+      </p>
+    </>
+  );
+}

@@ -1,0 +1,22 @@
+// GET/POST /api/auth/*: next-auth's own endpoints; credential sign-ins are rate limited per e-mail and IP first
+import NextAuth from 'next-auth';
+import type { NextRequest } from 'next/server';
+import { authOptions } from '@/lib/auth/options';
+import { guardCredentialSignIn } from '@/lib/auth/sign-in-guard';
+
+export const runtime = 'nodejs';
+export const dynamic = 'force-dynamic';
+
+type Ctx = { params: Promise<{ nextauth: string[] }> };
+
+function handle(req: NextRequest, ctx: Ctx) {
+  return NextAuth(req, ctx, authOptions());
+}
+
+export async function GET(req: NextRequest, ctx: Ctx) {
+  return handle(req, ctx);
+}
+
+export async function POST(req: NextRequest, ctx: Ctx) {
+  return guardCredentialSignIn(req, () => handle(req, ctx));
+}

@@ -1,0 +1,12 @@
+import type { QueryInterface } from 'sequelize';
+import * as coreTables from './20261201-0001-core-tables';
+
+export interface MigrationModule {
+  up(params: { context: QueryInterface }): Promise<void>;
+  down(params: { context: QueryInterface }): Promise<void>;
+}
+
+// Listed explicitly (not globbed) so the same list runs under tsx, vitest and the app bundle. Append only.
+export const MIGRATIONS: ReadonlyArray<{ name: string; module: MigrationModule }> = [
+  { name: '20261201-0001-core-tables', module: coreTables },
+];

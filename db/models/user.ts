@@ -1,0 +1,25 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+
+export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
+  declare id: CreationOptional<number>;
+  declare email: string;
+  declare name: string;
+  declare passwordHash: string;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export function initUser(sequelize: Sequelize): typeof User {
+  User.init(
+    {
+      id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+      email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
+      name: { type: DataTypes.STRING(120), allowNull: false },
+      passwordHash: { type: DataTypes.STRING(100), allowNull: false, field: 'password_hash' },
+      createdAt: { type: DataTypes.DATE, field: 'created_at' },
+      updatedAt: { type: DataTypes.DATE, field: 'updated_at' },
+    },
+    { sequelize, tableName: 'users', modelName: 'User' },
+  );
+  return User;
+}

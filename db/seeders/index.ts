@@ -1,0 +1,9 @@
+import type { Sequelize } from 'sequelize';
+import type { Models } from '../models';
+import { seedDemoTeam } from './demo-team';
+
+export async function runSeeders(db: { sequelize: Sequelize; models: Models }): Promise<string[]> {
+  const done: string[] = [];
+  if ((await seedDemoTeam(db)).created) done.push('demo-team');
+  return done;
+}

@@ -1,0 +1,26 @@
+import { NextResponse } from 'next/server';
+import type { z } from 'zod';
+import { ThermoError } from '../thermo/errors';
+import { AppError, errorBody } from './errors';
+
+export function zodFields(error: z.ZodError): Record<string, string> {
+  const fields: Record<string, string> = {};
+  for (const issue of error.issues) {
+    const key = issue.path.length ? issue.path.map(String).join('.') : '_';
+    fields[key] ??= issue.message;
+  }
+  return fields;
+}
+
+// The one place an exception becomes an HTTP answer; a 500 never carries a stack.
+export function toErrorResponse(error: unknown): Response {
+  if (error instanceof AppError) {
+    return NextResponse.json(errorBody(error.code, error.message, error.fields), { status: error.status, headers: error.headers });
+  }
+  if (error instanceof ThermoError) {
+    const fields = error.field ? { [error.field]: error.message } : undefined;
+    return NextResponse.json(errorBody(error.code, error.message, fields), { status: 400 });
+  }
+  console.error('[stepwell] unhandled error in route handler:', error);
+  return NextResponse.json(errorBody('INTERNAL', 'Something went wrong on our side. Try again.'), { status: 500 });
+}

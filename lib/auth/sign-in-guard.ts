@@ -1,0 +1,41 @@
+import 'server-only';
+import { NextResponse, type NextRequest } from 'next/server';
+import { errorBody } from '../api/errors';
+import { toErrorResponse } from '../api/error-response';
+import { clientIp, signInLimiter } from '../security/rate-limit';
+
+// Wraps next-auth's credentials callback: ten failures a minute for one e-mail and IP get a 429 with the wait.
+export async function guardCredentialSignIn(req: NextRequest, next: () => Promise<Response>): Promise<Response> {
+  if (!req.nextUrl.pathname.endsWith('/callback/credentials')) return next();
+  try {
+    const form = await req.clone().formData();
+    const email = String(form.get('email') ?? '').trim().toLowerCase();
+    const key = `${email}|${clientIp(req)}`;
+    const limiter = signInLimiter();
+    const verdict = limiter.check(key);
+    if (!verdict.allowed) {
+      return NextResponse.json(
+        errorBody('RATE_LIMITED', `Too many failed sign-ins. Wait ${verdict.retryAfterSeconds} s and try again.`),
+        { status: 429, headers: { 'Retry-After': String(verdict.retryAfterSeconds) } },
+      );
+    }
+    const response = await next();
+    if (await isFailedSignIn(response)) limiter.hit(key);
+    else limiter.reset(key);
+    return response;
+  } catch (error) {
+    return toErrorResponse(error);
+  }
+}
+
+async function isFailedSignIn(response: Response): Promise<boolean> {
+  if (response.status >= 400) return true;
+  const location = response.headers.get('location');
+  if (location) return location.includes('error=');
+  try {
+    const body = (await response.clone().json()) as { url?: string };
+    return typeof body.url === 'string' && body.url.includes('error=');
+  } catch {
+    return false;
+  }
+}

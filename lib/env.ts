@@ -1,0 +1,40 @@
+import path from 'node:path';
+import { z } from 'zod';
+
+// Read once; every server module takes configuration from here, never from process.env directly.
+const EnvSchema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  DATABASE_PATH: z.string().min(1).default('./var/stepwell.sqlite'),
+  NEXTAUTH_SECRET: z.string().min(16).optional(),
+  NEXTAUTH_URL: z.string().url().optional(),
+  APP_URL: z.string().url().default('http://localhost:3000'),
+  SMTP_URL: z.string().min(1).default('smtp://127.0.0.1:2525'),
+  MAIL_FROM: z.string().min(3).default('Stepwell <no-reply@stepwell.local>'),
+  MAIL_DIR: z.string().min(1).default('./var/mail'),
+  SESSION_MAX_AGE_S: z.coerce.number().int().positive().default(60 * 60 * 12),
+});
+
+export type Env = z.infer<typeof EnvSchema>;
+
+export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
+  const parsed = EnvSchema.safeParse(source);
+  if (!parsed.success) {
+    const problems = parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ');
+    throw new Error(`Invalid environment: ${problems}`);
+  }
+  return parsed.data;
+}
+
+export function env(): Env {
+  return readEnv(process.env);
+}
+
+export function databaseFile(): string {
+  return path.resolve(/*turbopackIgnore: true*/ process.cwd(), env().DATABASE_PATH);
+}
+
+export function authSecret(): string {
+  const secret = env().NEXTAUTH_SECRET;
+  if (!secret) throw new Error('NEXTAUTH_SECRET is not set; run `npm run dev` once or see .env.example');
+  return secret;
+}

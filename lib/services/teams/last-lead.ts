@@ -1,0 +1,12 @@
+import 'server-only';
+import { Op, type Transaction } from 'sequelize';
+import { getDb } from '../../../db';
+import { AppError } from '../../api/errors';
+
+// Every team keeps at least one lead, or nobody could manage it again.
+export async function assertAnotherLeadRemains({ teamId, userId, transaction }: { teamId: number; userId: number; transaction: Transaction }) {
+  const others = await getDb().models.Membership.count({ where: { teamId, role: 'lead', userId: { [Op.ne]: userId } }, transaction });
+  if (others === 0) {
+    throw new AppError('CONFLICT', 'This is the team’s last lead. Make someone else a lead first.');
+  }
+}

@@ -1,0 +1,8 @@
+import { loadEnvFiles } from './load-env';
+import { migrateAndSeed } from './db-tasks';
+
+loadEnvFiles();
+migrateAndSeed({ seed: true }).catch((error) => {
+  console.error(error);
+  process.exit(1);
+});

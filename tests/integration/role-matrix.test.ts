@@ -1,0 +1,108 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { getDb } from '@/db';
+import { newInvitationToken } from '@/lib/services/invitations/token';
+import { addMember, makeRoleSet } from './support/fixtures';
+import { callRoute, type CallOptions } from './support/http';
+import { HTTP_METHODS, importRoute, listRouteFiles } from './support/route-files';
+import { setupTestDb, teardownTestDb } from './support/test-db';
+
+type Caller = 'anonymous' | 'reviewer' | 'designer' | 'lead' | 'foreign';
+const CALLERS: Caller[] = ['anonymous', 'reviewer', 'designer', 'lead', 'foreign'];
+type World = Awaited<ReturnType<typeof makeRoleSet>>;
+
+interface Row {
+  route: string;
+  method: (typeof HTTP_METHODS)[number];
+  expect: Record<Caller, number> | 'next-auth';
+  prepare?: (w: World, caller: Caller) => Promise<CallOptions>;
+}
+
+const signedIn = (code: number, foreign = code) => ({ anonymous: 401, reviewer: code, designer: code, lead: code, foreign });
+const leadOnly = (code: number) => ({ anonymous: 401, reviewer: 403, designer: 403, lead: code, foreign: 404 });
+let seq = 0;
+const unique = () => `${Date.now()}-${(seq += 1)}`;
+
+async function pendingInvitation(teamId: number, invitedById: number) {
+  const { token, tokenHash } = newInvitationToken();
+  const row = await getDb().models.Invitation.create({
+    teamId, email: `invitee-${unique()}@example.test`, role: 'reviewer', tokenHash, invitedById, expiresAt: new Date(Date.now() + 86_400_000),
+  });
+  return { token, id: row.id };
+}
+
+// One row per handler and method. A handler without a row fails the coverage test below.
+const TABLE: Row[] = [
+  { route: 'auth/[...nextauth]', method: 'GET', expect: 'next-auth' },
+  { route: 'auth/[...nextauth]', method: 'POST', expect: 'next-auth' },
+  { route: 'health', method: 'GET', expect: { anonymous: 200, reviewer: 200, designer: 200, lead: 200, foreign: 200 } },
+  {
+    route: 'signup', method: 'POST', expect: { anonymous: 201, reviewer: 201, designer: 201, lead: 201, foreign: 201 },
+    prepare: async () => ({ body: { name: 'New Person', email: `new-${unique()}@example.test`, password: 'long-enough-pass', teamName: 'New team' } }),
+  },
+  { route: 'me', method: 'GET', expect: signedIn(200) },
+  { route: 'me/preferences', method: 'PATCH', expect: signedIn(200), prepare: async () => ({ body: { energyUnit: 'kcal', temperatureUnit: 'degC', pressureUnit: 'atm' } }) },
+  { route: 'me/active-team', method: 'PUT', expect: signedIn(200, 404), prepare: async (w) => ({ body: { teamId: w.teamId } }) },
+  { route: 'teams/[teamId]/members', method: 'GET', expect: signedIn(200, 404), prepare: async (w) => ({ params: { teamId: String(w.teamId) } }) },
+  {
+    route: 'teams/[teamId]/members/[userId]', method: 'PATCH', expect: leadOnly(200),
+    prepare: async (w) => ({ params: { teamId: String(w.teamId), userId: String(await addMember(w.teamId, 'reviewer')) }, body: { role: 'designer' } }),
+  },
+  {
+    route: 'teams/[teamId]/members/[userId]', method: 'DELETE', expect: leadOnly(200),
+    prepare: async (w) => ({ params: { teamId: String(w.teamId), userId: String(await addMember(w.teamId, 'reviewer')) } }),
+  },
+  { route: 'teams/[teamId]/invitations', method: 'GET', expect: leadOnly(200), prepare: async (w) => ({ params: { teamId: String(w.teamId) } }) },
+  {
+    route: 'teams/[teamId]/invitations', method: 'POST', expect: leadOnly(201),
+    prepare: async (w) => ({ params: { teamId: String(w.teamId) }, body: { email: `inv-${unique()}@example.test`, role: 'reviewer' } }),
+  },
+  {
+    route: 'teams/[teamId]/invitations/[invitationId]', method: 'DELETE', expect: leadOnly(200),
+    prepare: async (w) => ({ params: { teamId: String(w.teamId), invitationId: String((await pendingInvitation(w.teamId, w.leadId)).id) } }),
+  },
+  {
+    route: 'invitations/[token]', method: 'GET', expect: { anonymous: 200, reviewer: 200, designer: 200, lead: 200, foreign: 200 },
+    prepare: async (w) => ({ params: { token: (await pendingInvitation(w.teamId, w.leadId)).token } }),
+  },
+  {
+    // Signed-in callers are not the invited address, so they are refused.
+    route: 'invitations/[token]/accept', method: 'POST', expect: { anonymous: 200, reviewer: 403, designer: 403, lead: 403, foreign: 403 },
+    prepare: async (w) => ({ params: { token: (await pendingInvitation(w.teamId, w.leadId)).token }, body: { name: 'Invitee', password: 'long-enough-pass' } }),
+  },
+];
+
+let dir = '';
+let world: World;
+
+beforeAll(async () => {
+  process.env.SMTP_URL = 'smtp://127.0.0.1:1'; // nothing listens: invitation mail fails fast and is reported, not thrown
+  ({ dir } = await setupTestDb());
+  world = await makeRoleSet();
+});
+afterAll(async () => teardownTestDb(dir));
+
+describe('role matrix', () => {
+  it('has a row for every exported handler and no stale rows', async () => {
+    const exported: string[] = [];
+    for (const route of listRouteFiles()) {
+      const mod = await importRoute(route);
+      for (const method of HTTP_METHODS) if (typeof mod[method] === 'function') exported.push(`${method} ${route}`);
+    }
+    const listed = TABLE.map((r) => `${r.method} ${r.route}`);
+    expect(exported.filter((e) => !listed.includes(e)), 'handlers without a row').toEqual([]);
+    expect(listed.filter((l) => !exported.includes(l)), 'rows without a handler').toEqual([]);
+  });
+
+  for (const row of TABLE) {
+    if (row.expect === 'next-auth') continue; // next-auth's endpoints need a running server: covered by the e2e sign-in tests
+    const expected = row.expect;
+    it.each(CALLERS)(`${row.method} /api/${row.route} as %s`, async (caller) => {
+      const mod = await importRoute<Record<string, Parameters<typeof callRoute>[0]>>(row.route);
+      const opts = (await row.prepare?.(world, caller)) ?? {};
+      const userId = { anonymous: null, reviewer: world.reviewerId, designer: world.designerId, lead: world.leadId, foreign: world.foreignId }[caller];
+      const res = await callRoute(mod[row.method]!, { ...opts, method: row.method, userId });
+      expect(res.status, JSON.stringify(res.body)).toBe(expected[caller]);
+      if (res.status >= 400) expect(res.body).toMatchObject({ error: { code: expect.any(String), message: expect.any(String) } });
+    });
+  }
+});
