@@ -15,28 +15,29 @@ const globalForDb = globalThis as unknown as { stepwellDb?: Db };
 
 const BUSY_TIMEOUT_MS = 5000;
 
-function runPragma(connection: unknown, sql: string): Promise<void> {
-  const conn = connection as sqlite3.Database;
-  return new Promise((resolve, reject) => conn.run(sql, (err) => (err ? reject(err) : resolve())));
+// Sequelize opens one sqlite3 connection per transaction and runs no hooks for sqlite, so each
+// connection is configured here as it opens: WAL, foreign keys, a busy timeout instead of SQLITE_BUSY.
+class ConfiguredDatabase extends sqlite3.Database {
+  constructor(file: string, mode?: number, callback?: (err: Error | null) => void) {
+    super(file, mode ?? sqlite3.OPEN_READWRITE | sqlite3.OPEN_CREATE, callback);
+    this.configure('busyTimeout', BUSY_TIMEOUT_MS);
+    this.run('PRAGMA journal_mode = WAL');
+    this.run('PRAGMA foreign_keys = ON');
+    this.run('PRAGMA synchronous = NORMAL');
+  }
 }
+
+const dialectModule = { ...sqlite3, Database: ConfiguredDatabase };
 
 function createDb(file: string): Db {
   fs.mkdirSync(path.dirname(file), { recursive: true });
   const sequelize = new Sequelize({
     dialect: 'sqlite',
-    dialectModule: sqlite3,
+    dialectModule,
     storage: file,
     logging: false,
     // Each transaction gets its own connection; BEGIN IMMEDIATE avoids lock upgrades that fail with SQLITE_BUSY.
     transactionType: Transaction.TYPES.IMMEDIATE,
-    hooks: {
-      afterConnect: async (connection: unknown) => {
-        (connection as sqlite3.Database).configure('busyTimeout', BUSY_TIMEOUT_MS);
-        await runPragma(connection, 'PRAGMA journal_mode = WAL');
-        await runPragma(connection, 'PRAGMA foreign_keys = ON');
-        await runPragma(connection, 'PRAGMA synchronous = NORMAL');
-      },
-    },
   });
   return { sequelize, models: initModels(sequelize), file };
 }

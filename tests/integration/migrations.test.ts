@@ -1,0 +1,51 @@
+import { QueryTypes } from 'sequelize';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { getDb } from '@/db';
+import { migrateDownAll, migrateUp } from '@/db/migrate';
+import { MIGRATIONS } from '@/db/migrations';
+import { runSeeders } from '@/db/seeders';
+import { DEMO_USERS } from '@/db/seeders/demo-team';
+import { setupTestDb, teardownTestDb } from './support/test-db';
+
+let dir = '';
+beforeAll(async () => ({ dir } = await setupTestDb()));
+afterAll(async () => teardownTestDb(dir));
+
+async function tables(): Promise<string[]> {
+  const [rows] = await getDb().sequelize.query("SELECT name FROM sqlite_master WHERE type = 'table' ORDER BY name");
+  return (rows as { name: string }[]).map((r) => r.name);
+}
+
+describe('migrations', () => {
+  it('apply from empty and a second run applies nothing', async () => {
+    expect(await tables()).toEqual(expect.arrayContaining(['users', 'teams', 'memberships', 'invitations', 'audit_events', 'user_preferences']));
+    expect(await migrateUp(getDb().sequelize)).toEqual([]);
+  });
+
+  it('record every migration once', async () => {
+    const [rows] = await getDb().sequelize.query('SELECT name FROM schema_migrations');
+    expect((rows as { name: string }[]).map((r) => r.name)).toEqual(MIGRATIONS.map((m) => m.name));
+  });
+
+  it('go down and up again cleanly', async () => {
+    await migrateDownAll(getDb().sequelize);
+    expect(await tables()).not.toContain('users');
+    expect(await migrateUp(getDb().sequelize)).toEqual(MIGRATIONS.map((m) => m.name));
+  });
+
+  it('use WAL, foreign keys and a busy timeout', async () => {
+    const { sequelize } = getDb();
+    const pragma = async (name: string) =>
+      Object.values((await sequelize.query<Record<string, unknown>>(`PRAGMA ${name}`, { type: QueryTypes.SELECT }))[0] ?? {})[0];
+    expect(await pragma('journal_mode')).toBe('wal');
+    expect(await pragma('foreign_keys')).toBe(1);
+    expect(Number(await pragma('busy_timeout'))).toBeGreaterThanOrEqual(1000);
+  });
+
+  it('seed the demo team once, with one user per role', async () => {
+    expect(await runSeeders(getDb())).toEqual(['demo-team']);
+    expect(await runSeeders(getDb())).toEqual([]);
+    const roles = await getDb().models.Membership.findAll();
+    expect(roles.map((m) => m.role).sort()).toEqual(DEMO_USERS.map((u) => u.role).sort());
+  });
+});
