@@ -4,7 +4,7 @@ import { expectThermoError } from './expect-thermo-error';
 
 describe('element symbols', () => {
   it('knows the 118 named elements from H to Og', () => {
-    // Source: IUPAC Periodic Table of the Elements (2016 names for 113, 115, 117, 118).
+    // Source: IUPAC Periodic Table of the Elements, 118 elements through Og (from memory).
     expect(ELEMENT_SYMBOLS.size).toBe(118);
     for (const s of ['H', 'He', 'C', 'Fe', 'Hg', 'U', 'Nh', 'Mc', 'Ts', 'Og']) expect(isElementSymbol(s)).toBe(true);
   });
