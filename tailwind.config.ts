@@ -15,7 +15,7 @@ const config: Config = {
         uphill: { DEFAULT: '#a33b2b', bg: '#f6e0db' },
       },
       fontFamily: {
-        sans: ['var(--font-body)', 'system-ui', 'sans-serif'],
+        sans: ['var(--font-body)', 'var(--font-greek)', 'system-ui', 'sans-serif'],
         mono: ['ui-monospace', 'SFMono-Regular', 'Menlo', 'monospace'],
       },
     },

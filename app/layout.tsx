@@ -4,15 +4,9 @@ import type { ReactNode } from 'react';
 import { Providers } from './providers';
 import './globals.css';
 
-// Latin and Greek subsets, so ΔG° renders in the same face.
-const body = localFont({
-  src: [
-    { path: './fonts/inter-latin-wght.woff2', weight: '100 900', style: 'normal' },
-    { path: './fonts/inter-greek-wght.woff2', weight: '100 900', style: 'normal' },
-  ],
-  variable: '--font-body',
-  display: 'swap',
-});
+const body = localFont({ src: './fonts/inter-latin-wght.woff2', weight: '100 900', variable: '--font-body', display: 'swap' });
+// A separate family used only as fallback, so Δ and other Greek letters come from the same design.
+const greek = localFont({ src: './fonts/inter-greek-wght.woff2', weight: '100 900', variable: '--font-greek', display: 'swap', preload: false });
 
 export const metadata: Metadata = {
   title: { default: 'Stepwell', template: '%s · Stepwell' },
@@ -21,7 +15,7 @@ export const metadata: Metadata = {
 
 export default function RootLayout({ children }: { children: ReactNode }) {
   return (
-    <html lang="en" className={body.variable}>
+    <html lang="en" className={`${body.variable} ${greek.variable}`}>
       <body className="min-h-screen bg-paper font-sans text-ink antialiased">
         <Providers>{children}</Providers>
       </body>

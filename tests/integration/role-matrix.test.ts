@@ -34,6 +34,11 @@ async function pendingInvitation(teamId: number, invitedById: number) {
 const TABLE: Row[] = [
   { route: 'auth/[...nextauth]', method: 'GET', expect: 'next-auth' },
   { route: 'auth/[...nextauth]', method: 'POST', expect: 'next-auth' },
+  { route: 'evaluate', method: 'POST', expect: signedIn(200), prepare: async () => ({ body: { equation: 'H2(g) + 1/2 O2(g) -> H2O(l)' } }) },
+  {
+    route: 'fit', method: 'POST', expect: signedIn(200),
+    prepare: async () => ({ body: { points: [{ temperature: '500 K', lnK: 2 }, { temperature: '600 K', lnK: 1 }, { temperature: '700 K', lnK: 0.3 }] } }),
+  },
   { route: 'health', method: 'GET', expect: { anonymous: 200, reviewer: 200, designer: 200, lead: 200, foreign: 200 } },
   {
     route: 'signup', method: 'POST', expect: { anonymous: 201, reviewer: 201, designer: 201, lead: 201, foreign: 201 },

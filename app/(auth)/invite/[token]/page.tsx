@@ -18,7 +18,9 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
   } catch (error) {
     if (!(error instanceof AppError)) throw error;
   }
-  if (!invitation) return <Closed title="This invitation link is not valid">{STATUS_MESSAGES.revoked}</Closed>;
+  if (!invitation) {
+    return <Closed title="This invitation link is not valid">Check that you opened the whole link from the e-mail, or ask your team lead for a new one.</Closed>;
+  }
   if (invitation.status !== 'pending') {
     const titles = { accepted: 'Invitation already used', expired: 'Invitation expired', revoked: 'Invitation withdrawn' } as const;
     return <Closed title={titles[invitation.status]}>{STATUS_MESSAGES[invitation.status]}</Closed>;
