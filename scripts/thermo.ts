@@ -34,7 +34,10 @@ function runOne<S extends z.ZodType>(schema: S, run: (req: z.infer<S>) => unknow
   const parsed = schema.safeParse(item);
   if (!parsed.success) {
     const issue = parsed.error.issues[0];
-    const field = issue ? issue.path.map(String).join('.') : '';
+    const path = issue ? issue.path.map(String) : [];
+    // An unknown key is reported on the key itself, not on its parent object.
+    if (issue?.code === 'unrecognized_keys' && issue.keys[0] !== undefined) path.push(issue.keys[0]);
+    const field = path.join('.');
     return { error: { code: 'VALIDATION', message: issue ? `${field || 'request'}: ${issue.message}` : 'invalid request', field } };
   }
   try {

@@ -1,0 +1,26 @@
+// Request schema for evaluating one synthesis step; shared by the CLI and the API route.
+import { z } from 'zod';
+import { PositiveFinite, QuantityString, speciesMap } from './quantity';
+
+export const EvaluateRequestSchema = z.strictObject({
+  equation: z.string().trim().min(1).max(500),
+  /** default "298.15 K" */
+  temperature: QuantityString.optional(),
+  /** default "1 bar" */
+  standardPressure: z.enum(['1 bar', '1 atm']).optional(),
+  /** default true; false = constant ΔH°, ΔS° */
+  heatCapacity: z.boolean().optional(),
+  pressures: speciesMap(QuantityString).optional(),
+  concentrations: speciesMap(QuantityString).optional(),
+  /** amounts ("1 mol") or, for solutes, concentrations ("0.1 mol/L") */
+  initial: speciesMap(QuantityString).optional(),
+  /** for the equilibrium; default = standard pressure */
+  totalPressure: QuantityString.optional(),
+  /** solution volume for the equilibrium; default "1 L" */
+  volume: QuantityString.optional(),
+  electrons: PositiveFinite.max(1000).optional(),
+  fugacityCoefficients: speciesMap(PositiveFinite).optional(),
+  activityCoefficients: speciesMap(PositiveFinite).optional(),
+});
+
+export type EvaluateRequest = z.infer<typeof EvaluateRequestSchema>;

@@ -1,0 +1,111 @@
+// The built-in species library: loaded once per process from the committed JSON,
+// indexed by key (constant-time lookup) and by common name per phase.
+import libraryJson from '../../db/data/species-library.json';
+import { editDistance } from './edit-distance';
+import type { SpeciesLibraryFile, SpeciesRecord } from './species-types';
+
+export interface SpeciesLookup {
+  get(key: string): SpeciesRecord | undefined;
+  /** common name + phase or form → library key */
+  resolveAlias(name: string, phaseOrForm: string): string | undefined;
+  /** closest keys; `elements` adds keys with the same composition */
+  suggest(key: string, limit?: number, elements?: Record<string, number>): string[];
+  /** the built-in record a team species shadows, if any */
+  shadowed?(key: string): SpeciesRecord | undefined;
+}
+
+const library = libraryJson as unknown as SpeciesLibraryFile;
+
+export const libraryMeta = library.meta;
+
+const PHASE_WORDS: Record<string, string> = {
+  g: 'g', gas: 'g', vapour: 'g', vapor: 'g',
+  l: 'l', liquid: 'l', liq: 'l',
+  s: 's', solid: 's', cr: 's', c: 's',
+  aq: 'aq', aqueous: 'aq',
+};
+
+export function normaliseName(name: string): string {
+  return name.trim().toLowerCase().replace(/\s+/g, ' ');
+}
+
+function aliasKey(name: string, phaseOrForm: string): string {
+  const p = normaliseName(phaseOrForm);
+  return `${normaliseName(name)}|${PHASE_WORDS[p] ?? p}`;
+}
+
+function compositionKey(elements: Record<string, number>): string {
+  return Object.keys(elements)
+    .filter((e) => elements[e] !== 0)
+    .sort()
+    .map((e) => `${e}${elements[e]}`)
+    .join('');
+}
+
+class MapLookup implements SpeciesLookup {
+  private readonly byKey = new Map<string, SpeciesRecord>();
+  private readonly byAlias = new Map<string, string>();
+  private readonly byComposition = new Map<string, string[]>();
+
+  constructor(records: readonly SpeciesRecord[]) {
+    for (const r of records) {
+      this.byKey.set(r.key, r);
+      for (const a of r.aliases) this.byAlias.set(aliasKey(a, r.form ?? r.phase), r.key);
+      const c = compositionKey(r.elements);
+      const list = this.byComposition.get(c) ?? [];
+      list.push(r.key);
+      this.byComposition.set(c, list);
+    }
+  }
+
+  get(key: string): SpeciesRecord | undefined {
+    return this.byKey.get(key);
+  }
+
+  resolveAlias(name: string, phaseOrForm: string): string | undefined {
+    return this.byAlias.get(aliasKey(name, phaseOrForm));
+  }
+
+  keys(): IterableIterator<string> {
+    return this.byKey.keys();
+  }
+
+  suggest(key: string, limit = 5, elements?: Record<string, number>): string[] {
+    return rankSuggestions(key, [...this.byKey.keys()], elements ? this.compositionMatches(elements) : [], limit);
+  }
+
+  compositionMatches(elements: Record<string, number>): string[] {
+    return this.byComposition.get(compositionKey(elements)) ?? [];
+  }
+}
+
+function rankSuggestions(key: string, candidates: string[], sameFormula: string[], limit: number): string[] {
+  const target = key.toLowerCase();
+  const scored = candidates.map((k) => ({ k, d: editDistance(target, k.toLowerCase()) }));
+  scored.sort((x, y) => x.d - y.d || x.k.localeCompare(y.k));
+  const byDistance = scored.filter((s) => s.d <= Math.max(3, Math.ceil(target.length / 2))).map((s) => s.k);
+  const ordered = [...new Set([...sameFormula, ...byDistance])];
+  return ordered.slice(0, limit);
+}
+
+const builtin = new MapLookup(library.species);
+
+export const builtinLookup: SpeciesLookup = builtin;
+
+export function builtinSpecies(): readonly SpeciesRecord[] {
+  return library.species;
+}
+
+/** Team species shadow built-ins of the same key; the evaluation warns with code OVERRIDE. */
+export function layeredLookup(teamSpecies: readonly SpeciesRecord[], base: SpeciesLookup = builtinLookup): SpeciesLookup {
+  const team = new MapLookup(teamSpecies);
+  return {
+    get: (key) => team.get(key) ?? base.get(key),
+    resolveAlias: (name, phaseOrForm) => team.resolveAlias(name, phaseOrForm) ?? base.resolveAlias(name, phaseOrForm),
+    suggest: (key, limit = 5, elements) => {
+      const own = rankSuggestions(key, [...team.keys()], elements ? team.compositionMatches(elements) : [], limit);
+      return [...new Set([...own, ...base.suggest(key, limit, elements)])].slice(0, limit);
+    },
+    shadowed: (key) => (team.get(key) ? base.get(key) : undefined),
+  };
+}

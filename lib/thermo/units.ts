@@ -1,0 +1,101 @@
+// Quantity strings at the request boundary ("700 K", "25 degC", "2 bar") → plain numbers in the
+// engine's units (K, bar, mol/L, mol, L, kJ). Everything past this file is unit-free.
+import { create, createUnitDependencies, unitDependencies, type Unit } from 'mathjs';
+import { ThermoError } from './errors';
+
+// A private instance, so the units we add do not leak into other users of mathjs.
+// (The typings declare the dependency maps possibly undefined; they never are.)
+if (!unitDependencies || !createUnitDependencies) throw new Error('mathjs unit factories missing');
+const math = create({ unitDependencies, createUnitDependencies });
+math.createUnit('cal', { definition: '4.184 J', prefixes: 'short' });
+math.createUnit('M', { definition: '1 mol/L', prefixes: 'short' });
+
+export type QuantityKind = 'temperature' | 'pressure' | 'concentration' | 'amount' | 'volume' | 'energy';
+
+interface KindSpec {
+  target: string;
+  reference: Unit;
+  accepted: string;
+  example: string;
+}
+
+const KINDS: Record<QuantityKind, KindSpec> = {
+  temperature: { target: 'K', reference: math.unit('1 K'), accepted: 'K, degC, degF', example: '700 K' },
+  pressure: { target: 'bar', reference: math.unit('1 bar'), accepted: 'bar, atm, kPa, Pa, mmHg, psi', example: '2 bar' },
+  concentration: { target: 'mol/L', reference: math.unit('1 mol/L'), accepted: 'mol/L, mmol/L, M', example: '0.1 mol/L' },
+  amount: { target: 'mol', reference: math.unit('1 mol'), accepted: 'mol, mmol, kmol', example: '1 mol' },
+  volume: { target: 'L', reference: math.unit('1 L'), accepted: 'L, mL, m^3', example: '1 L' },
+  energy: { target: 'kJ', reference: math.unit('1 kJ'), accepted: 'J, kJ, kcal', example: '10 kJ' },
+};
+
+// Typographic spellings people paste in.
+function normalise(text: string): string {
+  return text
+    .trim()
+    .replace(/°\s*C\b/g, 'degC')
+    .replace(/°\s*F\b/g, 'degF')
+    .replace(/\bcelsius\b/gi, 'degC')
+    .replace(/\bfahrenheit\b/gi, 'degF')
+    .replace(/\u2212/g, '-');
+}
+
+const NUMBER_ONLY = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
+
+/** Parses a quantity of the given kind and returns it in the kind's engine unit. */
+export function parseQuantity(text: string, kind: QuantityKind, field: string): number {
+  const spec = KINDS[kind];
+  if (typeof text !== 'string') {
+    throw new ThermoError('INVALID_UNIT', `${field}: expected a quantity string such as "${spec.example}"`, {
+      field,
+      hint: `write the value with a unit (${spec.accepted})`,
+    });
+  }
+  const s = normalise(text);
+  if (NUMBER_ONLY.test(s)) {
+    throw new ThermoError('INVALID_UNIT', `${field}: "${text}" has no unit`, {
+      field,
+      hint: `add a unit, e.g. "${s} ${spec.target}" (accepted: ${spec.accepted})`,
+    });
+  }
+  let u: Unit;
+  try {
+    u = math.unit(s);
+  } catch (err) {
+    const reason = err instanceof Error ? err.message : String(err);
+    throw new ThermoError('INVALID_UNIT', `${field}: cannot read "${text}" as a ${kind} (${reason})`, {
+      field,
+      hint: `write a number and a unit, e.g. "${spec.example}" (accepted: ${spec.accepted})`,
+    });
+  }
+  if (u.value === null || !u.equalBase(spec.reference)) {
+    throw new ThermoError('INVALID_UNIT', `${field}: "${text}" is not a ${kind}`, {
+      field,
+      hint: `use one of ${spec.accepted}, e.g. "${spec.example}"`,
+    });
+  }
+  const value = u.toNumber(spec.target);
+  if (!Number.isFinite(value)) {
+    throw new ThermoError('INVALID_VALUE', `${field}: "${text}" is not a finite number`, { field });
+  }
+  return value;
+}
+
+export const parseTemperature = (text: string, field = 'temperature'): number => parseQuantity(text, 'temperature', field);
+export const parsePressure = (text: string, field = 'pressure'): number => parseQuantity(text, 'pressure', field);
+export const parseConcentration = (text: string, field = 'concentration'): number =>
+  parseQuantity(text, 'concentration', field);
+export const parseAmount = (text: string, field = 'amount'): number => parseQuantity(text, 'amount', field);
+export const parseVolume = (text: string, field = 'volume'): number => parseQuantity(text, 'volume', field);
+export const parseEnergy = (text: string, field = 'energy'): number => parseQuantity(text, 'energy', field);
+
+/** What a quantity string measures, or undefined if it is none of our kinds. */
+export function quantityKindOf(text: string): QuantityKind | undefined {
+  let u: Unit;
+  try {
+    u = math.unit(normalise(text));
+  } catch {
+    return undefined;
+  }
+  if (u.value === null) return undefined;
+  return (Object.keys(KINDS) as QuantityKind[]).find((k) => u.equalBase(KINDS[k].reference));
+}

@@ -1,0 +1,18 @@
+// The committed library must be exactly what the build script makes from the shared data.
+import { spawnSync } from 'node:child_process';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+
+const ROOT = path.resolve(__dirname, '../../..');
+
+describe('scripts/build-species-library.ts', () => {
+  it('reproduces db/data/species-library.json byte for byte', () => {
+    const r = spawnSync(path.join(ROOT, 'node_modules/.bin/tsx'), ['scripts/build-species-library.ts', '--check'], {
+      cwd: ROOT,
+      encoding: 'utf8',
+      timeout: 60000,
+    });
+    expect(r.stdout).toMatch(/up to date/);
+    expect(r.status).toBe(0);
+  });
+});

@@ -1,0 +1,71 @@
+// The thermo CLI as a user runs it: JSON on stdin, pretty JSON on stdout, exit codes.
+import { spawnSync } from 'node:child_process';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+
+const ROOT = path.resolve(__dirname, '../../..');
+const TSX = path.join(ROOT, 'node_modules/.bin/tsx');
+
+function run(args: string[], stdin: string): { status: number | null; stdout: string; stderr: string } {
+  const r = spawnSync(TSX, ['scripts/thermo.ts', ...args], { cwd: ROOT, input: stdin, encoding: 'utf8', timeout: 60000 });
+  return { status: r.status, stdout: r.stdout, stderr: r.stderr };
+}
+
+describe('thermo CLI', () => {
+  it('evaluates a single request (NBS 1982: ΔfG°(H2O,l) = −237.129 kJ/mol)', () => {
+    const r = run(['evaluate'], JSON.stringify({ equation: 'H2(g) + 1/2 O2(g) -> H2O(l)', temperature: '25 degC' }));
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout) as { deltaG0_kJ: number; equation: string };
+    expect(out.deltaG0_kJ).toBe(-237.129);
+    expect(out.equation).toBe('H2(g) + 1/2 O2(g) ⇌ H2O(l)');
+    expect(r.stdout).toContain('\n  "'); // pretty-printed
+  });
+
+  it('answers an array item by item, a failing item as an error in its place', () => {
+    const items = [
+      { equation: 'N2(g) + 3 H2(g) -> 2 NH3(g)' },
+      { equation: 'H2(g) + O2(g) -> H2O(l)' },
+      { equation: 'N2(g) + 3 H2(g) -> 2 NH3(g)', temperature: 300 },
+      { equation: 'N2(g) + 3 H2(g) -> 2 NH3(g)', colour: 'blue' },
+    ];
+    const r = run(['evaluate'], JSON.stringify(items));
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout) as { deltaG0_kJ?: number; error?: { code: string; field: string; message: string } }[];
+    expect(out).toHaveLength(4);
+    expect(out[0]!.deltaG0_kJ).toBeCloseTo(-32.9, 9);
+    expect(out[1]!.error).toMatchObject({ code: 'UNBALANCED', field: 'equation' });
+    expect(out[2]!.error).toMatchObject({ code: 'VALIDATION', field: 'temperature' });
+    expect(out[3]!.error).toMatchObject({ code: 'VALIDATION', field: 'colour' });
+  });
+
+  it('exits 2 with a message on stderr when stdin is not JSON', () => {
+    const r = run(['evaluate'], 'not json {');
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/not JSON/);
+    expect(r.stdout).toBe('');
+  });
+
+  it('exits 2 with usage for an unknown subcommand', () => {
+    const r = run(['plot'], '{}');
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/usage:/);
+  });
+
+  it('fits ln K against 1/T', () => {
+    // points from ΔH° = −50 kJ/mol, ΔS° = −100 J/(mol K) with R = 8.314462618
+    const lnK = (T: number): number => 50000 / (8.314462618 * T) - 100 / 8.314462618;
+    const request = { points: [300, 400, 500, 600].map((T) => ({ temperature: `${T} K`, lnK: lnK(T) })), predictAt: ['450 K'] };
+    const r = run(['fit'], JSON.stringify(request));
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout) as { deltaH0_kJ: number; deltaS0_J_per_K: number; predictions: { lnK: number }[] };
+    expect(out.deltaH0_kJ).toBeCloseTo(-50, 9);
+    expect(out.deltaS0_J_per_K).toBeCloseTo(-100, 8);
+    expect(out.predictions[0]!.lnK).toBeCloseTo(lnK(450), 9);
+  });
+
+  it('reports a fit with too few points as INVALID_VALUE', () => {
+    const r = run(['fit'], JSON.stringify({ points: [{ temperature: '300 K', K: 2 }] }));
+    expect(r.status).toBe(0);
+    expect((JSON.parse(r.stdout) as { error: { code: string } }).error.code).toBe('INVALID_VALUE');
+  });
+});
