@@ -1,5 +1,6 @@
 import type { QueryInterface } from 'sequelize';
 import * as coreTables from './20261201-0001-core-tables';
+import * as routesStepsLinks from './20261201-0002-routes-steps-links';
 
 export interface MigrationModule {
   up(params: { context: QueryInterface }): Promise<void>;
@@ -9,4 +10,5 @@ export interface MigrationModule {
 // Listed explicitly (not globbed) so the same list runs under tsx, vitest and the app bundle. Append only.
 export const MIGRATIONS: ReadonlyArray<{ name: string; module: MigrationModule }> = [
   { name: '20261201-0001-core-tables', module: coreTables },
+  { name: '20261201-0002-routes-steps-links', module: routesStepsLinks },
 ];

@@ -1,7 +1,11 @@
 import type { Sequelize } from 'sequelize';
 import { initAuditEvent } from './audit-event';
+import { initDriverReaction } from './driver-reaction';
 import { initInvitation } from './invitation';
 import { initMembership } from './membership';
+import { initRoute } from './route';
+import { initStep } from './step';
+import { initStepLink } from './step-link';
 import { initTeam } from './team';
 import { initUser } from './user';
 import { initUserPreference } from './user-preference';
@@ -13,13 +17,22 @@ export function initModels(sequelize: Sequelize) {
   const Invitation = initInvitation(sequelize);
   const AuditEvent = initAuditEvent(sequelize);
   const UserPreference = initUserPreference(sequelize);
+  const Route = initRoute(sequelize);
+  const Step = initStep(sequelize);
+  const StepLink = initStepLink(sequelize);
+  const DriverReaction = initDriverReaction(sequelize);
 
   Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
   Invitation.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
   Invitation.belongsTo(User, { foreignKey: 'invitedById', as: 'invitedBy' });
 
-  return { User, Team, Membership, Invitation, AuditEvent, UserPreference };
+  Route.belongsTo(User, { foreignKey: 'updatedById', as: 'updatedBy' });
+  Route.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+  Route.hasMany(Step, { foreignKey: 'routeId', as: 'steps' });
+  Route.hasMany(StepLink, { foreignKey: 'routeId', as: 'links' });
+
+  return { User, Team, Membership, Invitation, AuditEvent, UserPreference, Route, Step, StepLink, DriverReaction };
 }
 
 export type Models = ReturnType<typeof initModels>;

@@ -3,6 +3,7 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 export class Team extends Model<InferAttributes<Team>, InferCreationAttributes<Team>> {
   declare id: CreationOptional<number>;
   declare name: string;
+  declare driversSeededAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -12,6 +13,7 @@ export function initTeam(sequelize: Sequelize): typeof Team {
     {
       id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
       name: { type: DataTypes.STRING(120), allowNull: false },
+      driversSeededAt: { type: DataTypes.DATE, allowNull: true, field: 'drivers_seeded_at' },
       createdAt: { type: DataTypes.DATE, field: 'created_at' },
       updatedAt: { type: DataTypes.DATE, field: 'updated_at' },
     },

@@ -15,7 +15,7 @@ export function zodFields(error: z.ZodError): Record<string, string> {
 // The one place an exception becomes an HTTP answer; a 500 never carries a stack.
 export function toErrorResponse(error: unknown): Response {
   if (error instanceof AppError) {
-    return NextResponse.json(errorBody(error.code, error.message, error.fields), { status: error.status, headers: error.headers });
+    return NextResponse.json(errorBody(error.code, error.message, error.fields, error.details), { status: error.status, headers: error.headers });
   }
   if (error instanceof ThermoError) {
     const fields = error.field ? { [error.field]: error.message } : undefined;

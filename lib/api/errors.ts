@@ -16,7 +16,7 @@ export const ERROR_STATUS = {
 export type ErrorCode = keyof typeof ERROR_STATUS;
 
 export interface ErrorBody {
-  error: { code: string; message: string; fields?: Record<string, string> };
+  error: { code: string; message: string; fields?: Record<string, string>; details?: Record<string, unknown> };
 }
 
 export class AppError extends Error {
@@ -43,6 +43,9 @@ export class AppError extends Error {
   }
 }
 
-export function errorBody(code: string, message: string, fields?: Record<string, string>): ErrorBody {
-  return { error: fields && Object.keys(fields).length > 0 ? { code, message, fields } : { code, message } };
+export function errorBody(code: string, message: string, fields?: Record<string, string>, details?: Record<string, unknown>): ErrorBody {
+  const error: ErrorBody['error'] = { code, message };
+  if (fields && Object.keys(fields).length > 0) error.fields = fields;
+  if (details) error.details = details;
+  return { error };
 }

@@ -14,8 +14,8 @@ type Access = 'public' | 'user' | 'team';
 interface RouteOptions<B extends z.ZodType | undefined, Q extends z.ZodType | undefined, A extends Access> {
   access: A;
   permission?: Permission;
-  /** Where the team comes from: the `teamId` path segment, or the user's active team. */
-  teamFrom?: 'path' | 'active';
+  /** Where the team comes from: the `teamId` path segment, the user's active team, or the team owning a resource. */
+  teamFrom?: TeamSource;
   body?: B;
   query?: Q;
   maxBodyBytes?: number;
@@ -29,6 +29,10 @@ export interface RouteContext<B, Q, A extends Access> {
   user: A extends 'public' ? SessionUser | null : SessionUser;
   team: A extends 'team' ? TeamContext : null;
 }
+
+/** Finds the team that owns the resource named in the path, or null when there is none. */
+export type TeamOfResource = (params: Record<string, string>) => Promise<number | null>;
+type TeamSource = 'path' | 'active' | TeamOfResource;
 
 type NextContext = { params: Promise<Record<string, string | string[]>> };
 
@@ -71,17 +75,18 @@ async function requireUser(req: NextRequest): Promise<SessionUser> {
 async function resolveTeam(
   user: SessionUser,
   params: Record<string, string>,
-  options: { permission?: Permission; teamFrom?: 'path' | 'active' },
+  options: { permission?: Permission; teamFrom?: TeamSource },
 ): Promise<TeamContext> {
+  const source = options.teamFrom ?? 'active';
   let team: TeamContext | null;
-  if (options.teamFrom === 'path') {
-    const teamId = Number(params.teamId);
-    // Not a member looks exactly like no such team.
-    team = Number.isInteger(teamId) && teamId > 0 ? await findMembership({ userId: user.id, teamId }) : null;
-  } else {
+  if (source === 'active') {
     team = await findActiveMembership({ userId: user.id });
+  } else {
+    const teamId = source === 'path' ? Number(params.teamId) : await source(params);
+    // Not a member looks exactly like nothing there.
+    team = teamId && Number.isInteger(teamId) && teamId > 0 ? await findMembership({ userId: user.id, teamId }) : null;
   }
-  if (!team) throw new AppError('NOT_FOUND', 'No such team.');
+  if (!team) throw new AppError('NOT_FOUND', typeof source === 'function' ? 'Not found.' : 'No such team.');
   if (options.permission && !can(team.role, options.permission)) {
     throw new AppError('FORBIDDEN', 'Your role in this team does not allow this.');
   }

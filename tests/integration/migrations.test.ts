@@ -43,7 +43,7 @@ describe('migrations', () => {
   });
 
   it('seed the demo team once, with one user per role', async () => {
-    expect(await runSeeders(getDb())).toEqual(['demo-team']);
+    expect(await runSeeders(getDb())).toEqual(['demo-team', 'demo-routes']);
     expect(await runSeeders(getDb())).toEqual([]);
     const roles = await getDb().models.Membership.findAll();
     expect(roles.map((m) => m.role).sort()).toEqual(DEMO_USERS.map((u) => u.role).sort());

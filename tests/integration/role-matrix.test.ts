@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { getDb } from '@/db';
 import { newInvitationToken } from '@/lib/services/invitations/token';
-import { addMember, makeRoleSet } from './support/fixtures';
+import { addMember, makeRoleSet, makeRoute, SAMPLE_LINKS, SAMPLE_STEPS } from './support/fixtures';
 import { callRoute, type CallOptions } from './support/http';
 import { HTTP_METHODS, importRoute, listRouteFiles } from './support/route-files';
 import { setupTestDb, teardownTestDb } from './support/test-db';
@@ -19,6 +19,12 @@ interface Row {
 
 const signedIn = (code: number, foreign = code) => ({ anonymous: 401, reviewer: code, designer: code, lead: code, foreign });
 const leadOnly = (code: number) => ({ anonymous: 401, reviewer: 403, designer: 403, lead: code, foreign: 404 });
+// Writes in the caller's own team: a foreign lead succeeds in theirs.
+const editorsOwnTeam = (code: number) => ({ anonymous: 401, reviewer: 403, designer: code, lead: code, foreign: code });
+// Writes to a resource of the main team: a foreign caller must not learn it exists.
+const editorsOfResource = (code: number) => ({ anonymous: 401, reviewer: 403, designer: code, lead: code, foreign: 404 });
+const readersOfResource = (code: number) => ({ anonymous: 401, reviewer: code, designer: code, lead: code, foreign: 404 });
+const routeParams = async (w: World) => ({ routeId: String((await makeRoute(w.teamId, w.leadId)).id) });
 let seq = 0;
 const unique = () => `${Date.now()}-${(seq += 1)}`;
 
@@ -39,6 +45,31 @@ const TABLE: Row[] = [
     route: 'fit', method: 'POST', expect: signedIn(200),
     prepare: async () => ({ body: { points: [{ temperature: '500 K', lnK: 2 }, { temperature: '600 K', lnK: 1 }, { temperature: '700 K', lnK: 0.3 }] } }),
   },
+  { route: 'balance', method: 'POST', expect: signedIn(200), prepare: async () => ({ body: { equation: 'H2(g) + O2(g) -> H2O(l)' } }) },
+  { route: 'palette', method: 'GET', expect: signedIn(200), prepare: async () => ({ path: '/api/palette?species=H2(g)' }) },
+  { route: 'drivers', method: 'GET', expect: signedIn(200) },
+  { route: 'drivers', method: 'POST', expect: editorsOwnTeam(201), prepare: async () => ({ body: { name: 'Hydrogen burn', equation: 'H2(g) + 1/2 O2(g) -> H2O(l)' } }) },
+  {
+    route: 'drivers/[driverId]', method: 'DELETE', expect: editorsOfResource(200),
+    prepare: async (w) => {
+      const { createDriver } = await import('@/lib/services/drivers/create-driver');
+      const driver = await createDriver({ teamId: w.teamId, userId: w.leadId, input: { name: 'CO burn', equation: 'CO(g) + 1/2 O2(g) -> CO2(g)', basis: '' } });
+      return { params: { driverId: driver.id } };
+    },
+  },
+  { route: 'routes', method: 'GET', expect: signedIn(200), prepare: async () => ({ path: '/api/routes?sort=name&dir=asc' }) },
+  { route: 'routes', method: 'POST', expect: editorsOwnTeam(201), prepare: async () => ({ body: { name: 'New', target: 'NH3(g)', targetAmount: '1 mol' } }) },
+  { route: 'routes/[routeId]', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: await routeParams(w) }) },
+  {
+    route: 'routes/[routeId]', method: 'PUT', expect: editorsOfResource(200),
+    prepare: async (w) => {
+      const route = await makeRoute(w.teamId, w.leadId, false);
+      return { params: { routeId: String(route.id) }, body: { version: route.version, name: 'Edited', target: 'CH3OH(g)', targetAmount: '1 mol', marginalThreshold_kJ: -17, steps: SAMPLE_STEPS, links: SAMPLE_LINKS } };
+    },
+  },
+  { route: 'routes/[routeId]/duplicate', method: 'POST', expect: editorsOfResource(201), prepare: async (w) => ({ params: await routeParams(w), body: {} }) },
+  { route: 'routes/[routeId]/archive', method: 'POST', expect: editorsOfResource(200), prepare: async (w) => ({ params: await routeParams(w), body: { archived: true } }) },
+  { route: 'routes/[routeId]/evaluate', method: 'POST', expect: readersOfResource(200), prepare: async (w) => ({ params: await routeParams(w) }) },
   { route: 'health', method: 'GET', expect: { anonymous: 200, reviewer: 200, designer: 200, lead: 200, foreign: 200 } },
   {
     route: 'signup', method: 'POST', expect: { anonymous: 201, reviewer: 201, designer: 201, lead: 201, foreign: 201 },

@@ -27,3 +27,26 @@ export async function makeRoleSet() {
   const foreign = await makeTeamWithLead('other');
   return { teamId: main.teamId, leadId: main.leadId, designerId, reviewerId, foreignId: foreign.leadId, foreignTeamId: foreign.teamId };
 }
+
+export const SAMPLE_STEPS = [
+  { id: 's1', equation: 'CH4(g) + H2O(g) -> CO(g) + 3 H2(g)', temperature: '1100 K', yieldPct: 100, notes: '', position: { x: 0, y: 0 } },
+  { id: 's2', equation: 'CO(g) + 2 H2(g) -> CH3OH(g)', temperature: '298.15 K', yieldPct: 100, notes: '', position: { x: 300, y: 0 } },
+];
+export const SAMPLE_LINKS = [
+  { from: 's1', to: 's2', species: 'CO(g)' },
+  { from: 's1', to: 's2', species: 'H2(g)' },
+];
+
+export async function makeRoute(teamId: number, userId: number, withSteps = true) {
+  const { createRoute } = await import('@/lib/services/routes/create-route');
+  const { saveRoute } = await import('@/lib/services/routes/save-route');
+  const route = await createRoute({ teamId, userId, input: { name: `Route ${(counter += 1)}`, target: 'CH3OH(g)', targetAmount: '1 mol' } });
+  if (!withSteps) return route;
+  const saved = await saveRoute({
+    teamId,
+    userId,
+    routeId: route.id,
+    input: { version: route.version, name: route.name, target: route.target, targetAmount: '1 mol', marginalThreshold_kJ: -17, steps: SAMPLE_STEPS, links: SAMPLE_LINKS },
+  });
+  return saved.route;
+}

@@ -1,0 +1,9 @@
+// DELETE /api/drivers/[driverId]: remove a driver reaction from the team's list
+import { withRoute } from '@/lib/api/with-route';
+import { deleteDriver } from '@/lib/services/drivers/delete-driver';
+
+export const runtime = 'nodejs';
+
+export const DELETE = withRoute({ access: 'team', permission: 'route.edit' }, async ({ team, user, params }) =>
+  deleteDriver({ teamId: team.id, userId: user.id, driverId: Number(params.driverId) || 0 }),
+);

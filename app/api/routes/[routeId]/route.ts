@@ -1,0 +1,18 @@
+// GET/PUT /api/routes/[routeId]: read a route, or save the whole document against its version (409 when stale)
+import { withRoute } from '@/lib/api/with-route';
+import { SaveRouteInput } from '@/lib/schemas/route';
+import { getRoute } from '@/lib/services/routes/get-route';
+import { teamOfRoute } from '@/lib/services/routes/route-team';
+import { saveRoute } from '@/lib/services/routes/save-route';
+
+export const runtime = 'nodejs';
+export const dynamic = 'force-dynamic';
+
+export const GET = withRoute({ access: 'team', teamFrom: teamOfRoute, permission: 'route.read' }, async ({ team, params }) =>
+  getRoute({ teamId: team.id, routeId: Number(params.routeId) }),
+);
+
+export const PUT = withRoute(
+  { access: 'team', teamFrom: teamOfRoute, permission: 'route.edit', body: SaveRouteInput, maxBodyBytes: 2 * 1024 * 1024 },
+  async ({ team, user, params, body }) => saveRoute({ teamId: team.id, userId: user.id, routeId: Number(params.routeId), input: body }),
+);

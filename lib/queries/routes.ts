@@ -1,0 +1,97 @@
+import { keepPreviousData, queryOptions } from '@tanstack/react-query';
+import type { ListRoutesQuery, RouteDraft, SaveRouteInput } from '../schemas/route';
+import type { LibraryReaction } from '../services/routes/search-library-reactions';
+import type { RouteDocumentDto, RouteSummaryDto } from '../services/routes/route-dto';
+import type { BalanceCheck } from '../services/thermo/check-equation-balance';
+import type { RouteEvaluateResponse } from '../thermo/route';
+import { apiFetch } from './api-fetch';
+
+export interface RouteListPage {
+  items: RouteSummaryDto[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+export interface RouteEvaluationAnswer {
+  version: number;
+  draft: boolean;
+  evaluation: RouteEvaluateResponse;
+}
+
+/** PUT's evaluation is the engine's answer, or why the route as a whole could not be evaluated. */
+export interface SaveRouteAnswer {
+  route: RouteDocumentDto;
+  evaluation: RouteEvaluateResponse | { error: { code: string; message: string; field: string | null } };
+}
+
+export type BalanceAnswer = BalanceCheck | { error: { code: string; message: string; position: number | null } };
+
+export interface PaletteAnswer {
+  recent: string[];
+  library: LibraryReaction[];
+}
+
+export const routeKeys = {
+  all: ['routes'] as const,
+  lists: () => [...routeKeys.all, 'list'] as const,
+  list: (query: Partial<ListRoutesQuery>) => [...routeKeys.lists(), query] as const,
+  detail: (routeId: number) => [...routeKeys.all, 'detail', routeId] as const,
+  evaluations: (routeId: number) => [...routeKeys.all, 'evaluation', routeId] as const,
+  /** keyed by a hash of the draft's engine fields, so moving a node never re-evaluates */
+  evaluation: (routeId: number, draftHash: string) => [...routeKeys.evaluations(routeId), draftHash] as const,
+  palette: (species: string) => [...routeKeys.all, 'palette', species] as const,
+  balance: (equation: string) => ['balance', equation] as const,
+  drivers: () => ['drivers'] as const,
+};
+
+export const routeListQuery = (query: Partial<ListRoutesQuery>) =>
+  queryOptions({
+    queryKey: routeKeys.list(query),
+    queryFn: () => {
+      const params = new URLSearchParams(Object.entries(query).filter(([, v]) => v !== undefined && v !== '').map(([k, v]) => [k, String(v)]));
+      return apiFetch<RouteListPage>(`/api/routes?${params.toString()}`);
+    },
+    placeholderData: (previous) => previous,
+  });
+
+export const routeDetailQuery = (routeId: number) =>
+  queryOptions({ queryKey: routeKeys.detail(routeId), queryFn: () => apiFetch<RouteDocumentDto>(`/api/routes/${routeId}`) });
+
+// The previous ladder stays on screen (placeholder) while the next draft evaluates.
+export const routeEvaluationQuery = (routeId: number, draftHash: string, draft: RouteDraft) =>
+  queryOptions({
+    queryKey: routeKeys.evaluation(routeId, draftHash),
+    queryFn: () => apiFetch<RouteEvaluationAnswer>(`/api/routes/${routeId}/evaluate`, { method: 'POST', body: draft }),
+    placeholderData: keepPreviousData,
+    staleTime: Infinity,
+    gcTime: 60_000,
+    retry: false,
+  });
+
+export const balanceQuery = (equation: string) =>
+  queryOptions({
+    queryKey: routeKeys.balance(equation),
+    queryFn: () => apiFetch<BalanceAnswer>('/api/balance', { method: 'POST', body: { equation } }),
+    staleTime: Infinity,
+    retry: false,
+  });
+
+export const paletteQuery = (species: string) =>
+  queryOptions({
+    queryKey: routeKeys.palette(species),
+    queryFn: () => apiFetch<PaletteAnswer>(`/api/palette${species ? `?species=${encodeURIComponent(species)}` : ''}`),
+    placeholderData: keepPreviousData,
+  });
+
+export const createRoute = (input: { name: string; target: string; targetAmount: string }) =>
+  apiFetch<RouteDocumentDto>('/api/routes', { method: 'POST', body: input });
+
+export const saveRoute = (routeId: number, input: SaveRouteInput) =>
+  apiFetch<SaveRouteAnswer>(`/api/routes/${routeId}`, { method: 'PUT', body: input });
+
+export const duplicateRoute = (routeId: number, name?: string) =>
+  apiFetch<RouteDocumentDto>(`/api/routes/${routeId}/duplicate`, { method: 'POST', body: name ? { name } : {} });
+
+export const setRouteArchived = (routeId: number, archived: boolean) =>
+  apiFetch<unknown>(`/api/routes/${routeId}/archive`, { method: 'POST', body: { archived } });

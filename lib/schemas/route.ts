@@ -1,0 +1,66 @@
+import { z } from 'zod';
+import { PositiveFinite, QuantityString, SpeciesName, speciesMap } from './quantity';
+
+export const MAX_ROUTE_STEPS = 500;
+export const ROUTE_STATUSES = ['draft'] as const;
+export const DEFAULT_MARGINAL_THRESHOLD_KJ = -17;
+
+const Quantity = z.union([QuantityString, z.literal('')]);
+export const StepKey = z.string().regex(/^[A-Za-z0-9_-]{1,64}$/, { message: 'Use letters, digits, - or _ (at most 64).' });
+
+// A step as the editor saves it: every field of an evaluate request, plus yield, position and notes.
+// The equation may be blank or unfinished while someone is still typing; evaluation reports it per step.
+export const StepInput = z.strictObject({
+  id: StepKey,
+  equation: z.string().max(500),
+  temperature: Quantity.optional(),
+  standardPressure: z.enum(['1 bar', '1 atm']).optional(),
+  heatCapacity: z.boolean().optional(),
+  pressures: speciesMap(QuantityString).optional(),
+  concentrations: speciesMap(QuantityString).optional(),
+  initial: speciesMap(QuantityString).optional(),
+  totalPressure: Quantity.optional(),
+  electrons: PositiveFinite.max(1000).optional(),
+  yieldPct: z.number().gt(0, { message: 'Yield must be above 0 %.' }).max(100, { message: 'Yield is at most 100 %.' }).default(100),
+  notes: z.string().max(4000).default(''),
+  position: z.strictObject({ x: z.number().finite(), y: z.number().finite() }).default({ x: 0, y: 0 }),
+});
+export type StepInput = z.infer<typeof StepInput>;
+
+export const LinkInput = z.strictObject({ from: StepKey, to: StepKey, species: SpeciesName });
+export type LinkInput = z.infer<typeof LinkInput>;
+
+export const RouteMeta = z.strictObject({
+  name: z.string().trim().min(1, { message: 'Name the route.' }).max(160),
+  target: z.string().trim().min(1, { message: 'Name the target species, e.g. CH3OH(g).' }).max(120),
+  targetAmount: QuantityString.default('1 mol'),
+  marginalThreshold_kJ: z.number().finite().max(0, { message: 'The threshold is zero or negative.' }).min(-500).default(DEFAULT_MARGINAL_THRESHOLD_KJ),
+});
+
+export const CreateRouteInput = RouteMeta.pick({ name: true, target: true, targetAmount: true });
+export type CreateRouteInput = z.infer<typeof CreateRouteInput>;
+
+export const SaveRouteInput = RouteMeta.extend({
+  version: z.number().int().positive(),
+  steps: z.array(StepInput).max(MAX_ROUTE_STEPS, { message: `A route has at most ${MAX_ROUTE_STEPS} steps.` }),
+  links: z.array(LinkInput).max(MAX_ROUTE_STEPS * 4),
+});
+export type SaveRouteInput = z.infer<typeof SaveRouteInput>;
+
+export const DuplicateRouteInput = z.strictObject({ name: z.string().trim().min(1).max(160).optional() });
+
+export const ROUTE_SORTS = ['name', 'target', 'updatedAt', 'steps', 'overallDeltaG', 'uphillSteps'] as const;
+export const ListRoutesQuery = z.object({
+  q: z.string().trim().max(120).optional(),
+  sort: z.enum(ROUTE_SORTS).default('updatedAt'),
+  dir: z.enum(['asc', 'desc']).default('desc'),
+  page: z.coerce.number().int().min(1).max(100_000).default(1),
+  pageSize: z.coerce.number().int().min(1).max(100).default(25),
+  archived: z.enum(['0', '1']).default('0'),
+});
+export type ListRoutesQuery = z.infer<typeof ListRoutesQuery>;
+
+// Evaluate the saved route (empty body), or an unsaved draft of it.
+export const RouteDraft = RouteMeta.extend({ steps: SaveRouteInput.shape.steps, links: SaveRouteInput.shape.links });
+export const RouteDraftBody = RouteDraft.optional();
+export type RouteDraft = z.infer<typeof RouteDraft>;

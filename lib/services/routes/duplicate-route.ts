@@ -1,0 +1,34 @@
+import 'server-only';
+import { getDb } from '../../../db';
+import { recordEvent } from '../audit/record-event';
+import { getRoute } from './get-route';
+import { stepRow } from './route-dto';
+
+// An alternative starts as a full copy that remembers where it came from.
+export async function duplicateRoute({ teamId, userId, routeId, name }: { teamId: number; userId: number; routeId: number; name?: string }) {
+  const { sequelize, models } = getDb();
+  return sequelize.transaction(async (transaction) => {
+    const source = await getRoute({ teamId, routeId, transaction });
+    const sourceRow = await models.Route.findByPk(routeId, { transaction });
+    const copy = await models.Route.create(
+      {
+        teamId,
+        name: name ?? `${source.name} (alternative)`,
+        target: source.target,
+        targetAmount: source.targetAmount,
+        marginalThresholdKj: source.marginalThreshold_kJ,
+        originRouteId: source.id,
+        createdById: userId,
+        updatedById: userId,
+        stepCount: sourceRow?.stepCount ?? source.steps.length,
+        overallDgKj: sourceRow?.overallDgKj ?? null,
+        uphillSteps: sourceRow?.uphillSteps ?? null,
+      },
+      { transaction },
+    );
+    await models.Step.bulkCreate(source.steps.map((s, i) => stepRow(s, copy.id, i)), { transaction });
+    await models.StepLink.bulkCreate(source.links.map((l) => ({ routeId: copy.id, fromKey: l.from, toKey: l.to, species: l.species })), { transaction });
+    await recordEvent({ teamId, actorId: userId, action: 'route.duplicated', targetType: 'route', targetId: copy.id, data: { from: routeId } }, transaction);
+    return getRoute({ teamId, routeId: copy.id, transaction });
+  });
+}

@@ -1,0 +1,43 @@
+import { ThermoError } from '../../thermo/errors';
+import { evaluateRoute, type DriverReaction, type RouteEvaluateResponse } from '../../thermo/route';
+import type { LinkInput, StepInput } from '../../schemas/route';
+
+interface RouteLike {
+  target: string;
+  targetAmount: string;
+  marginalThreshold_kJ: number;
+  steps: StepInput[];
+  links: LinkInput[];
+}
+
+export type RouteEvaluation = RouteEvaluateResponse | { error: { code: string; message: string; field: string | null } };
+
+// Editor steps carry UI fields and may hold blank quantities; the engine gets only its own fields.
+export function toRouteEvaluateRequest(route: RouteLike) {
+  return {
+    target: route.target,
+    targetAmount: route.targetAmount,
+    marginalThreshold_kJ: route.marginalThreshold_kJ,
+    steps: route.steps.map(({ id, yieldPct, notes: _notes, position: _position, ...fields }) => ({
+      id,
+      ...Object.fromEntries(Object.entries(fields).filter(([, v]) => v !== '' && v !== undefined)),
+      yield: yieldPct / 100,
+    })),
+    links: route.links,
+  };
+}
+
+// A route the engine refuses as a whole (empty, cyclic) still saves; the answer carries the reason.
+export function evaluateRouteDocument(route: RouteLike, drivers: DriverReaction[]): RouteEvaluation {
+  try {
+    return evaluateRoute(toRouteEvaluateRequest(route) as Parameters<typeof evaluateRoute>[0], { drivers });
+  } catch (error) {
+    if (error instanceof ThermoError) return { error: { code: error.code, message: error.message, field: error.field ?? null } };
+    throw error;
+  }
+}
+
+export function summariseEvaluation(route: RouteLike, evaluation: RouteEvaluation) {
+  if ('error' in evaluation) return { stepCount: route.steps.length, overallDgKj: null, uphillSteps: null };
+  return { stepCount: route.steps.length, overallDgKj: evaluation.overall.deltaG_kJ, uphillSteps: evaluation.overall.uphillSteps };
+}

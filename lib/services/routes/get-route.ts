@@ -1,0 +1,21 @@
+import 'server-only';
+import type { Transaction } from 'sequelize';
+import { getDb } from '../../../db';
+import { AppError } from '../../api/errors';
+import { toRouteDocument, type RouteDocumentDto } from './route-dto';
+
+export async function findRouteRow({ teamId, routeId, transaction }: { teamId: number; routeId: number; transaction?: Transaction }) {
+  const route = await getDb().models.Route.findOne({ where: { id: routeId, teamId }, transaction });
+  if (!route) throw new AppError('NOT_FOUND', 'No such route.');
+  return route;
+}
+
+export async function getRoute({ teamId, routeId, transaction }: { teamId: number; routeId: number; transaction?: Transaction }): Promise<RouteDocumentDto> {
+  const { Step, StepLink } = getDb().models;
+  const route = await findRouteRow({ teamId, routeId, transaction });
+  const [steps, links] = await Promise.all([
+    Step.findAll({ where: { routeId }, order: [['sort_order', 'ASC']], transaction }),
+    StepLink.findAll({ where: { routeId }, order: [['id', 'ASC']], transaction }),
+  ]);
+  return toRouteDocument(route, steps, links);
+}

@@ -1,0 +1,38 @@
+import 'server-only';
+import { Op, type Order, type WhereOptions } from 'sequelize';
+import { getDb } from '../../../db';
+import type { Route } from '../../../db/models/route';
+import type { ListRoutesQuery } from '../../schemas/route';
+import { toRouteSummary, type RouteSummaryDto } from './route-dto';
+
+const SORT_COLUMNS: Record<ListRoutesQuery['sort'], string> = {
+  name: 'name',
+  target: 'target',
+  updatedAt: 'updated_at',
+  steps: 'step_count',
+  overallDeltaG: 'overall_dg_kj',
+  uphillSteps: 'uphill_steps',
+};
+
+function escapeLike(text: string): string {
+  return text.replace(/[\\%_]/g, (c) => `\\${c}`);
+}
+
+export async function listRoutes({ teamId, query }: { teamId: number; query: ListRoutesQuery }) {
+  const { Route, User } = getDb().models;
+  const where: WhereOptions<Route> = { teamId, archivedAt: query.archived === '1' ? { [Op.ne]: null } : null };
+  if (query.q) {
+    const pattern = `%${escapeLike(query.q)}%`;
+    Object.assign(where, { [Op.or]: [{ name: { [Op.like]: pattern } }, { target: { [Op.like]: pattern } }] });
+  }
+  const order: Order = [[SORT_COLUMNS[query.sort], query.dir.toUpperCase()], ['id', 'DESC']];
+  const { rows, count } = await Route.findAndCountAll({
+    where,
+    order,
+    limit: query.pageSize,
+    offset: (query.page - 1) * query.pageSize,
+    include: [{ model: User, as: 'updatedBy', attributes: ['name'] }],
+  });
+  const items: RouteSummaryDto[] = rows.map((r) => toRouteSummary(r, (r.get('updatedBy') as { name: string } | null)?.name ?? '—'));
+  return { items, total: count, page: query.page, pageSize: query.pageSize };
+}
