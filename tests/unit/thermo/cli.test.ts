@@ -68,4 +68,27 @@ describe('thermo CLI', () => {
     expect(r.status).toBe(0);
     expect((JSON.parse(r.stdout) as { error: { code: string } }).error.code).toBe('INVALID_VALUE');
   });
+
+  it('evaluates a route: the ladder ends at the sum of scaled step ΔG°, and a cycle is an error item', () => {
+    const route = {
+      target: 'CH3OH(g)',
+      steps: [
+        { id: 's1', equation: 'CH4(g) + H2O(g) -> CO(g) + 3 H2(g)', temperature: '700 K' },
+        { id: 's2', equation: 'CO(g) + 2 H2(g) -> CH3OH(g)', temperature: '500 K' },
+      ],
+      links: [{ from: 's1', to: 's2', species: 'CO(g)' }],
+    };
+    const cyclic = { ...route, links: [...route.links, { from: 's2', to: 's1', species: 'CH3OH(g)' }] };
+    const r = run(['route'], JSON.stringify([route, cyclic]));
+    expect(r.status).toBe(0);
+    const [ok, bad] = JSON.parse(r.stdout) as [
+      { order: string[]; steps: { deltaG0_kJ: number; cumulative0_kJ: number; class: string }[]; overall: { deltaG0_kJ: number } },
+      { error: { code: string; message: string } },
+    ];
+    expect(ok.order).toEqual(['s1', 's2']);
+    expect(ok.steps[0]!.class).toBe('uphill'); // steam reforming is uphill below ~890 K at 1 bar
+    expect(ok.steps[1]!.cumulative0_kJ).toBeCloseTo(ok.steps[0]!.deltaG0_kJ + ok.steps[1]!.deltaG0_kJ, 9);
+    expect(ok.overall.deltaG0_kJ).toBeCloseTo(ok.steps[1]!.cumulative0_kJ, 9);
+    expect(bad.error.message).toMatch(/s1/);
+  });
 });
