@@ -1,6 +1,7 @@
 import { NextResponse } from 'next/server';
 import type { z } from 'zod';
 import { ThermoError } from '../thermo/errors';
+import { isRouteTooLargeError } from '../thermo/route/route-errors';
 import { AppError, errorBody } from './errors';
 
 export function zodFields(error: z.ZodError): Record<string, string> {
@@ -17,6 +18,7 @@ export function toErrorResponse(error: unknown): Response {
   if (error instanceof AppError) {
     return NextResponse.json(errorBody(error.code, error.message, error.fields, error.details), { status: error.status, headers: error.headers });
   }
+  if (isRouteTooLargeError(error)) return NextResponse.json(errorBody('PAYLOAD_TOO_LARGE', error.message), { status: 413 });
   if (error instanceof ThermoError) {
     const fields = error.field ? { [error.field]: error.message } : undefined;
     return NextResponse.json(errorBody(error.code, error.message, fields), { status: 400 });

@@ -1,9 +1,8 @@
 import { z } from 'zod';
+import { DEFAULT_MARGINAL_THRESHOLD_KJ, MAX_ROUTE_LINKS, MAX_ROUTE_STEPS } from '../thermo/route/route-limits';
 import { PositiveFinite, QuantityString, SpeciesName, speciesMap } from './quantity';
 
-export const MAX_ROUTE_STEPS = 500;
 export const ROUTE_STATUSES = ['draft'] as const;
-export const DEFAULT_MARGINAL_THRESHOLD_KJ = -17;
 
 const Quantity = z.union([QuantityString, z.literal('')]);
 export const StepKey = z.string().regex(/^[A-Za-z0-9_-]{1,64}$/, { message: 'Use letters, digits, - or _ (at most 64).' });
@@ -43,7 +42,7 @@ export type CreateRouteInput = z.infer<typeof CreateRouteInput>;
 export const SaveRouteInput = RouteMeta.extend({
   version: z.number().int().positive(),
   steps: z.array(StepInput).max(MAX_ROUTE_STEPS, { message: `A route has at most ${MAX_ROUTE_STEPS} steps.` }),
-  links: z.array(LinkInput).max(MAX_ROUTE_STEPS * 4),
+  links: z.array(LinkInput).max(MAX_ROUTE_LINKS),
 });
 export type SaveRouteInput = z.infer<typeof SaveRouteInput>;
 

@@ -1,0 +1,179 @@
+// A multi-step route, evaluated: steps in topological order, each scaled by its extent, running
+// totals, classes, remedies for uphill and marginal steps, and safety notes.
+import type { EvaluateRequest } from '../../schemas/evaluate';
+import type { RouteEvaluateRequest, RouteStep } from '../../schemas/route-evaluate';
+import { ThermoError, isThermoError } from '../errors';
+import { evaluateStep, type EvaluateResponse } from '../evaluate';
+import { assertFiniteNumbers } from '../sanitise';
+import { builtinLookup, type SpeciesLookup } from '../species-library';
+import { parseAmount } from '../units';
+import { DEFAULT_DRIVERS, prepareDrivers } from './drivers';
+import { computeExtents } from './extents';
+import { conditionsRemedies } from './remedy-conditions';
+import { couplingRemedies, type CouplingContext } from './remedy-coupling';
+import { temperatureRemedy } from './remedy-temperature';
+import { MAX_ROUTE_LINKS, MAX_ROUTE_STEPS, RouteTooLargeError, routeError } from './route-errors';
+import { DEFAULT_MARGINAL_THRESHOLD_KJ } from './route-limits';
+import { buildRouteGraph } from './route-graph';
+import type { DriverReaction, Remedy, RouteEvaluateResponse, RouteStepResult, RouteWarning, StepErrorInfo } from './route-types';
+import { classify, stepNotes } from './step-notes';
+import { readStoichiometry, speciesKey, type Stoichiometry } from './stoichiometry';
+
+export { DEFAULT_MARGINAL_THRESHOLD_KJ };
+
+export interface RouteOptions {
+  lookup?: SpeciesLookup;
+  drivers?: readonly DriverReaction[];
+}
+
+interface Evaluated {
+  request: EvaluateRequest;
+  nu: Stoichiometry | null;
+  result: EvaluateResponse | null;
+  error: StepErrorInfo | null;
+}
+
+function stepRequest(step: RouteStep): EvaluateRequest {
+  const { id: _id, yield: _yield, ...request } = step;
+  return request;
+}
+
+function errorInfo(err: ThermoError, index: number): StepErrorInfo {
+  return { code: err.code, message: err.message, field: err.field ? `steps.${index}.${err.field}` : null };
+}
+
+function evaluateOne(step: RouteStep, index: number, lookup: SpeciesLookup): Evaluated {
+  const request = stepRequest(step);
+  const { nu } = readStoichiometry(request.equation, lookup);
+  try {
+    return { request, nu, result: evaluateStep(request, { lookup }), error: null };
+  } catch (err) {
+    if (!isThermoError(err)) throw err;
+    return { request, nu, result: null, error: errorInfo(err, index) };
+  }
+}
+
+function readInputs(request: RouteEvaluateRequest): { amount: number; threshold: number; yields: number[] } {
+  const { steps } = request;
+  if (!Array.isArray(steps) || steps.length === 0) {
+    throw routeError('A route needs at least one step', 'steps', 'add the steps of the route');
+  }
+  if (steps.length > MAX_ROUTE_STEPS) throw new RouteTooLargeError('steps', steps.length, MAX_ROUTE_STEPS);
+  const links = request.links ?? [];
+  if (links.length > MAX_ROUTE_LINKS) throw new RouteTooLargeError('links', links.length, MAX_ROUTE_LINKS);
+  const threshold = request.marginalThreshold_kJ ?? DEFAULT_MARGINAL_THRESHOLD_KJ;
+  if (!Number.isFinite(threshold) || threshold > 0) {
+    throw routeError('marginalThreshold_kJ must be a finite number ≤ 0', 'marginalThreshold_kJ', 'e.g. -17 (≈ K = 10^3 at 298 K)');
+  }
+  const amount = parseAmount(request.targetAmount ?? '1 mol', 'targetAmount');
+  if (!(amount > 0)) throw routeError('targetAmount must be above 0 mol', 'targetAmount', 'e.g. "1 mol"');
+  const yields = steps.map((s, i) => {
+    const y = s.yield ?? 1;
+    if (!Number.isFinite(y) || y <= 0 || y > 1) {
+      throw routeError(`steps[${i}].yield must be a fraction with 0 < yield ≤ 1`, `steps.${i}.yield`, 'e.g. 0.9 for 90 %');
+    }
+    return y;
+  });
+  return { amount, threshold, yields };
+}
+
+function checkTarget(target: string, lookup: SpeciesLookup): void {
+  try {
+    speciesKey(target, lookup);
+  } catch (err) {
+    if (isThermoError(err)) throw new ThermoError(err.code, `target: ${err.message}`, { field: 'target', ...(err.hint ? { hint: err.hint } : {}) });
+    throw err;
+  }
+}
+
+function remediesFor(e: Evaluated, goal_kJ: number, ctx: CouplingContext): Remedy[] {
+  const r = e.result!;
+  return [
+    temperatureRemedy(e.request, r, goal_kJ, ctx.lookup),
+    ...conditionsRemedies(e.request, r, goal_kJ, ctx.lookup),
+    ...(e.nu ? couplingRemedies(e.request, r, e.nu, goal_kJ, ctx) : []),
+  ];
+}
+
+/**
+ * Energies are for `targetAmount` of the target (per mol of target with the default 1 mol). Steps come
+ * back in `order`. A step without an extent (disconnected, unknown) or with an error is left out of
+ * the totals; its cumulative values carry the running sum. Classes, counts, remedies and
+ * smallestDrivingForce_kJ use ΔG per mol of reaction as written; largestUphill_kJ uses ξ·ΔG.
+ */
+export function evaluateRoute(request: RouteEvaluateRequest, opts: RouteOptions = {}): RouteEvaluateResponse {
+  const lookup = opts.lookup ?? builtinLookup;
+  const { amount, threshold, yields } = readInputs(request);
+  checkTarget(request.target, lookup);
+  const links = request.links ?? [];
+  const graph = buildRouteGraph(
+    request.steps.map((s) => s.id),
+    links,
+  );
+  const evaluated = request.steps.map((s, i) => evaluateOne(s, i, lookup));
+  const ext = computeExtents({
+    graph,
+    links,
+    nu: evaluated.map((e) => e.nu),
+    yields,
+    target: request.target,
+    targetAmount_mol: amount,
+    lookup,
+  });
+  const drivers = prepareDrivers(opts.drivers ?? DEFAULT_DRIVERS, lookup);
+  const ctx: CouplingContext = { drivers: drivers.prepared, lookup, cache: new Map(), failed: new Map() };
+
+  let cumulative = 0;
+  let cumulative0 = 0;
+  const steps: RouteStepResult[] = graph.order.map((i) => {
+    const e = evaluated[i]!;
+    const id = graph.ids[i]!;
+    const r = e.result;
+    const xi = ext.extents[i] ?? null;
+    const perMol = r ? (r.deltaG_kJ ?? r.deltaG0_kJ) : null;
+    const cls = perMol === null ? 'error' : classify(perMol, threshold);
+    const counted = r !== null && xi !== null;
+    const dG = counted ? xi * perMol! : null;
+    const dG0 = counted ? xi * r.deltaG0_kJ : null;
+    if (dG !== null) cumulative += dG;
+    if (dG0 !== null) cumulative0 += dG0;
+    const needsRemedy = cls === 'uphill' || cls === 'marginal';
+    return {
+      id,
+      result: r,
+      error: e.error,
+      extent_mol: xi,
+      deltaG_kJ: dG,
+      deltaG0_kJ: dG0,
+      cumulative_kJ: cumulative,
+      cumulative0_kJ: cumulative0,
+      class: cls,
+      signUncertain: r?.uncertainty.signUncertain ?? false,
+      remedies: needsRemedy ? remediesFor(e, cls === 'uphill' ? 0 : threshold, ctx) : [],
+      notes: r ? stepNotes(r, xi, lookup) : [],
+    };
+  });
+
+  const perMolAll = steps.filter((s) => s.result).map((s) => s.result!.deltaG_kJ ?? s.result!.deltaG0_kJ);
+  const uphillScaled = steps.filter((s) => s.class === 'uphill' && s.deltaG_kJ !== null).map((s) => s.deltaG_kJ!);
+  const warnings: RouteWarning[] = [...ext.warnings, ...drivers.warnings];
+  const failedSteps = steps.filter((s) => s.class === 'error').map((s) => s.id);
+  if (failedSteps.length > 0) {
+    warnings.push({ code: 'STEP_ERROR', message: `Could not evaluate ${failedSteps.join(', ')}; the totals leave ${failedSteps.length === 1 ? 'it' : 'them'} out`, steps: failedSteps });
+  }
+  for (const [id, why] of ctx.failed) warnings.push({ code: 'DRIVER_INVALID', message: `Driver ${id}: ${why}; not used`, steps: [] });
+
+  return assertFiniteNumbers({
+    order: graph.order.map((i) => graph.ids[i]!),
+    steps,
+    overall: {
+      deltaG_kJ: cumulative,
+      deltaG0_kJ: cumulative0,
+      uphillSteps: steps.filter((s) => s.class === 'uphill').length,
+      marginalSteps: steps.filter((s) => s.class === 'marginal').length,
+      largestUphill_kJ: uphillScaled.length ? Math.max(...uphillScaled) : null,
+      smallestDrivingForce_kJ: perMolAll.length ? Math.min(...perMolAll.map((g) => -g)) : null,
+    },
+    warnings,
+  });
+}
