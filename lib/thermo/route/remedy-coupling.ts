@@ -16,6 +16,8 @@ const COUPLING_NOTE =
 // Beyond this the "driver" is the process and the step a side note.
 const MAX_MULTIPLE = 100;
 const EXTRA_TRIES = 3;
+// Only the most promising drivers are worked out in full: keeps a long uphill route fast and its answer small.
+export const MAX_COUPLING_OPTIONS = 4;
 
 export interface CouplingContext {
   drivers: readonly PreparedDriver[];
@@ -69,14 +71,22 @@ export function couplingRemedies(
   const species = stepActivities(request, result, ctx.lookup);
   // The combined reaction needs no equilibrium composition; its species differ from the step's.
   const { initial: _i, totalPressure: _t, volume: _v, electrons: _e, ...plain } = request;
-  const out: CouplingRemedy[] = [];
+  const candidates: { d: PreparedDriver; dr: EvaluateResponse; exact: number; start: number }[] = [];
   for (const d of ctx.drivers) {
     const dr = driverAt(ctx, d, request, T);
     // A driver outside its data at this temperature (liquid water at 1200 K) is no driver.
     if (!dr || dr.deltaG0_kJ >= 0 || dr.warnings.some((w) => w.code === 'T_OUT_OF_RANGE')) continue;
     const exact = (stepDeltaG - goal_kJ) / -dr.deltaG0_kJ;
-    let m = Math.max(0.5, Math.ceil(exact * 2) / 2);
-    if (m === exact) m += 0.5;
+    let start = Math.max(0.5, Math.ceil(exact * 2) / 2);
+    if (start === exact) start += 0.5;
+    candidates.push({ d, dr, exact, start });
+  }
+  // Most negative estimated combined ΔG first: the step plus the driver's standard ΔG° at its multiple.
+  candidates.sort((a, b) => a.start * a.dr.deltaG0_kJ - b.start * b.dr.deltaG0_kJ);
+  const out: CouplingRemedy[] = [];
+  for (const { d, dr, exact, start } of candidates) {
+    if (out.length >= MAX_COUPLING_OPTIONS) break;
+    let m = start;
     for (let attempt = 0; attempt <= EXTRA_TRIES && m <= MAX_MULTIPLE; attempt++, m += 0.5) {
       const combined = combineStoichiometry([
         { nu: stepNu, factor: 1 },

@@ -2,6 +2,8 @@
 // J. Phys. Chem. Ref. Data 11, Suppl. 2), worked by hand; others marked "from memory".
 import { describe, expect, it } from 'vitest';
 import { R_GAS, evaluateStep } from '@/lib/thermo';
+import { DEFAULT_DRIVERS } from '@/lib/thermo/route';
+import { MAX_COUPLING_OPTIONS } from '@/lib/thermo/route/remedy-coupling';
 import { single } from './remedy-helpers';
 
 const CALCINATION = 'CaCO3(s) -> CaO(s) + CO2(g)';
@@ -135,13 +137,14 @@ describe('coupling remedy', () => {
   });
 
   it('carbon combustion drives calcination at ½ mol: 130.401 − ½·394.359 = −66.78 kJ (NBS 1982)', () => {
-    const c = single('CaO(s)', { equation: CALCINATION }).coupling.find((x) => x.driverId === 'carbon-combustion')!;
+    const carbon = DEFAULT_DRIVERS.filter((d) => d.id === 'carbon-combustion');
+    const c = single('CaO(s)', { equation: CALCINATION }, {}, [...carbon]).coupling.find((x) => x.driverId === 'carbon-combustion')!;
     expect(c.multiple).toBe(0.5);
     expect(c.combinedDeltaG_kJ).toBeCloseTo(130.401 - 0.5 * 394.359, 2);
   });
 
   it('never offers the reverse of the step itself (quicklime carbonation undoes calcination)', () => {
-    const ids = single('CaO(s)', { equation: CALCINATION }).coupling.map((c) => c.driverId);
+    const ids = single('CaO(s)', { equation: CALCINATION }, {}, [...DEFAULT_DRIVERS]).coupling.map((c) => c.driverId);
     expect(ids).not.toContain('quicklime-carbonation');
   });
 
@@ -169,5 +172,15 @@ describe('coupling remedy', () => {
 
   it('computes no remedies for downhill steps', () => {
     expect(single('NH4Cl(s)', { equation: 'NH3(g) + HCl(g) -> NH4Cl(s)' }).step.remedies).toEqual([]);
+  });
+});
+
+describe('coupling list size', () => {
+  it('works out at most MAX_COUPLING_OPTIONS drivers, the most promising first', () => {
+    const { coupling } = single('CaO(s)', { equation: CALCINATION }, {}, [...DEFAULT_DRIVERS]);
+    expect(coupling.length).toBeGreaterThan(0);
+    expect(coupling.length).toBeLessThanOrEqual(MAX_COUPLING_OPTIONS);
+    const sorted = [...coupling].sort((a, b) => a.combinedDeltaG_kJ - b.combinedDeltaG_kJ);
+    expect(coupling).toEqual(sorted);
   });
 });
