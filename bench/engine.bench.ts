@@ -1,13 +1,15 @@
 // Engine benchmark: prints figures, asserts nothing. Run: npx tsx bench/engine.bench.ts
-// Step evaluations (median, p95 µs after warm-up), species lookup (ns/op) at library size and
-// at 10× that size, and the one-off cost of loading and indexing the library.
+// Step evaluations (median, p95 µs after warm-up; the first, cold call; and with the memos
+// emptied before every call), species lookup (ns/op) at library size and at 10× that size,
+// and the one-off cost of loading and indexing the library.
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import type { EvaluateRequest } from '../lib/schemas/evaluate';
 import type { SpeciesLibraryFile, SpeciesRecord } from '../lib/thermo/species-types';
 
-const WARMUP = 300;
-const RUNS = 3000;
+const WARMUP = 2000;
+const RUNS = 5000;
+const MISS_RUNS = 500;
 const LOOKUPS = 2_000_000;
 
 const TYPICAL: Record<string, EvaluateRequest> = {
@@ -34,6 +36,12 @@ function quantile(sorted: number[], q: number): number {
   return sorted[i]!;
 }
 
+function timeCall(fn: () => unknown): number {
+  const t0 = process.hrtime.bigint();
+  fn();
+  return Number(process.hrtime.bigint() - t0) / 1000;
+}
+
 function timeLookups(get: (k: string) => unknown, keys: string[]): number {
   let hits = 0;
   const t0 = process.hrtime.bigint();
@@ -58,18 +66,32 @@ export async function runEngineBench(): Promise<Record<string, number>> {
   figures.library_parse_and_index_ms = performance.now() - tIndex;
   if (!fresh.get('H2O(l)')) throw new Error('index build failed');
 
+  const tEngine = performance.now();
   const { evaluateStep } = await import('../lib/thermo/evaluate');
+  const { clearReactionMemo } = await import('../lib/thermo/resolve-reaction');
+  figures.engine_first_import_ms = performance.now() - tEngine;
+
+  // First call of each request: nothing memoised yet, and the very first one also runs cold code.
+  for (const [name, req] of Object.entries(TYPICAL)) figures[`${name}_first_call_us`] = timeCall(() => evaluateStep(req));
+
   for (const [name, req] of Object.entries(TYPICAL)) {
     for (let i = 0; i < WARMUP; i++) evaluateStep(req);
     const samples: number[] = [];
-    for (let i = 0; i < RUNS; i++) {
-      const t0 = process.hrtime.bigint();
-      evaluateStep(req);
-      samples.push(Number(process.hrtime.bigint() - t0) / 1000);
-    }
+    for (let i = 0; i < RUNS; i++) samples.push(timeCall(() => evaluateStep(req)));
     samples.sort((a, b) => a - b);
     figures[`${name}_median_us`] = quantile(samples, 0.5);
     figures[`${name}_p95_us`] = quantile(samples, 0.95);
+  }
+
+  // Warm code, empty memos: what a never-seen equation costs (parse, balance, crossover search).
+  for (const [name, req] of Object.entries(TYPICAL)) {
+    const samples: number[] = [];
+    for (let i = 0; i < MISS_RUNS; i++) {
+      clearReactionMemo();
+      samples.push(timeCall(() => evaluateStep(req)));
+    }
+    samples.sort((a, b) => a - b);
+    figures[`${name}_memo_miss_median_us`] = quantile(samples, 0.5);
   }
 
   // Same code path, map of library size vs ten times that (synthetic keys).

@@ -6,6 +6,7 @@ export class ApiError extends Error {
     readonly code: string,
     message: string,
     readonly fields?: Record<string, string>,
+    readonly details?: Record<string, unknown>,
   ) {
     super(message);
     this.name = 'ApiError';
@@ -24,7 +25,7 @@ export async function apiFetch<T>(url: string, init: { method?: string; body?: u
   const data: unknown = text ? safeJson(text) : undefined;
   if (!response.ok) {
     const error = (data as ErrorBody | undefined)?.error;
-    throw new ApiError(response.status, error?.code ?? 'HTTP_' + response.status, error?.message ?? `Request failed (${response.status}).`, error?.fields);
+    throw new ApiError(response.status, error?.code ?? 'HTTP_' + response.status, error?.message ?? `Request failed (${response.status}).`, error?.fields, error?.details);
   }
   return data as T;
 }

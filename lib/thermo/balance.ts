@@ -37,6 +37,35 @@ export function checkBalance(eq: ParsedEquation): BalanceReport {
   return { isBalanced: Object.keys(elementSurplus).length === 0 && chargeSurplus === 0, elementSurplus, chargeSurplus };
 }
 
+/**
+ * Same verdict as checkBalance(eq).isBalanced. With whole-number coefficients the sums are exact
+ * in doubles while they stay safe integers, so only other equations need the rational path.
+ */
+export function isBalanced(eq: ParsedEquation): boolean {
+  const totals = new Map<string, number>();
+  let charge = 0;
+  const add = (terms: readonly Term[], sign: 1 | -1): boolean => {
+    for (const t of terms) {
+      if (t.coefficient.d !== 1n || !Number.isSafeInteger(t.value)) return false;
+      const c = sign * t.value;
+      for (const el of Object.keys(t.species.elements)) {
+        const atoms = c * t.species.elements[el]!;
+        const v = (totals.get(el) ?? 0) + atoms;
+        if (!Number.isSafeInteger(atoms) || !Number.isSafeInteger(v)) return false;
+        totals.set(el, v);
+      }
+      const q = c * t.species.charge;
+      charge += q;
+      if (!Number.isSafeInteger(q) || !Number.isSafeInteger(charge)) return false;
+    }
+    return true;
+  };
+  if (!add(eq.reactants, 1) || !add(eq.products, -1)) return checkBalance(eq).isBalanced;
+  if (charge !== 0) return false;
+  for (const v of totals.values()) if (v !== 0) return false;
+  return true;
+}
+
 function amount(v: number): string {
   const size = Math.abs(v);
   return Number.isInteger(size) ? String(size) : fraction(size).toFraction();

@@ -1,6 +1,6 @@
 // Temperature where ΔrG°(T) changes sign, searched only where every species has data.
 import { reactionThermoAt, type ReactionSpecies, type ThermoOptions } from './reaction-thermo';
-import { speciesRange } from './species-state';
+import { rangeHigh, rangeLow } from './species-state';
 
 const SCAN_STEPS = 64;
 const BISECTIONS = 60;
@@ -10,9 +10,8 @@ export function commonRange(species: readonly ReactionSpecies[]): [number, numbe
   let lo = 0;
   let hi = Number.POSITIVE_INFINITY;
   for (const s of species) {
-    const [a, b] = speciesRange(s.record);
-    lo = Math.max(lo, a);
-    hi = Math.min(hi, b);
+    lo = Math.max(lo, rangeLow(s.record));
+    hi = Math.min(hi, rangeHigh(s.record));
   }
   return lo < hi ? [lo, hi] : null;
 }
@@ -40,6 +39,28 @@ export function findCrossover(species: readonly ReactionSpecies[], opts: ThermoO
     gPrev = gt;
   }
   return null;
+}
+
+const memo = new WeakMap<readonly ReactionSpecies[], Map<string, number | null>>();
+
+/**
+ * findCrossover remembered per species array and options. Only frozen arrays (those that
+ * resolveReaction hands out) are remembered, as only they cannot change.
+ */
+export function memoCrossover(species: readonly ReactionSpecies[], opts: Required<ThermoOptions>): number | null {
+  if (!Object.isFrozen(species)) return findCrossover(species, opts);
+  let byOpts = memo.get(species);
+  if (!byOpts) {
+    byOpts = new Map();
+    memo.set(species, byOpts);
+  }
+  const key = `${opts.heatCapacity}|${opts.standardPressure_bar}`;
+  let T = byOpts.get(key);
+  if (T === undefined) {
+    T = findCrossover(species, opts);
+    byOpts.set(key, T);
+  }
+  return T;
 }
 
 function bisect(g: (T: number) => number, a: number, b: number, ga: number): number {

@@ -1,6 +1,6 @@
 import { fraction, type Fraction } from 'mathjs';
 import { ThermoError, parseError } from './errors';
-import { isPhaseContent, parseSpecies, type AliasResolver, type SpeciesRef } from './notation';
+import { isPhaseContent, parseSpecies, type AliasResolver, type NameSuggester, type SpeciesRef } from './notation';
 
 export type Arrow = '->' | '→' | '=' | '<=>' | '⇌';
 
@@ -19,6 +19,8 @@ export interface ParsedEquation {
 
 export interface ParseEquationOptions {
   resolveAlias?: AliasResolver;
+  /** consulted only for a name resolveAlias does not know */
+  suggestNames?: NameSuggester;
 }
 
 // Longest first, so "<=>" is not read as "=".
@@ -52,7 +54,7 @@ export function parseEquation(text: string, opts: ParseEquationOptions = {}): Pa
     throw parseError(`Expected products after the arrow at position ${text.length} in "${text}"`, text.length, TERM_HINT);
   }
   const side = (from: number, to: number): Term[] =>
-    splitTerms(text, from, to).map(([s, e]) => parseTerm(text, s, e, opts.resolveAlias));
+    splitTerms(text, from, to).map(([s, e]) => parseTerm(text, s, e, opts));
   return { reactants: side(0, index), products: side(afterArrow, text.length), arrow, raw: text.trim() };
 }
 
@@ -107,7 +109,7 @@ function splitTerms(text: string, from: number, to: number): [number, number][] 
   return ranges;
 }
 
-function parseTerm(text: string, start: number, end: number, resolveAlias?: AliasResolver): Term {
+function parseTerm(text: string, start: number, end: number, opts: ParseEquationOptions): Term {
   let i = start;
   while (isSpace(text[i])) i++;
   const tail = text.slice(i, end);
@@ -129,7 +131,7 @@ function parseTerm(text: string, start: number, end: number, resolveAlias?: Alia
     }
     i += m[0].length;
   }
-  const species = parseSpecies(text.slice(i, end), { offset: i, source: text, ...(resolveAlias ? { resolveAlias } : {}) });
+  const species = parseSpecies(text.slice(i, end), { resolveAlias: opts.resolveAlias, suggestNames: opts.suggestNames, offset: i, source: text });
   return makeTerm(coefficient, species);
 }
 

@@ -3,7 +3,7 @@
 import type { EvaluateRequest } from '../schemas/evaluate';
 import { FARADAY, R_GAS, T_REF } from './constants';
 import { reactionQuotient } from './conditions';
-import { findCrossover } from './crossover';
+import { memoCrossover } from './crossover';
 import { equilibriumFromRequest, type EquilibriumSummary } from './equilibrium-request';
 import { ThermoError, isThermoError } from './errors';
 import { kFromLnK } from './fit';
@@ -168,7 +168,7 @@ export function evaluateStep(request: EvaluateRequest, opts: { lookup?: SpeciesL
     lnQ: q.lnQ,
     deltaG_kJ,
     direction: direction(decisive, scale),
-    crossover_K: findCrossover(species, { heatCapacity, standardPressure_bar }),
+    crossover_K: memoCrossover(species, { heatCapacity, standardPressure_bar }),
     maxWork_kJ: -decisive,
     cellPotential_V: request.electrons === undefined ? null : (-decisive * 1000) / (request.electrons * FARADAY),
     uncertainty: reactionUncertainty(species, decisive),

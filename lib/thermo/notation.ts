@@ -17,8 +17,12 @@ export interface SpeciesRef {
 /** Maps a species name and its phase or form (e.g. "ethanol", "l") to a canonical library key. */
 export type AliasResolver = (name: string, phaseOrForm: string) => string | undefined;
 
+/** Closest known spellings for a name the resolver does not know, best first. */
+export type NameSuggester = (name: string, phaseOrForm: string) => string[];
+
 export interface ParseSpeciesOptions {
   resolveAlias?: AliasResolver;
+  suggestNames?: NameSuggester;
   /** Index of `text` inside a larger text, so positions point into what the user typed. */
   offset?: number;
   /** The larger text, quoted in error messages when given. */
@@ -105,7 +109,7 @@ export function parseSpecies(text: string, opts: ParseSpeciesOptions = {}): Spec
   }
   const phaseOrForm = PHASES[word] ?? word;
 
-  if (NAME_START.test(body)) return resolveName(raw, body, phaseOrForm, ctx, opts.resolveAlias);
+  if (NAME_START.test(body)) return resolveName(raw, body, phaseOrForm, ctx, opts);
 
   const { formulaText, charge } = splitCharge(body, ctx);
   const counted = countFormula(formulaText, ctx.pos(0), ctx.source);
@@ -155,7 +159,7 @@ function checkGroups(work: string, ctx: Ctx): Map<number, number> {
   return pairs;
 }
 
-function resolveName(raw: string, body: string, phaseOrForm: string, ctx: Ctx, resolve?: AliasResolver): SpeciesRef {
+function resolveName(raw: string, body: string, phaseOrForm: string, ctx: Ctx, opts: ParseSpeciesOptions): SpeciesRef {
   for (let i = 0; i < body.length; i++) {
     if (!NAME_CHARS.test(body[i]!)) {
       throw parseError(
@@ -166,12 +170,16 @@ function resolveName(raw: string, body: string, phaseOrForm: string, ctx: Ctx, r
     }
   }
   const name = body.replace(/\s+/g, ' ');
-  const key = resolve?.(name, phaseOrForm);
+  const key = opts.resolveAlias?.(name, phaseOrForm);
   if (key === undefined) {
-    throw new ThermoError('UNKNOWN_SPECIES', `Unknown species name "${raw}"`, {
+    const suggestions = opts.suggestNames?.(name, phaseOrForm) ?? [];
+    const closest = suggestions.length ? ` (closest: ${suggestions.join(', ')})` : '';
+    throw new ThermoError('UNKNOWN_SPECIES', `Unknown species name "${raw}"${closest}`, {
       position: ctx.pos(0),
-      hint: 'write the formula instead, e.g. C2H5OH(l), or use a name listed in the species library',
-      details: { name, phaseOrForm },
+      hint: suggestions.length
+        ? `did you mean ${suggestions[0]}?`
+        : 'write the formula instead, e.g. C2H5OH(l), or use a name listed in the species library',
+      details: opts.suggestNames ? { name, phaseOrForm, suggestions } : { name, phaseOrForm },
     });
   }
   let resolved: SpeciesRef;

@@ -22,22 +22,49 @@ function pairOf(from: SpeciesRecord, to: SpeciesRecord): ReactionSpecies[] {
   ];
 }
 
-// Transition temperatures at 1 bar from the library itself, cached per record pair.
-const transitionCache = new WeakMap<SpeciesRecord, Map<SpeciesRecord, number | null>>();
-
-function transitionT(from: SpeciesRecord, to: SpeciesRecord): number | null {
-  let inner = transitionCache.get(from);
-  if (!inner) {
-    inner = new Map();
-    transitionCache.set(from, inner);
-  }
-  if (!inner.has(to)) inner.set(to, findCrossover(pairOf(from, to)));
-  return inner.get(to) ?? null;
+interface PairInfo {
+  pair: ReactionSpecies[];
+  range: [number, number] | null;
+  /** transition temperature at 1 bar from the library itself; undefined until first asked */
+  tTrans?: number | null;
 }
 
+// Per record pair: the two-species "reaction", its common range and transition temperature.
+const pairCache = new WeakMap<SpeciesRecord, Map<SpeciesRecord, PairInfo>>();
+
+function pairInfo(from: SpeciesRecord, to: SpeciesRecord): PairInfo {
+  let inner = pairCache.get(from);
+  if (!inner) {
+    inner = new Map();
+    pairCache.set(from, inner);
+  }
+  let info = inner.get(to);
+  if (!info) {
+    const pair = pairOf(from, to);
+    info = { pair, range: commonRange(pair) };
+    inner.set(to, info);
+  }
+  return info;
+}
+
+function transitionT(info: PairInfo): number | null {
+  if (info.tTrans === undefined) info.tTrans = findCrossover(info.pair);
+  return info.tTrans;
+}
+
+// Counterparts per lookup object, as a team lookup may add or shadow states.
+const counterpartCache = new WeakMap<SpeciesLookup, WeakMap<SpeciesRecord, SpeciesRecord[]>>();
+
 /** Other aggregate states of the same substance in the lookup (H2O(l) ↔ H2O(g)); named polymorphs excluded. */
-function counterparts(record: SpeciesRecord, lookup: SpeciesLookup): SpeciesRecord[] {
+function counterparts(record: SpeciesRecord, lookup: SpeciesLookup): readonly SpeciesRecord[] {
   if (record.form !== null || record.phase === 'aq') return [];
+  let byRecord = counterpartCache.get(lookup);
+  if (!byRecord) {
+    byRecord = new WeakMap();
+    counterpartCache.set(lookup, byRecord);
+  }
+  const hit = byRecord.get(record);
+  if (hit) return hit;
   const base = baseOf(record.key);
   const out: SpeciesRecord[] = [];
   for (const p of AGGREGATES) {
@@ -45,6 +72,7 @@ function counterparts(record: SpeciesRecord, lookup: SpeciesLookup): SpeciesReco
     const other = lookup.get(`${base}(${p})`);
     if (other && other.form === null) out.push(other);
   }
+  byRecord.set(record, out);
   return out;
 }
 
@@ -81,19 +109,26 @@ function rangeWarnings(s: ReactionSpecies, T: number, out: EngineWarning[]): voi
   }
 }
 
+// Message parts, built only when a warning is returned; most calls return null.
+function transitionNote(tTrans: number | null): string {
+  return tTrans === null ? '' : ` (transition at 1 bar ≈ ${fmt(tTrans, 5)} K from library data)`;
+}
+
+function here(s: ReactionSpecies, T: number): string {
+  return `${s.key}: at ${fmt(T, 6)} K`;
+}
+
 function stabilityWarning(
   s: ReactionSpecies,
   other: SpeciesRecord,
   T: number,
   partialPressure_bar: number | undefined,
 ): EngineWarning | null {
-  const pair = pairOf(s.record, other);
-  const range = commonRange(pair);
+  const info = pairInfo(s.record, other);
+  const { pair, range } = info;
   if (!range) return null;
   const [lo, hi] = range;
-  const tTrans = transitionT(s.record, other);
-  const at = tTrans === null ? '' : ` (transition at 1 bar ≈ ${fmt(tTrans, 5)} K from library data)`;
-  const here = `${s.key}: at ${fmt(T, 6)} K`;
+  const tTrans = transitionT(info);
   // Outside the pair's common range only the edge value is trusted, never an extrapolation.
   const inside = T >= lo && T <= hi;
   const edge = T < lo ? lo : hi;
@@ -101,7 +136,7 @@ function stabilityWarning(
   if (s.record.phase === 'g') {
     if (!inside) {
       return T < lo && dG < 0
-        ? { code: 'PHASE_CHANGE', message: `${here} a condensed state is stable at 1 bar: already at ${fmt(lo, 6)} K, where the ${other.key} data start, ${other.key} is more stable${at}`, species: [s.key] }
+        ? { code: 'PHASE_CHANGE', message: `${here(s, T)} a condensed state is stable at 1 bar: already at ${fmt(lo, 6)} K, where the ${other.key} data start, ${other.key} is more stable${transitionNote(tTrans)}`, species: [s.key] }
         : null;
     }
     // The gas condenses only if its partial pressure exceeds the vapour pressure.
@@ -110,7 +145,7 @@ function stabilityWarning(
     if (p <= pVap) return null;
     return {
       code: 'PHASE_CHANGE',
-      message: `${here} the ${STATE_WORD[other.phase]} ${other.key} is stable at ${fmt(p)} bar${at}; vapour pressure ≈ ${fmt(pVap, 3)} bar, so the gas is a hypothetical (supersaturated) state`,
+      message: `${here(s, T)} the ${STATE_WORD[other.phase]} ${other.key} is stable at ${fmt(p)} bar${transitionNote(tTrans)}; vapour pressure ≈ ${fmt(pVap, 3)} bar, so the gas is a hypothetical (supersaturated) state`,
       species: [s.key],
     };
   }
@@ -120,7 +155,7 @@ function stabilityWarning(
     : '';
   return {
     code: 'PHASE_CHANGE',
-    message: `${here} and 1 bar the ${STATE_WORD[other.phase]} ${other.key} is the stable state${at}${extra}`,
+    message: `${here(s, T)} and 1 bar the ${STATE_WORD[other.phase]} ${other.key} is the stable state${transitionNote(tTrans)}${extra}`,
     species: [s.key],
   };
 }

@@ -1,7 +1,7 @@
 // ΔrH°(T), ΔrS°(T), ΔrG°(T) of a reaction from anchored species states (Kirchhoff integration
 // through the polynomials). ΔrG° is pinned to the tabulated ΔfG° at 298.15 K; see README.md.
 import { ATM_IN_BAR, R_GAS, T_REF } from './constants';
-import { speciesStateAt } from './species-state';
+import { speciesHSInto } from './species-state';
 import type { SpeciesRecord } from './species-types';
 
 export interface ReactionSpecies {
@@ -46,6 +46,8 @@ export function reactionAt298(species: readonly ReactionSpecies[]): ReactionTher
   return { deltaH0_kJ: dH, deltaS0_J_per_K: dS, deltaG0_kJ: dG, ghsMismatch_kJ: dG - (dH - (T_REF * dS) / 1000) };
 }
 
+const scratch = { H_kJ: 0, S_J_per_K: 0 };
+
 export function reactionThermoAt(
   species: readonly ReactionSpecies[],
   T: number,
@@ -55,8 +57,11 @@ export function reactionThermoAt(
   const ref = reactionAt298(species);
   let dH = 0;
   let dS = 0;
+  // The crossover search calls this ~100 times per reaction: one scratch object, no allocations.
+  const st = scratch;
+  const lnT = Math.log(T);
   for (const s of species) {
-    const st = speciesStateAt(s.record, T, heatCapacity);
+    speciesHSInto(s.record, T, heatCapacity, st, lnT);
     dH += s.nu * st.H_kJ;
     dS += s.nu * st.S_J_per_K;
   }

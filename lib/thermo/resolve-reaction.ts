@@ -1,6 +1,8 @@
 // Equation text → library species with signed stoichiometric numbers, or a clear error:
 // unknown species (with the closest library keys) or an unbalanced equation (with a balance).
-import { balanceEquation, checkBalance, describeImbalance } from './balance';
+// Successful resolutions are memoised per lookup object; see resolveReaction.
+import { balanceEquation, checkBalance, describeImbalance, isBalanced } from './balance';
+import { BoundedMemo } from './bounded-memo';
 import { formatEquation, parseEquation, type ParsedEquation } from './equation';
 import { ThermoError, isThermoError } from './errors';
 import type { ReactionSpecies } from './reaction-thermo';
@@ -10,7 +12,8 @@ export interface ResolvedReaction {
   parsed: ParsedEquation;
   /** normalised text with library keys and ⇌ */
   equation: string;
-  species: ReactionSpecies[];
+  /** frozen: memo hits share it */
+  species: readonly ReactionSpecies[];
 }
 
 function withField(err: ThermoError, field: string): ThermoError {
@@ -24,7 +27,10 @@ function withField(err: ThermoError, field: string): ThermoError {
 
 function parse(text: string, lookup: SpeciesLookup): ParsedEquation {
   try {
-    return parseEquation(text, { resolveAlias: (n, p) => lookup.resolveAlias(n, p) });
+    return parseEquation(text, {
+      resolveAlias: (n, p) => lookup.resolveAlias(n, p),
+      suggestNames: (n, p) => lookup.suggestName?.(n, p, 5) ?? [],
+    });
   } catch (err) {
     throw isThermoError(err) ? withField(err, 'equation') : err;
   }
@@ -48,8 +54,32 @@ function unbalancedError(parsed: ParsedEquation): ThermoError {
   });
 }
 
-export function resolveReaction(text: string, lookup: SpeciesLookup): ResolvedReaction {
+interface ParsedEntry {
+  parsed: ParsedEquation;
+  equation: string;
+  balanced: boolean;
+}
+
+export const MEMO_CAPACITY = 1000;
+
+// Text-only memo, for equations with no species written by name: their parse never consulted
+// the lookup, so it holds for every lookup. Named species depend on the lookup's aliases.
+const parsedByText = new BoundedMemo<string, ParsedEntry>(MEMO_CAPACITY);
+// Full results per lookup object: a team lookup may shadow built-ins, so it never shares entries.
+let resolvedByLookup = new WeakMap<SpeciesLookup, BoundedMemo<string, ResolvedReaction>>();
+
+function parsedEntry(text: string, lookup: SpeciesLookup): ParsedEntry {
+  const hit = parsedByText.get(text);
+  if (hit) return hit;
   const parsed = parse(text, lookup);
+  const entry = { parsed, equation: formatEquation(parsed), balanced: isBalanced(parsed) };
+  const byName = [...parsed.reactants, ...parsed.products].some((t) => t.species.alias !== null);
+  if (!byName) parsedByText.set(text, entry);
+  return entry;
+}
+
+function resolveUncached(text: string, lookup: SpeciesLookup): ResolvedReaction {
+  const { parsed, equation, balanced } = parsedEntry(text, lookup);
   const terms = [
     ...parsed.reactants.map((t) => ({ t, sign: -1 })),
     ...parsed.products.map((t) => ({ t, sign: 1 })),
@@ -66,7 +96,7 @@ export function resolveReaction(text: string, lookup: SpeciesLookup): ResolvedRe
       details: { unknown: items },
     });
   }
-  if (!checkBalance(parsed).isBalanced) throw unbalancedError(parsed);
+  if (!balanced) throw unbalancedError(parsed);
 
   const byKey = new Map<string, ReactionSpecies>();
   for (const { t, sign } of terms) {
@@ -74,5 +104,27 @@ export function resolveReaction(text: string, lookup: SpeciesLookup): ResolvedRe
     if (existing) existing.nu += sign * t.value;
     else byKey.set(t.species.key, { key: t.species.key, asWritten: t.species.raw, nu: sign * t.value, record: lookup.get(t.species.key)! });
   }
-  return { parsed, equation: formatEquation(parsed), species: [...byKey.values()] };
+  // Shared by every later call with this text and lookup, so nobody may change it.
+  const species = Object.freeze([...byKey.values()].map((s) => Object.freeze(s)));
+  return Object.freeze({ parsed, equation, species });
+}
+
+/** Resolves the equation against the lookup; a repeat call with the same text and lookup object is a memo hit. */
+export function resolveReaction(text: string, lookup: SpeciesLookup): ResolvedReaction {
+  let memo = resolvedByLookup.get(lookup);
+  const hit = memo?.get(text);
+  if (hit) return hit;
+  const resolved = resolveUncached(text, lookup);
+  if (!memo) {
+    memo = new BoundedMemo(MEMO_CAPACITY);
+    resolvedByLookup.set(lookup, memo);
+  }
+  memo.set(text, resolved);
+  return resolved;
+}
+
+/** Empties both memos; for tests. */
+export function clearReactionMemo(): void {
+  parsedByText.clear();
+  resolvedByLookup = new WeakMap();
 }

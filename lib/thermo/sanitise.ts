@@ -8,6 +8,22 @@ export class EngineInvariantError extends Error {
   }
 }
 
+const hasOwn = Object.prototype.hasOwnProperty;
+
+// The fast pass builds no path strings; only a failure walks again to name where.
+function allFinite(value: unknown): boolean {
+  if (typeof value === 'number') return Number.isFinite(value);
+  if (value === null || typeof value !== 'object') return true;
+  if (Array.isArray(value)) {
+    for (let i = 0; i < value.length; i++) if (!allFinite(value[i])) return false;
+    return true;
+  }
+  // for-in with an own-property test visits what Object.entries does, without allocating.
+  const obj = value as Record<string, unknown>;
+  for (const k in obj) if (hasOwn.call(obj, k) && !allFinite(obj[k])) return false;
+  return true;
+}
+
 function walk(value: unknown, path: string): void {
   if (typeof value === 'number') {
     if (!Number.isFinite(value)) throw new EngineInvariantError(`non-finite number ${value} at ${path}`);
@@ -23,6 +39,6 @@ function walk(value: unknown, path: string): void {
 }
 
 export function assertFiniteNumbers<T>(value: T): T {
-  walk(value, '$');
+  if (!allFinite(value)) walk(value, '$');
   return value;
 }

@@ -12,6 +12,16 @@ export interface SpeciesLookup {
   suggest(key: string, limit?: number, elements?: Record<string, number>): string[];
   /** the built-in record a team species shadows, if any */
   shadowed?(key: string): SpeciesRecord | undefined;
+  /** closest writable names ("ethanol(l)") or keys for an unknown name; same phase first on ties */
+  suggestName?(name: string, phaseOrForm: string, limit?: number): string[];
+}
+
+interface NameCandidate {
+  /** as the user would write it: "ethanol(l)", or the key itself */
+  text: string;
+  lower: string;
+  key: string;
+  phase: string;
 }
 
 const library = libraryJson as unknown as SpeciesLibraryFile;
@@ -46,6 +56,7 @@ class MapLookup implements SpeciesLookup {
   private readonly byKey = new Map<string, SpeciesRecord>();
   private readonly byAlias = new Map<string, string>();
   private readonly byComposition = new Map<string, string[]>();
+  private names: NameCandidate[] | undefined;
 
   constructor(records: readonly SpeciesRecord[]) {
     for (const r of records) {
@@ -77,6 +88,49 @@ class MapLookup implements SpeciesLookup {
   compositionMatches(elements: Record<string, number>): string[] {
     return this.byComposition.get(compositionKey(elements)) ?? [];
   }
+
+  suggestName(name: string, phaseOrForm: string, limit = 5): string[] {
+    return rankNames(name, phaseOrForm, this.nameCandidates(), limit);
+  }
+
+  // Built on first use: only the error path needs it.
+  private nameCandidates(): NameCandidate[] {
+    if (!this.names) {
+      const out: NameCandidate[] = [];
+      for (const r of this.byKey.values()) {
+        const phase = r.form ?? r.phase;
+        for (const a of r.aliases) {
+          out.push({ text: `${a}(${phase})`, lower: `${normaliseName(a)}(${phase})`, key: r.key, phase });
+        }
+        out.push({ text: r.key, lower: r.key.toLowerCase(), key: r.key, phase });
+      }
+      this.names = out;
+    }
+    return this.names;
+  }
+}
+
+function rankNames(name: string, phaseOrForm: string, candidates: readonly NameCandidate[], limit: number): string[] {
+  const p = normaliseName(phaseOrForm);
+  const phase = PHASE_WORDS[p] ?? p;
+  const typed = normaliseName(name);
+  const target = `${typed}(${phase})`;
+  // Typos, not guesses: about one edit in three letters of the name.
+  const within = Math.max(2, Math.ceil(typed.length / 3));
+  const scored = candidates
+    .map((c) => ({ c, d: editDistance(target, c.lower), same: c.phase === phase ? 0 : 1 }))
+    .filter((x) => x.d <= within);
+  scored.sort((x, y) => x.d - y.d || x.same - y.same || x.c.text.localeCompare(y.c.text));
+  // One suggestion per species: its closest spelling.
+  const seen = new Set<string>();
+  const out: string[] = [];
+  for (const { c } of scored) {
+    if (seen.has(c.key)) continue;
+    seen.add(c.key);
+    out.push(c.text);
+    if (out.length === limit) break;
+  }
+  return out;
 }
 
 function rankSuggestions(key: string, candidates: string[], sameFormula: string[], limit: number): string[] {
@@ -107,5 +161,9 @@ export function layeredLookup(teamSpecies: readonly SpeciesRecord[], base: Speci
       return [...new Set([...own, ...base.suggest(key, limit, elements)])].slice(0, limit);
     },
     shadowed: (key) => (team.get(key) ? base.get(key) : undefined),
+    suggestName: (name, phaseOrForm, limit = 5) => {
+      const own = team.suggestName(name, phaseOrForm, limit);
+      return [...new Set([...own, ...(base.suggestName?.(name, phaseOrForm, limit) ?? [])])].slice(0, limit);
+    },
   };
 }

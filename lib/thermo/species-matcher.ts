@@ -8,7 +8,13 @@ export type SpeciesMatcher = (mapKey: string) => ReactionSpecies | undefined;
 
 const squash = (s: string): string => s.replace(/\s+/g, '');
 
-export function makeSpeciesMatcher(species: readonly ReactionSpecies[], canonicalKey?: CanonicalKey): SpeciesMatcher {
+// The text index depends only on the species; frozen arrays (memoised resolutions) keep theirs.
+const indexMemo = new WeakMap<readonly ReactionSpecies[], Map<string, ReactionSpecies>>();
+
+function textIndex(species: readonly ReactionSpecies[]): Map<string, ReactionSpecies> {
+  const frozen = Object.isFrozen(species);
+  const hit = frozen ? indexMemo.get(species) : undefined;
+  if (hit) return hit;
   const byText = new Map<string, ReactionSpecies>();
   for (const s of species) {
     byText.set(s.key, s);
@@ -16,6 +22,12 @@ export function makeSpeciesMatcher(species: readonly ReactionSpecies[], canonica
     byText.set(s.asWritten, s);
     byText.set(squash(s.asWritten), s);
   }
+  if (frozen) indexMemo.set(species, byText);
+  return byText;
+}
+
+export function makeSpeciesMatcher(species: readonly ReactionSpecies[], canonicalKey?: CanonicalKey): SpeciesMatcher {
+  const byText = textIndex(species);
   return (mapKey) => {
     const direct = byText.get(mapKey) ?? byText.get(squash(mapKey));
     if (direct) return direct;

@@ -41,8 +41,82 @@ function normalise(text: string): string {
 
 const NUMBER_ONLY = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
 
+// Fast path for the common "<number> <unit>" strings. Factors come from the mathjs instance
+// above and are applied in the order mathjs applies them, so results are bit-identical.
+interface FastUnit {
+  kind: QuantityKind;
+  /** per-part SI factors, multiplied in turn */
+  toSI: readonly number[];
+  /** SI value of the unit's zero, added only for offset units (degC, degF) */
+  offset: number | null;
+}
+
+const factorsOf = (parts: readonly string[]): number[] => parts.map((p) => math.unit(`1 ${p}`).value);
+
+function fastUnit(kind: QuantityKind, parts: readonly string[], offsetOf?: string): FastUnit {
+  return { kind, toSI: factorsOf(parts), offset: offsetOf === undefined ? null : math.unit(`0 ${offsetOf}`).toNumber('K') };
+}
+
+const FAST_UNITS: ReadonlyMap<string, FastUnit> = new Map([
+  ['K', fastUnit('temperature', ['K'])],
+  ['degC', fastUnit('temperature', ['degC'], 'degC')],
+  ['degF', fastUnit('temperature', ['degF'], 'degF')],
+  ...(['bar', 'atm', 'kPa', 'Pa', 'mmHg', 'psi'] as const).map((u) => [u, fastUnit('pressure', [u])] as const),
+  ['mol/L', fastUnit('concentration', ['mol', 'L^-1'])],
+  ['mmol/L', fastUnit('concentration', ['mmol', 'L^-1'])],
+  ['M', fastUnit('concentration', ['M'])],
+  ...(['mol', 'mmol', 'kmol'] as const).map((u) => [u, fastUnit('amount', [u])] as const),
+  ...(['L', 'mL'] as const).map((u) => [u, fastUnit('volume', [u])] as const),
+  ...(['J', 'kJ', 'kcal'] as const).map((u) => [u, fastUnit('energy', [u])] as const),
+]);
+
+// Divisors back to each kind's engine unit (mol/L is two parts, as mathjs sees it).
+const FROM_SI: Readonly<Record<QuantityKind, readonly number[]>> = {
+  temperature: factorsOf(['K']),
+  pressure: factorsOf(['bar']),
+  concentration: factorsOf(['mol', 'L^-1']),
+  amount: factorsOf(['mol']),
+  volume: factorsOf(['L']),
+  energy: factorsOf(['kJ']),
+};
+
+const FAST_QUANTITY = /^([+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?) ([A-Za-z]+(?:\/L)?)$/;
+
+function fastMatch(text: string): { value: number; unit: FastUnit } | undefined {
+  const m = FAST_QUANTITY.exec(text.trim());
+  if (m === null) return undefined;
+  const unit = FAST_UNITS.get(m[2]!);
+  // mathjs drops a leading "+" and reads the rest with parseFloat.
+  return unit === undefined ? undefined : { value: Number.parseFloat(m[1]!), unit };
+}
+
+/** The fast-path value, or undefined when mathjs must decide (other syntax, kind mismatch, overflow). */
+export function fastQuantity(text: string, kind: QuantityKind): number | undefined {
+  const hit = fastMatch(text);
+  if (hit === undefined || hit.unit.kind !== kind) return undefined;
+  let v = hit.value;
+  for (const f of hit.unit.toSI) v *= f;
+  if (hit.unit.offset !== null) v += hit.unit.offset;
+  for (const f of FROM_SI[kind]) v /= f;
+  return Number.isFinite(v) ? v : undefined;
+}
+
+/** The slow path alone: mathjs for every string. Exported so tests can compare both. */
+export function parseQuantitySlow(text: string, kind: QuantityKind, field: string): number {
+  return parseWithMathjs(text, kind, field);
+}
+
+
 /** Parses a quantity of the given kind and returns it in the kind's engine unit. */
 export function parseQuantity(text: string, kind: QuantityKind, field: string): number {
+  if (typeof text === 'string') {
+    const fast = fastQuantity(text, kind);
+    if (fast !== undefined) return fast;
+  }
+  return parseWithMathjs(text, kind, field);
+}
+
+function parseWithMathjs(text: string, kind: QuantityKind, field: string): number {
   const spec = KINDS[kind];
   if (typeof text !== 'string') {
     throw new ThermoError('INVALID_UNIT', `${field}: expected a quantity string such as "${spec.example}"`, {
@@ -90,6 +164,8 @@ export const parseEnergy = (text: string, field = 'energy'): number => parseQuan
 
 /** What a quantity string measures, or undefined if it is none of our kinds. */
 export function quantityKindOf(text: string): QuantityKind | undefined {
+  const hit = fastMatch(text);
+  if (hit !== undefined) return hit.unit.kind;
   let u: Unit;
   try {
     u = math.unit(normalise(text));

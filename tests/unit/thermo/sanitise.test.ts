@@ -11,4 +11,11 @@ describe('response sanitiser', () => {
     expect(() => assertFiniteNumbers({ equilibrium: { amounts_mol: { 'H2(g)': bad } } })).toThrow(EngineInvariantError);
     expect(() => assertFiniteNumbers({ list: [1, bad] })).toThrow(/\$\.list\[1\]/);
   });
+
+  it('checks own properties only, as Object.entries does, and names nested array paths', () => {
+    const inherited = Object.create({ ghost: Number.NaN }) as Record<string, unknown>;
+    inherited.real = 1;
+    expect(assertFiniteNumbers({ inherited })).toEqual({ inherited });
+    expect(() => assertFiniteNumbers({ warnings: [{ n: 1 }, { n: [0, Number.NaN] }] })).toThrow(/\$\.warnings\[1\]\.n\[1\]/);
+  });
 });

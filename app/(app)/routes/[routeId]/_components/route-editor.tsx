@@ -1,0 +1,179 @@
+'use client';
+
+import { useCallback, useMemo, useRef } from 'react';
+import type { ReactFlowInstance } from 'reactflow';
+import { useShallow } from 'zustand/react/shallow';
+import type { LinkAttempt } from '@/components/canvas/route-canvas';
+import type { StepDragPayload } from '@/components/canvas/step-drop';
+import { temperatureQuantity } from '@/components/ladder/energy-format';
+import { FreeEnergyLadder } from '@/components/ladder/free-energy-ladder';
+import { RemediesPanel } from '@/components/ladder/remedies-panel';
+import { Button } from '@/components/ui/button';
+import { sameSpecies } from '@/lib/route-editor/equation-species';
+import type { LinkInput, StepInput } from '@/lib/schemas/route';
+import { useRouteEditorStore, useRouteEditorStoreApi } from '@/stores/route-editor-store';
+import { BoardCanvas } from './board-canvas';
+import { ConflictDialog } from './conflict-dialog';
+import { RouteWarnings } from './route-warnings';
+import { SafetyCaution } from './safety-caution';
+import { SaveStatus } from './save-status';
+import { SidePanel, type PanelUnits } from './side-panel';
+import { StepPalette } from './step-palette';
+import { useAutosave } from './use-autosave';
+import { SHORTCUT_HELP, useEditorShortcuts } from './use-editor-shortcuts';
+import { useRouteEvaluation } from './use-route-evaluation';
+
+const FIT_OPTIONS = { padding: 0.2, maxZoom: 1.25, duration: 200 };
+export const LINK_REFUSAL = 'Link a product of one step to the same species consumed by the next.';
+
+export function RouteEditor({ routeId, canEdit, units }: { routeId: number; canEdit: boolean; units: PanelUnits }) {
+  const store = useRouteEditorStoreApi();
+  // Strings, not the steps array: the editor re-renders when ids or equations change, not on every drag frame.
+  const stepIdsKey = useRouteEditorStore((s) => s.doc.steps.map((x) => x.id).join('|'));
+  const equationsKey = useRouteEditorStore((s) => s.doc.steps.map((x) => `${x.id}\u0000${x.equation}`).join('\u0001'));
+  const name = useRouteEditorStore((s) => s.doc.name);
+  const target = useRouteEditorStore((s) => s.doc.target);
+  const selectedStepId = useRouteEditorStore((s) => s.selectedStepId);
+  const { canUndo, canRedo } = useRouteEditorStore(useShallow((s) => ({ canUndo: s.past.length > 0, canRedo: s.future.length > 0 })));
+  const { evaluation, results, isEvaluating, error } = useRouteEvaluation(routeId);
+  const { saveNow } = useAutosave(routeId, { enabled: canEdit });
+
+  const flow = useRef<ReactFlowInstance | null>(null);
+  const canvasBox = useRef<HTMLDivElement>(null);
+  const fitView = useCallback(() => flow.current?.fitView(FIT_OPTIONS), []);
+  useEditorShortcuts({ canEdit, onFitView: fitView });
+
+  // "Step n" follows the evaluation's order, so the board, the panel and the ladder count alike.
+  const order = evaluation?.order;
+  const stepLabels = useMemo(() => {
+    const ids = stepIdsKey.split('|').filter(Boolean);
+    const ranked = [...(order ?? []).filter((id) => ids.includes(id)), ...ids.filter((id) => !order?.includes(id))];
+    return Object.fromEntries(ranked.map((id, i) => [id, `Step ${i + 1}`]));
+  }, [stepIdsKey, order]);
+  // The ladder already numbers its risers; its labels name the reaction.
+  const ladderLabels = useMemo(
+    () => Object.fromEntries(equationsKey.split('\u0001').filter(Boolean).map((entry) => entry.split('\u0000') as [string, string]).map(([id, eq]) => [id, eq || 'blank step'])),
+    [equationsKey],
+  );
+
+  const handleSelectStep = useCallback((id: string | null) => store.getState().selectStep(id), [store]);
+  const handleMoveStep = useCallback(
+    (id: string, position: StepInput['position'] | undefined, dragging: boolean) => store.getState().moveStep(id, position, { dragging }),
+    [store],
+  );
+  const handleLink = useCallback(
+    ({ from, to, fromSpecies, toSpecies }: LinkAttempt) => {
+      if (from === to) return 'A step cannot feed itself.';
+      if (!sameSpecies(fromSpecies, toSpecies)) return `${LINK_REFUSAL} (${fromSpecies} is not ${toSpecies}.)`;
+      store.getState().addLink({ from, to, species: fromSpecies });
+      return null;
+    },
+    [store],
+  );
+  const handleRemoveLink = useCallback((link: LinkInput) => store.getState().removeLink(link), [store]);
+  const handleDrop = useCallback(
+    (payload: StepDragPayload, position: StepInput['position']) => store.getState().addStep({ equation: payload.equation, temperature: payload.temperature, position }),
+    [store],
+  );
+
+  // The keyboard "Add": the new step lands in the middle of what the canvas shows, a little offset each time.
+  const handleAdd = (payload: StepDragPayload) => {
+    const box = canvasBox.current?.getBoundingClientRect();
+    const count = store.getState().doc.steps.length;
+    const centre = box && flow.current ? flow.current.screenToFlowPosition({ x: box.left + box.width / 2, y: box.top + box.height / 2 }) : { x: 0, y: 0 };
+    const offset = (count % 6) * 28;
+    handleDrop(payload, { x: Math.round(centre.x - 128 + offset), y: Math.round(centre.y - 60 + offset) });
+  };
+
+  const selectedResult = selectedStepId ? results.get(selectedStepId) : undefined;
+  const updateSelected = (patch: Partial<StepInput>) => {
+    if (selectedStepId) store.getState().updateStep(selectedStepId, patch);
+  };
+
+  return (
+    <div className="flex flex-col gap-3">
+      <header className="flex flex-wrap items-end justify-between gap-3 border-b border-paper-edge pb-3">
+        <div>
+          <h1 className="text-xl font-semibold tracking-tight">{name}</h1>
+          <p className="text-sm text-ink-soft">
+            Target <span className="font-mono">{target}</span>
+            {canEdit ? null : <span className="ml-2 rounded bg-paper-deep px-1.5 py-0.5 text-xs">read-only</span>}
+          </p>
+        </div>
+        <div className="flex items-center gap-3">
+          {canEdit ? <SaveStatus isEvaluating={isEvaluating} onRetry={() => void saveNow()} /> : <p className="text-xs text-ink-faint">{isEvaluating ? 'evaluating…' : ''}</p>}
+          {canEdit ? (
+            <div className="flex gap-1">
+              <Button variant="secondary" disabled={!canUndo} onClick={() => store.getState().undo()}>
+                Undo
+              </Button>
+              <Button variant="secondary" disabled={!canRedo} onClick={() => store.getState().redo()}>
+                Redo
+              </Button>
+            </div>
+          ) : null}
+        </div>
+      </header>
+
+      <SafetyCaution />
+
+      <div className={`grid gap-3 ${canEdit ? 'lg:grid-cols-[13rem_minmax(0,1fr)_20rem]' : 'lg:grid-cols-[minmax(0,1fr)_20rem]'}`}>
+        {canEdit ? (
+          <div className="h-[34rem]">
+            <StepPalette onAdd={handleAdd} />
+          </div>
+        ) : null}
+        <div ref={canvasBox} className="h-[34rem] overflow-hidden rounded-lg border border-paper-edge bg-white">
+          <BoardCanvas
+            results={results}
+            stepLabels={stepLabels}
+            energyUnit={units.energyUnit}
+            temperatureUnit={units.temperatureUnit}
+            isReadOnly={!canEdit}
+            onSelectStep={handleSelectStep}
+            onMoveStep={handleMoveStep}
+            onLink={handleLink}
+            onRemoveLink={handleRemoveLink}
+            onDropStep={handleDrop}
+            onInit={(instance) => {
+              flow.current = instance;
+            }}
+          />
+        </div>
+        <div className="h-[34rem] overflow-y-auto rounded-lg border border-paper-edge bg-white p-3">
+          <SidePanel units={units} canEdit={canEdit} evaluation={evaluation} results={results} stepLabels={stepLabels} />
+        </div>
+      </div>
+      <p className="text-xs text-ink-faint">{canEdit ? SHORTCUT_HELP : 'F fits the view · select a step to read its details'}</p>
+      {/* Below the board, so warnings appearing never shift the canvas under the pointer. */}
+      <RouteWarnings warnings={evaluation?.warnings ?? []} stepLabels={stepLabels} error={error} />
+
+      <div className="grid gap-3 lg:grid-cols-[minmax(0,1fr)_22rem]">
+        <section aria-label="Free-energy ladder" className="rounded-lg border border-paper-edge bg-white p-3">
+          <FreeEnergyLadder
+            evaluation={evaluation}
+            energyUnit={units.energyUnit}
+            selectedStepId={selectedStepId}
+            onSelectStep={(id) => store.getState().selectStep(id)}
+            stepLabels={ladderLabels}
+            exportName={name}
+          />
+        </section>
+        <RemediesPanel
+          step={selectedResult}
+          energyUnit={units.energyUnit}
+          temperatureUnit={units.temperatureUnit}
+          canEdit={canEdit}
+          stepLabels={stepLabels}
+          onApplyTemperature={(T_K) => updateSelected({ temperature: temperatureQuantity(T_K) })}
+          onApplyConditions={(patch) => updateSelected(patch)}
+          onAddCoupledStep={(equation, temperature) => {
+            const at = store.getState().doc.steps.find((s) => s.id === selectedStepId)?.position ?? { x: 0, y: 0 };
+            store.getState().addStep({ equation, temperature, position: { x: at.x, y: at.y + 220 } });
+          }}
+        />
+      </div>
+      {canEdit ? <ConflictDialog routeId={routeId} /> : null}
+    </div>
+  );
+}

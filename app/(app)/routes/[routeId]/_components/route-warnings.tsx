@@ -1,0 +1,25 @@
+import type { RouteWarning } from '@/lib/thermo/route';
+
+// The engine names steps by id; people know them as "Step n".
+function withLabels(message: string, stepLabels: Record<string, string>): string {
+  return Object.entries(stepLabels).reduce((text, [id, label]) => text.split(id).join(label), message);
+}
+
+export function RouteWarnings({ warnings, stepLabels, error }: { warnings: RouteWarning[]; stepLabels: Record<string, string>; error: Error | null }) {
+  if (!error && warnings.length === 0) return null;
+  return (
+    <section aria-labelledby="route-warnings-heading" className="rounded-md border border-marginal/40 bg-marginal-bg px-3 py-2 text-sm text-ink">
+      <h2 id="route-warnings-heading" className="font-semibold text-marginal">
+        <span aria-hidden="true">⚠ </span>Route warnings
+      </h2>
+      <ul className="mt-1 list-disc space-y-0.5 pl-5">
+        {error ? <li>The route could not be evaluated: {error.message} (the last result is still shown).</li> : null}
+        {warnings.map((w, i) => (
+          <li key={`${w.code}-${i}`}>
+            {withLabels(w.message, stepLabels)}
+          </li>
+        ))}
+      </ul>
+    </section>
+  );
+}

@@ -1,0 +1,89 @@
+'use client';
+
+import { useQuery } from '@tanstack/react-query';
+import { useId, useState } from 'react';
+import { writeStepPayload, type StepDragPayload } from '@/components/canvas/step-drop';
+import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
+import { paletteQuery } from '@/lib/queries/routes';
+
+function PaletteItem({ title, equation, onAdd }: { title: string | null; equation: string; onAdd: (payload: StepDragPayload) => void }) {
+  const name = title ?? equation;
+  return (
+    <li
+      draggable
+      onDragStart={(event) => writeStepPayload(event.dataTransfer, { equation })}
+      className="group flex cursor-grab items-start justify-between gap-2 rounded-md border border-paper-edge bg-white px-2 py-1.5 text-xs hover:border-pine-500 active:cursor-grabbing"
+      data-testid="palette-item"
+    >
+      <span className="min-w-0">
+        {title ? <span className="block font-medium text-ink">{title}</span> : null}
+        {equation ? <span className="block break-words font-mono text-[11px] text-ink-soft">{equation}</span> : null}
+      </span>
+      <button
+        type="button"
+        onClick={() => onAdd({ equation })}
+        aria-label={`Add step: ${name}${title && equation ? ` (${equation})` : ''}`}
+        className="shrink-0 rounded border border-paper-edge px-1.5 py-0.5 text-pine-700 hover:bg-pine-50"
+      >
+        Add
+      </button>
+    </li>
+  );
+}
+
+// Steps to drag onto the board: a blank one, the team's recent equations, library reactions by species.
+export function StepPalette({ onAdd }: { onAdd: (payload: StepDragPayload) => void }) {
+  const searchId = useId();
+  const [species, setSpecies] = useState('');
+  const wanted = useDebouncedValue(species.trim(), 300);
+  const palette = useQuery(paletteQuery(wanted));
+
+  return (
+    <aside aria-label="Step palette" className="flex h-full flex-col gap-3 overflow-y-auto pr-1">
+      <section>
+        <h2 className="mb-1 text-xs font-semibold uppercase tracking-wide text-ink-faint">New step</h2>
+        <ul>
+          <PaletteItem title="Blank step" equation="" onAdd={onAdd} />
+        </ul>
+      </section>
+      <section>
+        <h2 className="mb-1 text-xs font-semibold uppercase tracking-wide text-ink-faint">Recent in your team</h2>
+        {palette.data && palette.data.recent.length > 0 ? (
+          <ul className="flex flex-col gap-1">
+            {palette.data.recent.map((equation) => (
+              <PaletteItem key={equation} title={null} equation={equation} onAdd={onAdd} />
+            ))}
+          </ul>
+        ) : (
+          <p className="text-xs text-ink-faint">{palette.isPending ? 'Loading…' : 'None yet.'}</p>
+        )}
+      </section>
+      <section>
+        <h2 className="mb-1 text-xs font-semibold uppercase tracking-wide text-ink-faint">Library</h2>
+        <label htmlFor={searchId} className="text-xs text-ink-soft">
+          Reactions with species
+        </label>
+        <input
+          id={searchId}
+          type="search"
+          value={species}
+          onChange={(e) => setSpecies(e.target.value)}
+          placeholder="e.g. CH3OH(g)"
+          className="mb-1.5 mt-0.5 w-full rounded-md border border-paper-edge bg-white px-2 py-1 font-mono text-xs outline-none focus:border-pine-500 focus:ring-2 focus:ring-pine-100"
+        />
+        {palette.isError ? <p className="text-xs text-uphill">{palette.error.message}</p> : null}
+        {palette.data ? (
+          palette.data.library.length > 0 ? (
+            <ul className="flex flex-col gap-1" aria-busy={palette.isFetching}>
+              {palette.data.library.map((reaction) => (
+                <PaletteItem key={reaction.id} title={reaction.name} equation={reaction.equation} onAdd={onAdd} />
+              ))}
+            </ul>
+          ) : (
+            <p className="text-xs text-ink-faint">No library reaction has “{wanted}”.</p>
+          )
+        ) : null}
+      </section>
+    </aside>
+  );
+}

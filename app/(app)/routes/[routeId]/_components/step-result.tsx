@@ -1,0 +1,40 @@
+import { ClassBadge } from '@/components/ladder/class-badge';
+import { formatEnergy, formatNumber, formatTemperature, type EnergyUnit, type TemperatureUnit } from '@/components/ladder/energy-format';
+import type { RouteStepResult } from '@/lib/thermo/route';
+
+function Fact({ term, value }: { term: string; value: string }) {
+  return (
+    <div className="flex justify-between gap-2">
+      <dt className="text-ink-soft">{term}</dt>
+      <dd className="tabular-nums text-ink">{value}</dd>
+    </div>
+  );
+}
+
+// The engine's figures for the selected step; its notes and remedies are in the remedies panel below.
+export function StepResult({ result, energyUnit, temperatureUnit }: { result: RouteStepResult | undefined; energyUnit: EnergyUnit; temperatureUnit: TemperatureUnit }) {
+  if (!result) return <p className="text-xs text-ink-faint">Not evaluated yet.</p>;
+  const engine = result.result;
+  return (
+    <section aria-label="Evaluation of this step" className="flex flex-col gap-1.5 text-xs" data-testid="step-result">
+      <div>
+        <ClassBadge cls={result.class} isSignUncertain={result.signUncertain} />
+      </div>
+      {result.error ? <p className="text-uphill">{result.error.message}</p> : null}
+      {engine ? (
+        <dl className="flex flex-col gap-0.5">
+          <Fact
+            term={engine.deltaG_kJ === null ? 'ΔG (standard state)' : 'ΔG at conditions'}
+            value={formatEnergy(engine.deltaG_kJ ?? engine.deltaG0_kJ, energyUnit, { perMol: true })}
+          />
+          <Fact term={`ΔG° at ${formatTemperature(engine.temperature_K, temperatureUnit)}`} value={formatEnergy(engine.deltaG0_kJ, energyUnit, { perMol: true })} />
+          <Fact term="ΔH°" value={formatEnergy(engine.deltaH0_kJ, energyUnit, { perMol: true })} />
+          <Fact term="K" value={formatNumber(engine.K)} />
+          <Fact term="ΔG° changes sign at" value={formatTemperature(engine.crossover_K, temperatureUnit)} />
+          <Fact term="Extent for the target" value={result.extent_mol === null ? 'not on the path' : `${formatNumber(result.extent_mol)} mol`} />
+          <Fact term="Share of route ΔG" value={formatEnergy(result.deltaG_kJ, energyUnit)} />
+        </dl>
+      ) : null}
+    </section>
+  );
+}

@@ -1,0 +1,85 @@
+'use client';
+
+import { memo, useEffect } from 'react';
+import { Handle, Position, useUpdateNodeInternals, type NodeProps } from 'reactflow';
+import type { StepClass } from '@/lib/thermo/route';
+import { NodeClassBadge } from './class-badge';
+
+export interface StepNodeData {
+  label: string;
+  equation: string;
+  reactants: string[];
+  products: string[];
+  temperatureText: string;
+  /** "ΔG" at the step's conditions, or "ΔG°" when it gives none */
+  deltaGName: string;
+  deltaGText: string;
+  cls: StepClass | null;
+  signUncertain: boolean;
+}
+
+export const reactantHandleId = (species: string) => `r:${species}`;
+export const productHandleId = (species: string) => `p:${species}`;
+export const speciesOfHandle = (handleId: string | null | undefined) => (handleId ? handleId.slice(2) : null);
+
+const BORDER: Record<StepClass, string> = {
+  downhill: 'border-l-downhill',
+  marginal: 'border-l-marginal',
+  uphill: 'border-l-uphill',
+  error: 'border-l-ink-faint',
+};
+
+const HANDLE_CLASS = '!h-2.5 !w-2.5 !border-2 !border-white !bg-pine-500';
+
+function StepNodeView({ id, data, selected }: NodeProps<StepNodeData>) {
+  const updateNodeInternals = useUpdateNodeInternals();
+  const handleKey = `${data.reactants.join('|')}>${data.products.join('|')}`;
+  // Handles follow the equation; React Flow must re-measure them when the species change.
+  useEffect(() => updateNodeInternals(id), [id, handleKey, updateNodeInternals]);
+
+  return (
+    <div
+      className={`w-64 rounded-md border border-l-4 bg-white text-xs shadow-sm ${data.cls ? BORDER[data.cls] : 'border-l-paper-edge'} ${
+        selected ? 'border-brass-500 ring-2 ring-brass-500/60' : 'border-paper-edge'
+      }`}
+      data-testid="step-node"
+    >
+      <div className="flex items-center justify-between gap-2 border-b border-paper-edge px-2 py-1">
+        <span className="font-semibold text-ink-soft">{data.label}</span>
+        <NodeClassBadge cls={data.cls} signUncertain={data.signUncertain} />
+      </div>
+      <p className="break-words px-2 py-1.5 font-mono text-[12px] leading-snug text-ink">{data.equation || <span className="text-ink-faint">blank step: type an equation</span>}</p>
+      <div className="flex justify-between gap-2 px-2 pb-1 text-ink-soft">
+        <span>T {data.temperatureText}</span>
+        <span className="tabular-nums">
+          {data.deltaGName} {data.deltaGText}
+        </span>
+      </div>
+      {data.reactants.length + data.products.length > 0 ? (
+        <div className="flex justify-between gap-3 border-t border-paper-edge py-1 font-mono text-[10px] text-ink-faint">
+          <ul aria-label="Consumes" className="flex flex-col gap-1">
+            {data.reactants.map((species) => (
+              <li key={species} className="relative pl-2">
+                <Handle type="target" id={reactantHandleId(species)} position={Position.Left} className={HANDLE_CLASS} title={`consumes ${species}`} />
+                {species}
+              </li>
+            ))}
+          </ul>
+          <ul aria-label="Produces" className="flex flex-col items-end gap-1">
+            {data.products.map((species) => (
+              <li key={species} className="relative pr-2">
+                {species}
+                <Handle type="source" id={productHandleId(species)} position={Position.Right} className={HANDLE_CLASS} title={`produces ${species}`} />
+              </li>
+            ))}
+          </ul>
+        </div>
+      ) : null}
+    </div>
+  );
+}
+
+export const StepNode = memo(StepNodeView);
+
+// Defined once at module level: a new object each render would remount every node.
+export const STEP_NODE_TYPES = { step: StepNode };

@@ -1,0 +1,143 @@
+'use client';
+
+import { useMemo, useRef } from 'react';
+import { MarkerType, type Edge, type Node } from 'reactflow';
+import { equationSpecies } from '@/lib/route-editor/equation-species';
+import { temperatureKOf } from '@/lib/route-editor/temperature-text';
+import type { LinkInput, StepInput } from '@/lib/schemas/route';
+import type { RouteStepResult } from '@/lib/thermo/route';
+import { formatEnergy, formatTemperature, type EnergyUnit, type TemperatureUnit } from '../ladder/energy-format';
+import { productHandleId, reactantHandleId, type StepNodeData } from './step-node';
+
+export type NodeSize = { width: number; height: number };
+
+function nodeData(step: StepInput, label: string, result: RouteStepResult | undefined, energyUnit: EnergyUnit, temperatureUnit: TemperatureUnit): StepNodeData {
+  const { reactants, products } = equationSpecies(step.equation);
+  const T = result?.result?.temperature_K ?? temperatureKOf(step.temperature);
+  const engine = result?.result ?? null;
+  const deltaG = engine ? (engine.deltaG_kJ ?? engine.deltaG0_kJ) : null;
+  return {
+    label,
+    equation: step.equation,
+    reactants,
+    products,
+    temperatureText: T === null ? (step.temperature ?? '') : formatTemperature(T, temperatureUnit),
+    deltaGName: engine && engine.deltaG_kJ === null ? 'ΔG°' : 'ΔG',
+    deltaGText: formatEnergy(deltaG, energyUnit, { perMol: true }),
+    cls: result?.class ?? null,
+    signUncertain: result?.signUncertain ?? false,
+  };
+}
+
+function sameData(a: StepNodeData, b: StepNodeData): boolean {
+  return (
+    a.label === b.label &&
+    a.equation === b.equation &&
+    a.temperatureText === b.temperatureText &&
+    a.deltaGName === b.deltaGName &&
+    a.deltaGText === b.deltaGText &&
+    a.cls === b.cls &&
+    a.signUncertain === b.signUncertain &&
+    a.reactants.join('|') === b.reactants.join('|') &&
+    a.products.join('|') === b.products.join('|')
+  );
+}
+
+interface CachedNode {
+  step: StepInput;
+  result: RouteStepResult | undefined;
+  label: string;
+  data: StepNodeData;
+}
+
+// Keeps each node's data object while its inputs are unchanged, so dragging one of 200 nodes re-renders one.
+export function useStepNodes({
+  steps,
+  results,
+  selectedStepId,
+  sizes,
+  stepLabels,
+  energyUnit,
+  temperatureUnit,
+}: {
+  steps: StepInput[];
+  stepLabels: Record<string, string>;
+  results: Map<string, RouteStepResult>;
+  selectedStepId: string | null;
+  sizes: Record<string, NodeSize>;
+  energyUnit: EnergyUnit;
+  temperatureUnit: TemperatureUnit;
+}): Node<StepNodeData>[] {
+  const cache = useRef({ energyUnit, temperatureUnit, byId: new Map<string, CachedNode>() });
+  return useMemo(() => {
+    const previous = cache.current.energyUnit === energyUnit && cache.current.temperatureUnit === temperatureUnit ? cache.current.byId : new Map<string, CachedNode>();
+    const byId = new Map<string, CachedNode>();
+    const nodes = steps.map((step, index) => {
+      const result = results.get(step.id);
+      const label = stepLabels[step.id] ?? `Step ${index + 1}`;
+      const hit = previous.get(step.id);
+      let data: StepNodeData;
+      if (hit && hit.result === result && hit.label === label && (hit.step === step || hit.step.equation === step.equation && hit.step.temperature === step.temperature)) {
+        data = hit.data;
+      } else {
+        const fresh = nodeData(step, label, result, energyUnit, temperatureUnit);
+        data = hit && sameData(hit.data, fresh) ? hit.data : fresh;
+      }
+      byId.set(step.id, { step, result, label, data });
+      const size = sizes[step.id];
+      return {
+        id: step.id,
+        type: 'step',
+        position: step.position,
+        data,
+        selected: step.id === selectedStepId,
+        deletable: false,
+        ariaLabel: `${data.label}: ${step.equation || 'blank'}`,
+        ...(size ? { width: size.width, height: size.height } : {}),
+      } satisfies Node<StepNodeData>;
+    });
+    cache.current = { energyUnit, temperatureUnit, byId };
+    return nodes;
+  }, [steps, results, selectedStepId, sizes, stepLabels, energyUnit, temperatureUnit]);
+}
+
+export const linkEdgeId = (link: LinkInput) => `${link.from}>${link.to}:${link.species}`;
+
+const ARROW_END = { type: MarkerType.ArrowClosed, width: 16, height: 16 };
+const LABEL_STYLE = { fontFamily: 'ui-monospace, monospace', fontSize: 10 };
+const DANGLING_STYLE = { strokeDasharray: '4 3' };
+
+export function useLinkEdges(links: LinkInput[], steps: StepInput[], selectedEdgeId: string | null): Edge[] {
+  // Edges depend on equations, not positions: a drag must not rebuild every edge.
+  const equationsKey = steps.map((s) => `${s.id}\u0000${s.equation}`).join('\u0001');
+  return useMemo(() => {
+    const speciesOf = new Map(
+      equationsKey
+        .split('\u0001')
+        .filter(Boolean)
+        .map((entry) => {
+          const [id = '', equation = ''] = entry.split('\u0000');
+          return [id, equationSpecies(equation)] as const;
+        }),
+    );
+    return links.map((link) => {
+      const id = linkEdgeId(link);
+      // A link whose species left the equation still shows, from the node's first handle; the route warnings name it.
+      const hasSource = speciesOf.get(link.from)?.products.includes(link.species) ?? false;
+      const hasTarget = speciesOf.get(link.to)?.reactants.includes(link.species) ?? false;
+      return {
+        id,
+        source: link.from,
+        target: link.to,
+        sourceHandle: hasSource ? productHandleId(link.species) : null,
+        targetHandle: hasTarget ? reactantHandleId(link.species) : null,
+        label: link.species,
+        selected: id === selectedEdgeId,
+        markerEnd: ARROW_END,
+        labelStyle: LABEL_STYLE,
+        style: hasSource && hasTarget ? undefined : DANGLING_STYLE,
+        data: link,
+      } satisfies Edge<LinkInput>;
+    });
+  }, [links, equationsKey, selectedEdgeId]);
+}

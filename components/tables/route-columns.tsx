@@ -1,0 +1,108 @@
+'use client';
+
+import type { ColumnDef } from '@tanstack/react-table';
+import Link from 'next/link';
+import type { RouteSummaryDto } from '@/lib/services/routes/route-dto';
+import { formatEnergy, type EnergyUnit } from '../ladder/energy-format';
+import { Button } from '../ui/button';
+
+const DATE_TIME = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' });
+
+export const ROUTE_NUMERIC_COLUMNS = ['steps', 'overallDeltaG', 'uphillSteps'];
+
+function UphillCell({ count }: { count: number | null }) {
+  if (count === null) return <span className="text-ink-faint">not evaluated</span>;
+  if (count === 0) {
+    return (
+      <span className="inline-flex items-center gap-1 text-downhill">
+        <span aria-hidden="true">↓</span> none
+      </span>
+    );
+  }
+  return (
+    <span className="inline-flex items-center gap-1 rounded bg-uphill-bg px-1.5 font-medium text-uphill">
+      <span aria-hidden="true">↑</span> {count} uphill
+    </span>
+  );
+}
+
+export function routeColumns({
+  energyUnit,
+  canEdit,
+  busyRouteId,
+  onDuplicate,
+  onArchive,
+}: {
+  energyUnit: EnergyUnit;
+  canEdit: boolean;
+  busyRouteId: number | null;
+  onDuplicate: (route: RouteSummaryDto) => void;
+  onArchive: (route: RouteSummaryDto, archived: boolean) => void;
+}): ColumnDef<RouteSummaryDto>[] {
+  const columns: ColumnDef<RouteSummaryDto>[] = [
+    {
+      id: 'name',
+      header: 'Name',
+      cell: ({ row }) => (
+        <div>
+          <Link href={`/routes/${row.original.id}`} className="font-medium text-pine-700 underline-offset-2 hover:underline">
+            {row.original.name}
+          </Link>
+          {row.original.originRouteId ? <span className="ml-1.5 text-xs text-ink-faint">alternative</span> : null}
+        </div>
+      ),
+    },
+    { id: 'target', header: 'Target', cell: ({ row }) => <span className="font-mono text-xs">{row.original.target}</span> },
+    {
+      id: 'status',
+      header: 'Status',
+      enableSorting: false,
+      cell: ({ row }) => (
+        <span className="rounded bg-paper-deep px-1.5 py-0.5 text-xs capitalize text-ink-soft">{row.original.archived ? 'archived' : row.original.status}</span>
+      ),
+    },
+    { id: 'steps', header: 'Steps', cell: ({ row }) => row.original.stepCount },
+    {
+      id: 'overallDeltaG',
+      header: () => <span title="Overall free-energy change per mol of target, at each step's conditions">Overall ΔG</span>,
+      cell: ({ row }) => formatEnergy(row.original.overallDeltaG_kJ, energyUnit, { perMol: true }),
+    },
+    { id: 'uphillSteps', header: 'Uphill steps', cell: ({ row }) => <UphillCell count={row.original.uphillSteps} /> },
+    {
+      id: 'updatedAt',
+      header: 'Last edited',
+      cell: ({ row }) => (
+        <span className="text-ink-soft">
+          {row.original.updatedBy}
+          <br />
+          <time dateTime={row.original.updatedAt} className="text-xs text-ink-faint">
+            {DATE_TIME.format(new Date(row.original.updatedAt))}
+          </time>
+        </span>
+      ),
+    },
+  ];
+  if (!canEdit) return columns;
+  return [
+    ...columns,
+    {
+      id: 'actions',
+      header: () => <span className="sr-only">Actions</span>,
+      enableSorting: false,
+      cell: ({ row }) => {
+        const route = row.original;
+        const isBusy = busyRouteId === route.id;
+        return (
+          <div className="flex justify-end gap-1 whitespace-nowrap">
+            <Button variant="quiet" disabled={isBusy} onClick={() => onDuplicate(route)} aria-label={`Duplicate ${route.name} as an alternative`}>
+              Duplicate as alternative
+            </Button>
+            <Button variant="quiet" disabled={isBusy} onClick={() => onArchive(route, !route.archived)} aria-label={`${route.archived ? 'Unarchive' : 'Archive'} ${route.name}`}>
+              {route.archived ? 'Unarchive' : 'Archive'}
+            </Button>
+          </div>
+        );
+      },
+    },
+  ];
+}

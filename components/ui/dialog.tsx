@@ -1,0 +1,50 @@
+'use client';
+
+import { useEffect, useId, useRef, type ReactNode } from 'react';
+
+// The native modal <dialog>: focus is trapped and Escape closes it without extra code.
+export function Dialog({
+  open,
+  title,
+  onClose,
+  children,
+  dismissable = true,
+}: {
+  open: boolean;
+  title: string;
+  onClose: () => void;
+  children: ReactNode;
+  /** false for choices that must be made (Escape does nothing) */
+  dismissable?: boolean;
+}) {
+  const ref = useRef<HTMLDialogElement>(null);
+  const titleId = useId();
+
+  useEffect(() => {
+    const dialog = ref.current;
+    if (!dialog) return;
+    if (open && !dialog.open) dialog.showModal();
+    if (!open && dialog.open) dialog.close();
+  }, [open]);
+
+  return (
+    <dialog
+      ref={ref}
+      aria-labelledby={titleId}
+      onCancel={(event) => {
+        event.preventDefault();
+        if (dismissable) onClose();
+      }}
+      className="m-auto w-full max-w-md rounded-lg border border-paper-edge bg-white p-0 text-ink shadow-xl backdrop:bg-ink/30"
+    >
+      {open ? (
+        <div className="flex flex-col gap-3 p-5">
+          <h2 id={titleId} className="text-base font-semibold">
+            {title}
+          </h2>
+          {children}
+        </div>
+      ) : null}
+    </dialog>
+  );
+}

@@ -1,0 +1,13 @@
+'use client';
+
+import { useEffect, useState } from 'react';
+
+/** The value as it was `delayMs` after it last changed; typing and dragging settle before requests go out. */
+export function useDebouncedValue<T>(value: T, delayMs: number): T {
+  const [settled, setSettled] = useState(value);
+  useEffect(() => {
+    const timer = setTimeout(() => setSettled(value), delayMs);
+    return () => clearTimeout(timer);
+  }, [value, delayMs]);
+  return settled;
+}
