@@ -164,3 +164,16 @@ describe('routes: evaluation and palette', () => {
     expect(foreign.recent).not.toContain(SAMPLE_STEPS[1]!.equation);
   });
 });
+
+describe('routes list summary', () => {
+  it('shows overall ΔG per mol of target, whatever the planned amount', async () => {
+    const one = await newRoute('Per mol one');
+    const two = await newRoute('Per mol two');
+    await callRoute(saveRoute, { method: 'PUT', userId: w.designerId, params: { routeId: String(one.id) }, body: saveBody(one) });
+    const saved = await callRoute(saveRoute, { method: 'PUT', userId: w.designerId, params: { routeId: String(two.id) }, body: saveBody(two, { targetAmount: '2 mol' }) });
+    const total2 = (saved.body as { evaluation: { overall: { deltaG_kJ: number } } }).evaluation.overall.deltaG_kJ;
+    const list = (await callRoute(listRoutes, { userId: w.designerId, path: '/api/routes?q=Per%20mol&sort=name&dir=asc' })).body as { items: { overallDeltaG_kJ: number }[] };
+    expect(list.items[1]!.overallDeltaG_kJ).toBeCloseTo(total2 / 2, 9);
+    expect(list.items[0]!.overallDeltaG_kJ).toBeCloseTo(list.items[1]!.overallDeltaG_kJ, 9);
+  });
+});

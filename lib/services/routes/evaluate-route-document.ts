@@ -1,4 +1,5 @@
 import { ThermoError } from '../../thermo/errors';
+import { parseAmount } from '../../thermo/units';
 import { evaluateRoute, type DriverReaction, type RouteEvaluateResponse } from '../../thermo/route';
 import type { LinkInput, StepInput } from '../../schemas/route';
 
@@ -39,5 +40,7 @@ export function evaluateRouteDocument(route: RouteLike, drivers: DriverReaction[
 
 export function summariseEvaluation(route: RouteLike, evaluation: RouteEvaluation) {
   if ('error' in evaluation) return { stepCount: route.steps.length, overallDgKj: null, uphillSteps: null };
-  return { stepCount: route.steps.length, overallDgKj: evaluation.overall.deltaG_kJ, uphillSteps: evaluation.overall.uphillSteps };
+  // The list shows ΔG per mol of target, whatever amount the route is planned for.
+  const targetMol = parseAmount(route.targetAmount, 'targetAmount');
+  return { stepCount: route.steps.length, overallDgKj: evaluation.overall.deltaG_kJ / targetMol, uphillSteps: evaluation.overall.uphillSteps };
 }
