@@ -86,6 +86,23 @@ export async function runEditorDragBench(baseUrl: string, { moves = 300 } = {}):
     const after = (await nodes.first().boundingBox())!;
     if (Math.abs(after.x - before.x) < 1 && Math.abs(after.y - before.y) < 1) throw new Error('the node did not move: the drag never reached it');
 
+    // Condition edit → ladder redrawn: the debounce, the server evaluation of all 200 steps and the render.
+    await nodes.nth(1).click();
+    const temperature = page.getByLabel(/^Temperature/);
+    const ladderHtml = () => page.evaluate(`document.querySelector('svg[aria-label^="Free-energy ladder"]')?.innerHTML ?? ''`) as Promise<string>;
+    const updates: number[] = [];
+    for (let i = 0; i < 8; i += 1) {
+      const before = await ladderHtml();
+      const editStarted = performance.now();
+      await temperature.fill(String(420 + (i % 2) * 60 + i));
+      await page.waitForFunction(
+        (old) => (document.querySelector('svg[aria-label^="Free-energy ladder"]')?.innerHTML ?? '') !== old,
+        before,
+        { timeout: 10_000, polling: 'raf' },
+      );
+      updates.push(performance.now() - editStarted);
+    }
+
     return {
       nodes: NODES,
       load_to_evaluated_ms: round(loadMs, 0),
@@ -96,6 +113,8 @@ export async function runEditorDragBench(baseUrl: string, { moves = 300 } = {}):
       frame_p95_ms: round(percentile(frames, 95)),
       frame_max_ms: round(Math.max(...frames)),
       frames_over_50ms: frames.filter((f) => f > 50).length,
+      ladder_update_p50_ms: round(percentile(updates, 50), 0),
+      ladder_update_max_ms: round(Math.max(...updates), 0),
     };
   } finally {
     await browser.close();
