@@ -90,7 +90,7 @@ describe('library contents', () => {
     );
   });
 
-  it('keeps the corrected NBS ΔfH° of CH3CHO(g), −166.19 kJ/mol (data README, transcription error)', () => {
+  it('keeps the corrected NBS ΔfH° of CH3CHO(g), −166.19 kJ/mol (data README: an error in the digitised NBS file)', () => {
     expect(builtinLookup.get('CH3CHO(g)')!.dfH_kJ).toBe(-166.19);
   });
 });
