@@ -177,7 +177,7 @@ function CouplingCard({ r, units, canEdit, onAdd }: { r: CouplingRemedy; units: 
       <Cautions words={warningWords(r.warnings)} />
       {canEdit ? (
         <Button variant="secondary" className="mt-2" onClick={() => onAdd(r)}>
-          Add coupled step
+          Apply coupling to this step
         </Button>
       ) : null}
     </Card>

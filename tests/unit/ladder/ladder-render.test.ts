@@ -83,14 +83,14 @@ describe('RemediesPanel', () => {
     expect(html).toContain(SAFETY_NOTE);
     expect(html).toContain(COUPLING_NOTE);
     expect(html).toContain('Use this temperature (619.85 °C)');
-    expect(html).toContain('Add coupled step');
+    expect(html).toContain('Apply coupling to this step');
     expect(html).toContain('Gas evolution');
   });
 
   it('hides every action from readers', () => {
     const html = panel('reform', { canEdit: false });
     expect(html).not.toContain('Use this temperature');
-    expect(html).not.toContain('Add coupled step');
+    expect(html).not.toContain('Apply coupling to this step');
     expect(html).not.toContain('Apply these conditions');
     expect(html).toContain('Temperature');
   });

@@ -168,8 +168,8 @@ export function RouteEditor({ routeId, canEdit, units }: { routeId: number; canE
           onApplyTemperature={(T_K) => updateSelected({ temperature: temperatureQuantity(T_K) })}
           onApplyConditions={(patch) => updateSelected(patch)}
           onAddCoupledStep={(equation, temperature) => {
-            const at = store.getState().doc.steps.find((s) => s.id === selectedStepId)?.position ?? { x: 0, y: 0 };
-            store.getState().addStep({ equation, temperature, position: { x: at.x, y: at.y + 220 } });
+            // The coupled reaction takes the step's place (one undoable edit); adding it beside the step would count the step twice.
+            if (selectedStepId) store.getState().updateStep(selectedStepId, { equation, temperature });
           }}
         />
       </div>
