@@ -10,8 +10,10 @@ import { speciesRange } from '../species-state';
 import { num } from './route-format';
 import type { TemperatureRemedy, TemperatureSample } from './route-types';
 
-const GRID_POINTS = 96;
-const BISECTIONS = 50;
+// The suggestion is rounded to whole kelvin, so the root needs 1e-4 K, not machine precision.
+const GRID_POINTS = 48;
+const BISECTIONS = 40;
+const ROOT_TOLERANCE_K = 1e-4;
 const SAMPLE_OFFSET_K = 50;
 const T_FLOOR_K = 10;
 
@@ -33,7 +35,7 @@ function commonRange(species: readonly ReactionSpecies[]): [number, number] | nu
 function root(g: (T: number) => number, a: number, b: number): number {
   let [lo, hi] = a < b ? [a, b] : [b, a];
   const signLo = Math.sign(g(lo));
-  for (let i = 0; i < BISECTIONS && hi - lo > 1e-9 * hi; i++) {
+  for (let i = 0; i < BISECTIONS && hi - lo > ROOT_TOLERANCE_K; i++) {
     const mid = 0.5 * (lo + hi);
     if (Math.sign(g(mid)) === signLo) lo = mid;
     else hi = mid;

@@ -1,6 +1,7 @@
 // Net stoichiometric numbers of a step as written (products +, reactants −), exact, read by parsing
 // alone, so that a step the engine rejects (unknown species, unbalanced) still passes its extent on.
 import { fraction, type Fraction } from 'mathjs';
+import { BoundedMemo } from '../bounded-memo';
 import { parseEquation } from '../equation';
 import { isThermoError, type ThermoError } from '../errors';
 import { parseSpecies } from '../notation';
@@ -18,7 +19,25 @@ export function nuOf(nu: Stoichiometry, key: string): number {
   return nu.get(key)?.valueOf() ?? 0;
 }
 
-export function readStoichiometry(equation: string, lookup: SpeciesLookup): { nu: Stoichiometry | null; error: ThermoError | null } {
+type StoichiometryRead = { nu: Stoichiometry | null; error: ThermoError | null };
+
+// Per lookup, because a team's species can shadow built-in ones. Callers never mutate the maps.
+const memos = new WeakMap<SpeciesLookup, BoundedMemo<string, StoichiometryRead>>();
+
+export function readStoichiometry(equation: string, lookup: SpeciesLookup): StoichiometryRead {
+  let memo = memos.get(lookup);
+  if (!memo) {
+    memo = new BoundedMemo(1000);
+    memos.set(lookup, memo);
+  }
+  const hit = memo.get(equation);
+  if (hit) return hit;
+  const read = parseStoichiometry(equation, lookup);
+  memo.set(equation, read);
+  return read;
+}
+
+function parseStoichiometry(equation: string, lookup: SpeciesLookup): StoichiometryRead {
   try {
     const eq = parseEquation(equation, { resolveAlias: (n, p) => lookup.resolveAlias(n, p) });
     const nu: Stoichiometry = new Map();
