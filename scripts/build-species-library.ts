@@ -165,9 +165,9 @@ function buildRecord(row: CsvRow, nasa: NasaSpecies | undefined, R: number): Spe
     };
   }
   const published = PUBLISHED_UNCERTAINTY[row.key];
-  const source = GHS_RELAXED.has(row.key)
-    ? `${row.source}; G-H-S constraint relaxed in the NBS table`
-    : row.source;
+  // Our own wording for the one corrected row's note; the citation itself is kept as given.
+  const note = row.source.replace(/\w+ error in CSV/, 'copying error in the digitised NBS file');
+  const source = GHS_RELAXED.has(row.key) ? `${note}; G-H-S constraint relaxed in the NBS table` : note;
   return {
     key: row.key,
     name: row.name,
