@@ -2,7 +2,6 @@ import type { Sequelize } from 'sequelize';
 import type { LinkInput, StepInput } from '../../lib/schemas/route';
 import { evaluateRouteDocument, summariseEvaluation } from '../../lib/services/routes/evaluate-route-document';
 import { stepRow } from '../../lib/services/routes/route-dto';
-import { DEFAULT_DRIVERS } from '../../lib/thermo/route';
 import type { Models } from '../models';
 import { DEMO_TEAM_NAME, DEMO_USERS } from './demo-team';
 
@@ -45,12 +44,11 @@ export async function seedDemoRoutes({ sequelize, models }: { sequelize: Sequeli
   if ((await models.Route.count({ where: { teamId: team.id } })) > 0) return { created: false };
   const designer = await models.User.findOne({ where: { email: DEMO_USERS.find((u) => u.role === 'designer')!.email } });
   if (!designer) return { created: false };
-  const drivers = DEFAULT_DRIVERS.map((d) => ({ ...d }));
   await sequelize.transaction(async (transaction) => {
     let originId: number | null = null;
     for (const plan of [STEAM_REFORMING, PARTIAL_OXIDATION]) {
       const doc = { target: 'CH3OH(g)', targetAmount: '1 mol', marginalThreshold_kJ: -17, steps: plan.steps, links: plan.links };
-      const summary = summariseEvaluation(doc, evaluateRouteDocument(doc, drivers));
+      const summary = summariseEvaluation(doc, evaluateRouteDocument(doc));
       const route: { id: number } = await models.Route.create(
         { teamId: team.id, name: plan.name, target: doc.target, targetAmount: doc.targetAmount, originRouteId: originId, createdById: designer.id, updatedById: designer.id, ...summary },
         { transaction },

@@ -1,6 +1,6 @@
 import { ThermoError } from '../../thermo/errors';
 import { parseAmount } from '../../thermo/units';
-import { evaluateRoute, type DriverReaction, type RouteEvaluateResponse } from '../../thermo/route';
+import { evaluateRoute, type RouteEvaluateResponse } from '../../thermo/route';
 import type { LinkInput, StepInput } from '../../schemas/route';
 
 interface RouteLike {
@@ -28,10 +28,11 @@ export function toRouteEvaluateRequest(route: RouteLike) {
   };
 }
 
+// The ladder and totals a save caches for the list; remedies are the evaluate endpoint's job.
 // A route the engine refuses as a whole (empty, cyclic) still saves; the answer carries the reason.
-export function evaluateRouteDocument(route: RouteLike, drivers: DriverReaction[]): RouteEvaluation {
+export function evaluateRouteDocument(route: RouteLike): RouteEvaluation {
   try {
-    return evaluateRoute(toRouteEvaluateRequest(route) as Parameters<typeof evaluateRoute>[0], { drivers });
+    return evaluateRoute(toRouteEvaluateRequest(route) as Parameters<typeof evaluateRoute>[0], { remedies: false });
   } catch (error) {
     if (error instanceof ThermoError) return { error: { code: error.code, message: error.message, field: error.field ?? null } };
     throw error;

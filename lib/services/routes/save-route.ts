@@ -3,7 +3,6 @@ import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
 import type { SaveRouteInput } from '../../schemas/route';
 import { recordEvent } from '../audit/record-event';
-import { listDrivers } from '../drivers/list-drivers';
 import { evaluateRouteDocument, summariseEvaluation } from './evaluate-route-document';
 import { getRoute } from './get-route';
 import { stepRow } from './route-dto';
@@ -24,8 +23,7 @@ function assertConsistent(input: SaveRouteInput): void {
 // Saves the whole route document if the caller saw the latest version; otherwise 409 with the current one.
 export async function saveRoute({ teamId, userId, routeId, input }: { teamId: number; userId: number; routeId: number; input: SaveRouteInput }) {
   assertConsistent(input);
-  const drivers = await listDrivers({ teamId });
-  const evaluation = evaluateRouteDocument(input, drivers);
+  const evaluation = evaluateRouteDocument(input);
   const summary = summariseEvaluation(input, evaluation);
   const { sequelize, models } = getDb();
   const route = await sequelize.transaction(async (transaction) => {

@@ -24,6 +24,8 @@ export { DEFAULT_MARGINAL_THRESHOLD_KJ };
 export interface RouteOptions {
   lookup?: SpeciesLookup;
   drivers?: readonly DriverReaction[];
+  /** false skips the remedy searches, for callers that need only the ladder and totals (default true) */
+  remedies?: boolean;
 }
 
 interface Evaluated {
@@ -149,7 +151,7 @@ export function evaluateRoute(request: RouteEvaluateRequest, opts: RouteOptions 
       cumulative0_kJ: cumulative0,
       class: cls,
       signUncertain: r?.uncertainty.signUncertain ?? false,
-      remedies: needsRemedy ? remediesFor(e, cls === 'uphill' ? 0 : threshold, ctx) : [],
+      remedies: needsRemedy && opts.remedies !== false ? remediesFor(e, cls === 'uphill' ? 0 : threshold, ctx) : [],
       notes: r ? stepNotes(r, xi, lookup) : [],
     };
   });

@@ -89,3 +89,22 @@ describe('safety notes', () => {
     expect(note.message).toMatch(/process-safety/);
   });
 });
+
+describe('remedies: false', () => {
+  it('gives the same ladder and classes without any remedy', () => {
+    const request = {
+      target: 'CH3OH(g)',
+      steps: [
+        { id: 's1', equation: 'CH4(g) + H2O(g) -> CO(g) + 3 H2(g)', temperature: '700 K' },
+        { id: 's2', equation: 'CO(g) + 2 H2(g) -> CH3OH(g)', temperature: '500 K' },
+      ],
+      links: [{ from: 's1', to: 's2', species: 'CO(g)' }],
+    };
+    const full = evaluateRoute(request);
+    const lean = evaluateRoute(request, { remedies: false });
+    expect(full.steps.some((s) => s.remedies.length > 0)).toBe(true);
+    expect(lean.steps.every((s) => s.remedies.length === 0)).toBe(true);
+    expect(lean.steps.map((s) => [s.class, s.cumulative_kJ])).toEqual(full.steps.map((s) => [s.class, s.cumulative_kJ]));
+    expect(lean.overall).toEqual(full.overall);
+  });
+});
