@@ -2,11 +2,12 @@
 
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { SortingState } from '@tanstack/react-table';
-import { useId, useMemo, useState } from 'react';
+import { useMemo, useState } from 'react';
 import { DataTable } from '@/components/tables/data-table';
 import { ROUTE_NUMERIC_COLUMNS, routeColumns } from '@/components/tables/route-columns';
 import { TablePagination } from '@/components/tables/table-pagination';
 import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/text-field';
 import { EmptyState } from '@/components/ui/empty-state';
 import { Notice } from '@/components/ui/notice';
 import { can } from '@/lib/auth/permissions';
@@ -27,7 +28,6 @@ export function RoutesClient() {
   const role = activeMembership(profile)?.role;
   const canEdit = can(role, 'route.edit');
   const energyUnit = profile?.preferences.energyUnit ?? 'kJ';
-  const searchId = useId();
 
   const [search, setSearch] = useState('');
   const q = useDebouncedValue(search.trim(), 300);
@@ -95,22 +95,17 @@ export function RoutesClient() {
   return (
     <div className="flex flex-col gap-3">
       <div className="flex flex-wrap items-end gap-3">
-        <div className="flex flex-col gap-1">
-          <label htmlFor={searchId} className="text-sm font-medium">
-            Search
-          </label>
-          <input
-            id={searchId}
-            type="search"
-            value={search}
-            onChange={(e) => {
-              setSearch(e.target.value);
-              setPage(1);
-            }}
-            placeholder="Name or target"
-            className="w-64 rounded-md border border-paper-edge bg-white px-2.5 py-1.5 text-sm shadow-sm outline-none focus:border-pine-500 focus:ring-2 focus:ring-pine-100"
-          />
-        </div>
+        <TextField
+          label="Search"
+          type="search"
+          value={search}
+          onChange={(e) => {
+            setSearch(e.target.value);
+            setPage(1);
+          }}
+          placeholder="Name or target"
+          className="w-64"
+        />
         <label className="flex items-center gap-1.5 pb-1.5 text-sm">
           <input
             type="checkbox"
