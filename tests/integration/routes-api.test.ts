@@ -177,3 +177,14 @@ describe('routes list summary', () => {
     expect(list.items[0]!.overallDeltaG_kJ).toBeCloseTo(list.items[1]!.overallDeltaG_kJ, 9);
   });
 });
+
+describe('palette search', () => {
+  it('finds library reactions by key, by library name and by a formula prefix', async () => {
+    const { searchLibraryReactions } = await import('@/lib/services/routes/search-library-reactions');
+    const byKey = searchLibraryReactions({ species: 'CH3OH(g)' }).map((r) => r.id);
+    expect(byKey.length).toBeGreaterThan(0);
+    expect(searchLibraryReactions({ species: 'methanol(g)' }).map((r) => r.id)).toEqual(byKey);
+    expect(searchLibraryReactions({ species: 'CH3OH' }).length).toBeGreaterThanOrEqual(byKey.length);
+    expect(searchLibraryReactions({ species: 'Unobtainium(s)' })).toEqual([]);
+  });
+});

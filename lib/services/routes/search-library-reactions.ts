@@ -18,11 +18,13 @@ const REACTIONS: LibraryReaction[] = reactionLibrary.reactions.map((r) => {
   return { ...r, consumes: parsed.reactants.map((t) => t.species.key), produces: parsed.products.map((t) => t.species.key) };
 });
 
+// A species as written ("CH3OH(g)", "methanol(g)") matches its library key; a bare start ("CH3") matches keys beginning so.
 export function searchLibraryReactions({ species, limit = 30 }: { species?: string; limit?: number }): LibraryReaction[] {
   const wanted = species?.trim();
   if (!wanted) return REACTIONS.slice(0, limit);
-  const needle = wanted.toLowerCase();
-  const key = builtinLookup.resolveAlias(needle.replace(/\(.*$/, ''), needle.match(/\(([^)]*)\)$/)?.[1] ?? '') ?? wanted;
-  const matches = (k: string) => k === key || k.toLowerCase().startsWith(needle);
+  const named = wanted.match(/^(.*)\(([^)]*)\)$/);
+  const key = (named && resolveAlias(named[1]!, named[2]!)) ?? wanted;
+  const prefix = wanted.toLowerCase();
+  const matches = (k: string) => k === key || k.toLowerCase().startsWith(prefix);
   return REACTIONS.filter((r) => r.consumes.some(matches) || r.produces.some(matches)).slice(0, limit);
 }
