@@ -1,6 +1,8 @@
 // Route benchmark: prints figures, asserts nothing. Run: npx tsx bench/route.bench.ts
-// evaluateRoute on a 200-step synthetic chain (median, p95 ms after warm-up), once with half the
-// steps uphill (every remedy computed) and once with every step downhill (no remedies).
+// evaluateRoute on a 200-step synthetic chain (median, p95 ms after warm-up): half the steps uphill
+// with every remedy worked out (cold: a species lookup of its own each run, so no memo helps), the
+// same after one edit (one step's temperature changed, the editor's pattern), and every step downhill.
+import { layeredLookup } from '../lib/thermo';
 import type { RouteEvaluateRequest, RouteStep } from '../lib/thermo/route';
 
 const STEPS = 200;
@@ -12,13 +14,13 @@ function quantile(sorted: number[], q: number): number {
   return sorted[i]!;
 }
 
-/** NH4Cl decomposed (uphill at 298 K) and re-formed, alternately, temperatures mixed. */
+/** NH4Cl decomposed (uphill below ~590 K) and re-formed, alternately; every step at a temperature of its own. */
 function mixedChain(): RouteEvaluateRequest {
   const steps: RouteStep[] = [];
   const links: NonNullable<RouteEvaluateRequest['links']> = [];
   for (let i = 0; i < STEPS; i++) {
     const id = `s${i}`;
-    const temperature = i % 4 < 2 ? '298.15 K' : '500 K';
+    const temperature = `${(300 + i * 1.3).toFixed(2)} K`;
     if (i % 2 === 0) {
       steps.push({ id, equation: 'NH4Cl(s) -> NH3(g) + HCl(g)', temperature, yield: 0.98 });
       links.push({ from: id, to: `s${i + 1}`, species: 'NH3(g)' }, { from: id, to: `s${i + 1}`, species: 'HCl(g)' });
@@ -43,13 +45,19 @@ function downhillChain(): RouteEvaluateRequest {
   return { target: 'CaCl2(s)', steps, links };
 }
 
-async function time(name: string, request: RouteEvaluateRequest, figures: Record<string, number>): Promise<void> {
-  const { evaluateRoute } = await import('../lib/thermo/route');
-  for (let i = 0; i < WARMUP; i++) evaluateRoute(request);
+type Run = (i: number) => void;
+
+function editOne(request: RouteEvaluateRequest, i: number): RouteEvaluateRequest {
+  const k = (i * 37) % request.steps.length;
+  return { ...request, steps: request.steps.map((s, j) => (j === k ? { ...s, temperature: `${350 + (i % 80)}.5 K` } : s)) };
+}
+
+async function time(name: string, run: Run, figures: Record<string, number>): Promise<void> {
+  for (let i = 0; i < WARMUP; i++) run(i);
   const samples: number[] = [];
   for (let i = 0; i < RUNS; i++) {
     const t0 = process.hrtime.bigint();
-    evaluateRoute(request);
+    run(WARMUP + i);
     samples.push(Number(process.hrtime.bigint() - t0) / 1e6);
   }
   samples.sort((a, b) => a - b);
@@ -58,9 +66,13 @@ async function time(name: string, request: RouteEvaluateRequest, figures: Record
 }
 
 export async function runRouteBench(): Promise<Record<string, number>> {
+  const { evaluateRoute } = await import('../lib/thermo/route');
   const figures: Record<string, number> = {};
-  await time('route_200_mixed', mixedChain(), figures);
-  await time('route_200_downhill', downhillChain(), figures);
+  const mixed = mixedChain();
+  const downhill = downhillChain();
+  await time('route_200_mixed_cold', () => evaluateRoute(mixed, { lookup: layeredLookup([]) }), figures);
+  await time('route_200_mixed_after_edit', (i) => evaluateRoute(editOne(mixed, i)), figures);
+  await time('route_200_downhill', () => evaluateRoute(downhill), figures);
   figures.route_steps = STEPS;
   return figures;
 }

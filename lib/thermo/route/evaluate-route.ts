@@ -10,7 +10,8 @@ import { parseAmount } from '../units';
 import { DEFAULT_DRIVERS, prepareDrivers } from './drivers';
 import { computeExtents } from './extents';
 import { conditionsRemedies } from './remedy-conditions';
-import { couplingRemedies, type CouplingContext } from './remedy-coupling';
+import { couplingRemedies, driverCacheKey, type CouplingContext } from './remedy-coupling';
+import { driversKey, remedyKey, remedyMemo } from './remedy-memo';
 import { temperatureRemedy } from './remedy-temperature';
 import { MAX_ROUTE_LINKS, MAX_ROUTE_STEPS, RouteTooLargeError, routeError } from './route-errors';
 import { DEFAULT_MARGINAL_THRESHOLD_KJ } from './route-limits';
@@ -48,7 +49,7 @@ function evaluateOne(step: RouteStep, index: number, lookup: SpeciesLookup): Eva
   const request = stepRequest(step);
   const { nu } = readStoichiometry(request.equation, lookup);
   try {
-    return { request, nu, result: evaluateStep(request, { lookup }), error: null };
+    return { request, nu, result: evaluateStep(request, { lookup, checkFinite: false }), error: null };
   } catch (err) {
     if (!isThermoError(err)) throw err;
     return { request, nu, result: null, error: errorInfo(err, index) };
@@ -88,13 +89,31 @@ function checkTarget(target: string, lookup: SpeciesLookup): void {
   }
 }
 
-function remediesFor(e: Evaluated, goal_kJ: number, ctx: CouplingContext): Remedy[] {
+function computeRemedies(e: Evaluated, goal_kJ: number, ctx: CouplingContext): Remedy[] {
   const r = e.result!;
   return [
     temperatureRemedy(e.request, r, goal_kJ, ctx.lookup),
     ...conditionsRemedies(e.request, r, goal_kJ, ctx.lookup),
     ...(e.nu ? couplingRemedies(e.request, r, e.nu, goal_kJ, ctx) : []),
   ];
+}
+
+function remediesFor(e: Evaluated, goal_kJ: number, ctx: CouplingContext, drivers: string): Remedy[] {
+  const memo = remedyMemo(ctx.lookup);
+  const key = remedyKey(e.request, goal_kJ, drivers);
+  const hit = memo.get(key);
+  if (hit) {
+    for (const [id, why] of hit.failed) ctx.failed.set(id, why);
+    return hit.remedies;
+  }
+  const remedies = computeRemedies(e, goal_kJ, ctx);
+  // The drivers that failed at this step's temperature, whichever step first met the failure.
+  const T = e.result!.temperature_K;
+  const failed = ctx.drivers
+    .filter((d) => ctx.failed.has(d.driver.id) && ctx.cache.get(driverCacheKey(d, e.request, T)) === null)
+    .map((d): [string, string] => [d.driver.id, ctx.failed.get(d.driver.id)!]);
+  memo.set(key, { remedies, failed });
+  return remedies;
 }
 
 /**
@@ -124,6 +143,7 @@ export function evaluateRoute(request: RouteEvaluateRequest, opts: RouteOptions 
   });
   const drivers = prepareDrivers(opts.drivers ?? DEFAULT_DRIVERS, lookup);
   const ctx: CouplingContext = { drivers: drivers.prepared, lookup, cache: new Map(), failed: new Map() };
+  const driverSet = driversKey(drivers.prepared);
 
   let cumulative = 0;
   let cumulative0 = 0;
@@ -151,7 +171,7 @@ export function evaluateRoute(request: RouteEvaluateRequest, opts: RouteOptions 
       cumulative0_kJ: cumulative0,
       class: cls,
       signUncertain: r?.uncertainty.signUncertain ?? false,
-      remedies: needsRemedy && opts.remedies !== false ? remediesFor(e, cls === 'uphill' ? 0 : threshold, ctx) : [],
+      remedies: needsRemedy && opts.remedies !== false ? remediesFor(e, cls === 'uphill' ? 0 : threshold, ctx, driverSet) : [],
       notes: r ? stepNotes(r, xi, lookup) : [],
     };
   });

@@ -77,7 +77,7 @@ export function conditionsRemedies(request: EvaluateRequest, result: EvaluateRes
     const maps = conditionMaps(species, o.unit === 'bar' ? { key: s.key, pressure: text } : { key: s.key, concentration: text });
     let checked: number | null = null;
     try {
-      const r = evaluateStep(withConditions(request, maps, species), { lookup });
+      const r = evaluateStep(withConditions(request, maps, species), { lookup, checkFinite: false });
       checked = r.deltaG_kJ ?? r.deltaG0_kJ;
     } catch (err) {
       if (!isThermoError(err)) throw err;

@@ -28,8 +28,12 @@ export interface CouplingContext {
   failed: Map<string, string>;
 }
 
+export function driverCacheKey(d: PreparedDriver, request: EvaluateRequest, T: number): string {
+  return `${d.driver.id}|${T}|${request.heatCapacity ?? true}|${request.standardPressure ?? ''}`;
+}
+
 function driverAt(ctx: CouplingContext, d: PreparedDriver, request: EvaluateRequest, T: number): EvaluateResponse | null {
-  const key = `${d.driver.id}|${T}|${request.heatCapacity ?? true}|${request.standardPressure ?? ''}`;
+  const key = driverCacheKey(d, request, T);
   if (ctx.cache.has(key)) return ctx.cache.get(key)!;
   let r: EvaluateResponse | null = null;
   try {
@@ -97,7 +101,7 @@ export function couplingRemedies(
       const maps = conditionMaps(species, undefined, (key) => combined.has(key));
       let r: EvaluateResponse;
       try {
-        r = evaluateStep(withConditions({ ...plain, equation, temperature: `${T} K` }, maps, species), { lookup: ctx.lookup });
+        r = evaluateStep(withConditions({ ...plain, equation, temperature: `${T} K` }, maps, species), { lookup: ctx.lookup, checkFinite: false });
       } catch (err) {
         if (!isThermoError(err)) throw err;
         break;

@@ -106,7 +106,7 @@ export function temperatureRemedy(request: EvaluateRequest, result: EvaluateResp
   const suggested = raise ? Math.floor(target) + 1 : Math.ceil(target) - 1;
   let check: EvaluateResponse | null = null;
   try {
-    check = evaluateStep({ ...request, temperature: `${suggested} K` }, { lookup });
+    check = evaluateStep({ ...request, temperature: `${suggested} K` }, { lookup, checkFinite: false });
   } catch (err) {
     if (!isThermoError(err)) throw err;
   }
