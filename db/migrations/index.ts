@@ -1,6 +1,7 @@
 import type { QueryInterface } from 'sequelize';
 import * as coreTables from './20261201-0001-core-tables';
 import * as routesStepsLinks from './20261201-0002-routes-steps-links';
+import * as revisionsWorkflow from './20261202-0003-revisions-workflow';
 
 export interface MigrationModule {
   up(params: { context: QueryInterface }): Promise<void>;
@@ -11,4 +12,5 @@ export interface MigrationModule {
 export const MIGRATIONS: ReadonlyArray<{ name: string; module: MigrationModule }> = [
   { name: '20261201-0001-core-tables', module: coreTables },
   { name: '20261201-0002-routes-steps-links', module: routesStepsLinks },
+  { name: '20261202-0003-revisions-workflow', module: revisionsWorkflow },
 ];

@@ -4,6 +4,9 @@ import { initDriverReaction } from './driver-reaction';
 import { initInvitation } from './invitation';
 import { initMembership } from './membership';
 import { initRoute } from './route';
+import { initRouteReviewer } from './route-reviewer';
+import { initRouteRevision } from './route-revision';
+import { initRouteTransition } from './route-transition';
 import { initStep } from './step';
 import { initStepLink } from './step-link';
 import { initTeam } from './team';
@@ -21,6 +24,9 @@ export function initModels(sequelize: Sequelize) {
   const Step = initStep(sequelize);
   const StepLink = initStepLink(sequelize);
   const DriverReaction = initDriverReaction(sequelize);
+  const RouteRevision = initRouteRevision(sequelize);
+  const RouteTransition = initRouteTransition(sequelize);
+  const RouteReviewer = initRouteReviewer(sequelize);
 
   Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
@@ -32,7 +38,13 @@ export function initModels(sequelize: Sequelize) {
   Route.hasMany(Step, { foreignKey: 'routeId', as: 'steps' });
   Route.hasMany(StepLink, { foreignKey: 'routeId', as: 'links' });
 
-  return { User, Team, Membership, Invitation, AuditEvent, UserPreference, Route, Step, StepLink, DriverReaction };
+  Route.belongsTo(User, { foreignKey: 'deletedById', as: 'deletedBy' });
+  RouteRevision.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
+  RouteTransition.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
+  RouteTransition.hasMany(RouteReviewer, { foreignKey: 'transitionId', as: 'reviewers' });
+  RouteReviewer.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+
+  return { User, Team, Membership, Invitation, AuditEvent, UserPreference, Route, Step, StepLink, DriverReaction, RouteRevision, RouteTransition, RouteReviewer };
 }
 
 export type Models = ReturnType<typeof initModels>;

@@ -13,6 +13,8 @@ export class Route extends Model<InferAttributes<Route>, InferCreationAttributes
   declare createdById: number;
   declare updatedById: number;
   declare archivedAt: CreationOptional<Date | null>;
+  declare deletedAt: CreationOptional<Date | null>;
+  declare deletedById: CreationOptional<number | null>;
   declare stepCount: CreationOptional<number>;
   declare overallDgKj: CreationOptional<number | null>;
   declare uphillSteps: CreationOptional<number | null>;
@@ -35,6 +37,8 @@ export function initRoute(sequelize: Sequelize): typeof Route {
       createdById: { type: DataTypes.INTEGER, allowNull: false, field: 'created_by_id' },
       updatedById: { type: DataTypes.INTEGER, allowNull: false, field: 'updated_by_id' },
       archivedAt: { type: DataTypes.DATE, allowNull: true, field: 'archived_at' },
+      deletedAt: { type: DataTypes.DATE, allowNull: true, field: 'deleted_at' },
+      deletedById: { type: DataTypes.INTEGER, allowNull: true, field: 'deleted_by_id' },
       stepCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0, field: 'step_count' },
       overallDgKj: { type: DataTypes.FLOAT, allowNull: true, field: 'overall_dg_kj' },
       uphillSteps: { type: DataTypes.INTEGER, allowNull: true, field: 'uphill_steps' },

@@ -9,6 +9,8 @@ export const PERMISSIONS = {
   'route.edit': ['designer', 'lead'],
   'route.comment': ['reviewer', 'designer', 'lead'],
   'route.decide': ['lead'],
+  'route.review': ['reviewer', 'lead'],
+  'route.delete': ['designer', 'lead'],
   'species.edit': ['designer', 'lead'],
 } as const satisfies Record<string, readonly Role[]>;
 

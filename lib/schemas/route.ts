@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { DEFAULT_MARGINAL_THRESHOLD_KJ, MAX_ROUTE_LINKS, MAX_ROUTE_STEPS } from '../thermo/route/route-limits';
 import { PositiveFinite, QuantityString, SpeciesName, speciesMap } from './quantity';
 
-export const ROUTE_STATUSES = ['draft'] as const;
+export { ROUTE_STATUSES } from './workflow';
 
 const Quantity = z.union([QuantityString, z.literal('')]);
 export const StepKey = z.string().regex(/^[A-Za-z0-9_-]{1,64}$/, { message: 'Use letters, digits, - or _ (at most 64).' });
@@ -56,6 +56,8 @@ export const ListRoutesQuery = z.object({
   page: z.coerce.number().int().min(1).max(100_000).default(1),
   pageSize: z.coerce.number().int().min(1).max(100).default(25),
   archived: z.enum(['0', '1']).default('0'),
+  // Recently deleted routes instead (leads only).
+  deleted: z.enum(['0', '1']).optional(),
 });
 export type ListRoutesQuery = z.infer<typeof ListRoutesQuery>;
 

@@ -4,8 +4,9 @@ import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
 import { toRouteDocument, type RouteDocumentDto } from './route-dto';
 
+// A deleted route is gone for every reader and writer until a lead brings it back.
 export async function findRouteRow({ teamId, routeId, transaction }: { teamId: number; routeId: number; transaction?: Transaction }) {
-  const route = await getDb().models.Route.findOne({ where: { id: routeId, teamId }, transaction });
+  const route = await getDb().models.Route.findOne({ where: { id: routeId, teamId, deletedAt: null }, transaction });
   if (!route) throw new AppError('NOT_FOUND', 'No such route.');
   return route;
 }

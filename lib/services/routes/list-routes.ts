@@ -20,7 +20,7 @@ function escapeLike(text: string): string {
 
 export async function listRoutes({ teamId, query }: { teamId: number; query: ListRoutesQuery }) {
   const { Route, User } = getDb().models;
-  const where: WhereOptions<Route> = { teamId, archivedAt: query.archived === '1' ? { [Op.ne]: null } : null };
+  const where: WhereOptions<Route> = { teamId, deletedAt: null, archivedAt: query.archived === '1' ? { [Op.ne]: null } : null };
   if (query.q) {
     const pattern = `%${escapeLike(query.q)}%`;
     Object.assign(where, { [Op.or]: [{ name: { [Op.like]: pattern } }, { target: { [Op.like]: pattern } }] });

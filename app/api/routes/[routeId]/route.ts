@@ -1,6 +1,7 @@
-// GET/PUT /api/routes/[routeId]: read a route, or save the whole document against its version (409 when stale)
+// GET/PUT/DELETE /api/routes/[routeId]: read a route, save the whole document against its version (409 when stale), or delete it (soft)
 import { withRoute } from '@/lib/api/with-route';
 import { SaveRouteInput } from '@/lib/schemas/route';
+import { deleteRoute } from '@/lib/services/routes/delete-route';
 import { getRoute } from '@/lib/services/routes/get-route';
 import { teamOfRoute } from '@/lib/services/routes/route-team';
 import { saveRoute } from '@/lib/services/routes/save-route';
@@ -15,4 +16,8 @@ export const GET = withRoute({ access: 'team', teamFrom: teamOfRoute, permission
 export const PUT = withRoute(
   { access: 'team', teamFrom: teamOfRoute, permission: 'route.edit', body: SaveRouteInput, maxBodyBytes: 2 * 1024 * 1024 },
   async ({ team, user, params, body }) => saveRoute({ teamId: team.id, userId: user.id, routeId: Number(params.routeId), input: body }),
+);
+
+export const DELETE = withRoute({ access: 'team', teamFrom: teamOfRoute, permission: 'route.delete' }, async ({ team, user, params }) =>
+  deleteRoute({ teamId: team.id, userId: user.id, routeId: Number(params.routeId) }),
 );

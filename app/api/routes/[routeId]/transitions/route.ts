@@ -1,0 +1,18 @@
+// GET/POST /api/routes/[routeId]/transitions: the route's review history, and moving it to another review status
+import { withRoute } from '@/lib/api/with-route';
+import { ListTransitionsQuery, TransitionInput } from '@/lib/schemas/workflow';
+import { teamOfRoute } from '@/lib/services/routes/route-team';
+import { listTransitions } from '@/lib/services/workflow/list-transitions';
+import { transitionRoute } from '@/lib/services/workflow/transition-route';
+
+export const runtime = 'nodejs';
+export const dynamic = 'force-dynamic';
+
+export const GET = withRoute({ access: 'team', teamFrom: teamOfRoute, permission: 'route.read', query: ListTransitionsQuery }, async ({ team, params, query }) =>
+  listTransitions({ teamId: team.id, routeId: Number(params.routeId), query }),
+);
+
+// Who may make which move is the workflow table's call, so the gate here is only membership.
+export const POST = withRoute({ access: 'team', teamFrom: teamOfRoute, permission: 'route.read', body: TransitionInput }, async ({ team, user, params, body }) =>
+  transitionRoute({ teamId: team.id, userId: user.id, role: team.role, routeId: Number(params.routeId), input: body }),
+);

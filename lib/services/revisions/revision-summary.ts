@@ -1,0 +1,115 @@
+// One short line saying what a save changed, e.g. "+1 step, T of s3 500 → 650 K, ΔG overall −12.4 → −20.1 kJ". Pure.
+import { diffRevisions, type FieldChange, type FieldValue, type RevisionDiff } from './revision-diff';
+import type { RevisionState } from './revision-snapshot';
+
+export const MAX_SUMMARY_LENGTH = 240;
+
+const MINUS = '\u2212';
+
+function signed(text: string): string {
+  return text.replace(/(^|[\s(])-(?=\d|\.\d)/g, `$1${MINUS}`);
+}
+
+export function formatKj(value: number): string {
+  const rounded = Math.round(value * 10) / 10;
+  return signed((Object.is(rounded, -0) ? 0 : rounded).toFixed(1));
+}
+
+function text(value: FieldValue): string {
+  if (value === null) return '—';
+  if (typeof value === 'object') return `(${value.x}, ${value.y})`;
+  return signed(String(value));
+}
+
+const QUANTITY = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)\s*(.*)$/;
+
+// "500 K" → "650 K" reads as "500 → 650 K" when the unit is the same.
+function arrow(from: FieldValue, to: FieldValue): string {
+  if (typeof from === 'string' && typeof to === 'string') {
+    const a = QUANTITY.exec(from);
+    const b = QUANTITY.exec(to);
+    if (a && b && a[2] === b[2] && a[2] !== '') return `${signed(a[1]!)} → ${signed(b[1]!)} ${a[2]}`;
+  }
+  return `${text(from)} → ${text(to)}`;
+}
+
+const LABELS: Record<string, string> = {
+  temperature: 'T',
+  standardPressure: 'standard state',
+  totalPressure: 'total P',
+  electrons: 'n(e⁻)',
+  yieldPct: 'yield',
+  heatCapacity: 'Cp correction',
+};
+
+function stepFieldPart(stepId: string, change: FieldChange): string {
+  const { field, from, to } = change;
+  if (field === 'equation') return `equation of ${stepId} changed`;
+  if (field === 'notes') return `notes of ${stepId} edited`;
+  if (field === 'heatCapacity') return `Cp correction of ${stepId} ${to ? 'on' : 'off'}`;
+  const dot = field.indexOf('.');
+  const label =
+    dot > 0 ? `${{ pressures: 'p', concentrations: 'c', initial: 'initial' }[field.slice(0, dot)] ?? field.slice(0, dot)}(${field.slice(dot + 1)})` : (LABELS[field] ?? field);
+  if (from === null) return `${label} of ${stepId} set to ${text(to)}`;
+  if (to === null) return `${label} of ${stepId} cleared`;
+  if (field === 'yieldPct') return `${label} of ${stepId} ${text(from)} → ${text(to)} %`;
+  return `${label} of ${stepId} ${arrow(from, to)}`;
+}
+
+function routeFieldPart(change: FieldChange): string {
+  const { field, from, to } = change;
+  if (field === 'name') return `renamed "${text(from)}" → "${text(to)}"`;
+  if (field === 'targetAmount') return `amount ${arrow(from, to)}`;
+  if (field === 'marginalThreshold_kJ') return `threshold ${text(from)} → ${text(to)} kJ`;
+  return `${field} ${text(from)} → ${text(to)}`;
+}
+
+const count = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
+
+export function summaryParts(diff: RevisionDiff): string[] {
+  const parts = diff.route.map(routeFieldPart);
+  if (diff.steps.added.length) parts.push(`+${count(diff.steps.added.length, 'step')}`);
+  if (diff.steps.removed.length) parts.push(`${MINUS}${count(diff.steps.removed.length, 'step')}`);
+  const moved: string[] = [];
+  for (const step of diff.steps.changed) {
+    for (const change of step.fields) {
+      if (change.field === 'position') moved.push(step.id);
+      else parts.push(stepFieldPart(step.id, change));
+    }
+  }
+  if (moved.length) parts.push(`moved ${moved.join(', ')}`);
+  if (diff.links.added.length) parts.push(`+${count(diff.links.added.length, 'link')}`);
+  if (diff.links.removed.length) parts.push(`${MINUS}${count(diff.links.removed.length, 'link')}`);
+  const { from, to } = diff.overallDeltaG_kJ;
+  if (from !== null && to !== null && formatKj(from) !== formatKj(to)) parts.push(`ΔG overall ${formatKj(from)} → ${formatKj(to)} kJ`);
+  else if (from === null && to !== null) parts.push(`ΔG overall now ${formatKj(to)} kJ`);
+  else if (from !== null && to === null) parts.push('ΔG overall no longer evaluated');
+  return parts;
+}
+
+// Adds parts while they fit, then says how many were left out; never longer than the cap.
+export function joinCapped(head: string, parts: string[], cap = MAX_SUMMARY_LENGTH): string {
+  if (parts.length === 0) return head.length <= cap ? head : `${head.slice(0, cap - 1)}…`;
+  const lead = head ? `${head}: ` : '';
+  let out = '';
+  for (let i = 0; i < parts.length; i += 1) {
+    const next = out ? `${out}, ${parts[i]}` : parts[i]!;
+    const rest = parts.length - i - 1;
+    const tail = rest > 0 ? `, +${rest} more` : '';
+    if ((lead + next + tail).length > cap) {
+      const more = `+${parts.length - i} more`;
+      const line = out ? `${lead}${out}, ${more}` : `${lead}${more}`;
+      return line.length <= cap ? line : `${line.slice(0, cap - 1)}…`;
+    }
+    out = next;
+  }
+  return lead + out;
+}
+
+/** `previous` is null for a route's first revision; `head` names how it came about ("Created", "Restored revision 3"). */
+export function summariseRevision(previous: RevisionState | null, next: RevisionState, head = ''): string {
+  if (!previous) return joinCapped(head || 'Saved', []);
+  const parts = summaryParts(diffRevisions(previous, next));
+  if (parts.length === 0) return joinCapped(head || 'No changes', []);
+  return joinCapped(head, parts);
+}
