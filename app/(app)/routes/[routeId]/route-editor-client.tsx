@@ -1,7 +1,6 @@
 'use client';
 
 import { useQuery } from '@tanstack/react-query';
-import { useState } from 'react';
 import { can } from '@/lib/auth/permissions';
 import type { Role } from '@/lib/auth/roles';
 import { useProfile } from '@/lib/queries/me';
@@ -9,19 +8,24 @@ import { routeDetailQuery } from '@/lib/queries/routes';
 import { draftOf } from '@/lib/route-editor/route-draft';
 import type { RouteDocumentDto } from '@/lib/services/routes/route-dto';
 import { RouteEditorStoreProvider } from '@/stores/route-editor-store';
+import { ArchivedNotice } from './_components/archived-notice';
 import { RouteEditor } from './_components/route-editor';
 
 export function RouteEditorClient({ initialRoute, role }: { initialRoute: RouteDocumentDto; role: Role }) {
   const { data: profile } = useProfile();
   const { data: route = initialRoute } = useQuery({ ...routeDetailQuery(initialRoute.id), initialData: initialRoute });
-  // The draft starts from the route as first loaded; later server copies arrive through autosave or "Reload theirs".
-  const [initial] = useState(() => ({ doc: draftOf(route), version: route.version }));
   const preferences = profile?.preferences ?? { energyUnit: 'kJ', temperatureUnit: 'K', pressureUnit: 'bar' };
-  const canEdit = can(role, 'route.edit');
+  const mayEdit = can(role, 'route.edit');
+  // The store reads the route only when it mounts; later server copies arrive through autosave or
+  // "Reload theirs". Unarchiving remounts it (a new key) on the unarchived copy and its new version.
+  const editorKey = route.archived ? 'archived' : 'live';
 
   return (
-    <RouteEditorStoreProvider initialDoc={initial.doc} initialVersion={initial.version}>
-      <RouteEditor routeId={route.id} canEdit={canEdit} units={preferences} />
-    </RouteEditorStoreProvider>
+    <div className="flex flex-col gap-3">
+      {route.archived ? <ArchivedNotice routeId={route.id} canUnarchive={mayEdit} /> : null}
+      <RouteEditorStoreProvider key={editorKey} initialDoc={draftOf(route)} initialVersion={route.version}>
+        <RouteEditor routeId={route.id} canEdit={mayEdit && !route.archived} units={preferences} />
+      </RouteEditorStoreProvider>
+    </div>
   );
 }

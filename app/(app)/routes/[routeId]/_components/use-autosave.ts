@@ -41,17 +41,25 @@ export function useAutosave(routeId: number, { enabled }: { enabled: boolean }) 
   useEffect(() => {
     if (!enabled) return;
     let timer: ReturnType<typeof setTimeout> | undefined;
+    const fire = () => {
+      timer = undefined;
+      void saveNow();
+    };
     const unsubscribe = store.subscribe((state, previous) => {
       if (state.doc === previous.doc && state.saveStatus === previous.saveStatus) return;
       if (!state.isDirty || state.saveStatus === 'saving' || state.saveStatus === 'conflict') return;
       // A save that failed is retried after the next edit (or the Retry button), not in a loop.
       if (state.saveStatus === 'error' && state.doc === failedDoc.current) return;
       clearTimeout(timer);
-      timer = setTimeout(() => void saveNow(), AUTOSAVE_DEBOUNCE_MS);
+      timer = setTimeout(fire, AUTOSAVE_DEBOUNCE_MS);
     });
     return () => {
       unsubscribe();
-      clearTimeout(timer);
+      // Leaving the editor by an in-app link inside the debounce: save now rather than drop the edit.
+      if (timer !== undefined) {
+        clearTimeout(timer);
+        fire();
+      }
     };
   }, [enabled, store, saveNow]);
 
