@@ -2,6 +2,7 @@ import type { QueryInterface } from 'sequelize';
 import * as coreTables from './20261201-0001-core-tables';
 import * as routesStepsLinks from './20261201-0002-routes-steps-links';
 import * as revisionsWorkflow from './20261202-0003-revisions-workflow';
+import * as commentsFlagsNotifications from './20261202-0004-comments-flags-notifications';
 
 export interface MigrationModule {
   up(params: { context: QueryInterface }): Promise<void>;
@@ -13,4 +14,5 @@ export const MIGRATIONS: ReadonlyArray<{ name: string; module: MigrationModule }
   { name: '20261201-0001-core-tables', module: coreTables },
   { name: '20261201-0002-routes-steps-links', module: routesStepsLinks },
   { name: '20261202-0003-revisions-workflow', module: revisionsWorkflow },
+  { name: '20261202-0004-comments-flags-notifications', module: commentsFlagsNotifications },
 ];

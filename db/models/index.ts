@@ -1,13 +1,16 @@
 import type { Sequelize } from 'sequelize';
 import { initAuditEvent } from './audit-event';
+import { initComment } from './comment';
 import { initDriverReaction } from './driver-reaction';
 import { initInvitation } from './invitation';
 import { initMembership } from './membership';
+import { initNotification } from './notification';
 import { initRoute } from './route';
 import { initRouteReviewer } from './route-reviewer';
 import { initRouteRevision } from './route-revision';
 import { initRouteTransition } from './route-transition';
 import { initStep } from './step';
+import { initStepFlag } from './step-flag';
 import { initStepLink } from './step-link';
 import { initTeam } from './team';
 import { initUser } from './user';
@@ -24,6 +27,9 @@ export function initModels(sequelize: Sequelize) {
   const Step = initStep(sequelize);
   const StepLink = initStepLink(sequelize);
   const DriverReaction = initDriverReaction(sequelize);
+  const Comment = initComment(sequelize);
+  const StepFlag = initStepFlag(sequelize);
+  const Notification = initNotification(sequelize);
   const RouteRevision = initRouteRevision(sequelize);
   const RouteTransition = initRouteTransition(sequelize);
   const RouteReviewer = initRouteReviewer(sequelize);
@@ -38,13 +44,18 @@ export function initModels(sequelize: Sequelize) {
   Route.hasMany(Step, { foreignKey: 'routeId', as: 'steps' });
   Route.hasMany(StepLink, { foreignKey: 'routeId', as: 'links' });
 
+  Comment.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
+  Comment.belongsTo(User, { foreignKey: 'resolvedById', as: 'resolvedBy' });
+  StepFlag.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+  StepFlag.belongsTo(User, { foreignKey: 'clearedById', as: 'clearedBy' });
+  Notification.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
   Route.belongsTo(User, { foreignKey: 'deletedById', as: 'deletedBy' });
   RouteRevision.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
   RouteTransition.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
   RouteTransition.hasMany(RouteReviewer, { foreignKey: 'transitionId', as: 'reviewers' });
   RouteReviewer.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 
-  return { User, Team, Membership, Invitation, AuditEvent, UserPreference, Route, Step, StepLink, DriverReaction, RouteRevision, RouteTransition, RouteReviewer };
+  return { User, Team, Membership, Invitation, AuditEvent, UserPreference, Route, Step, StepLink, DriverReaction, RouteRevision, RouteTransition, RouteReviewer, Comment, StepFlag, Notification };
 }
 
 export type Models = ReturnType<typeof initModels>;

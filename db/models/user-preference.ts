@@ -7,6 +7,10 @@ export class UserPreference extends Model<InferAttributes<UserPreference>, Infer
   declare temperatureUnit: CreationOptional<TemperatureUnit>;
   declare pressureUnit: CreationOptional<PressureUnit>;
   declare activeTeamId: CreationOptional<number | null>;
+  declare muteReviewRequest: CreationOptional<boolean>;
+  declare muteMention: CreationOptional<boolean>;
+  declare muteStatusChange: CreationOptional<boolean>;
+  declare muteCommentOnOwnedRoute: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -19,6 +23,11 @@ export function initUserPreference(sequelize: Sequelize): typeof UserPreference 
       temperatureUnit: { type: DataTypes.STRING(8), allowNull: false, defaultValue: 'K', field: 'temperature_unit' },
       pressureUnit: { type: DataTypes.STRING(8), allowNull: false, defaultValue: 'bar', field: 'pressure_unit' },
       activeTeamId: { type: DataTypes.INTEGER, allowNull: true, field: 'active_team_id' },
+      // E-mail mutes, one per notification kind; the in-app notification is kept either way.
+      muteReviewRequest: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false, field: 'mute_review_request' },
+      muteMention: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false, field: 'mute_mention' },
+      muteStatusChange: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false, field: 'mute_status_change' },
+      muteCommentOnOwnedRoute: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false, field: 'mute_comment_on_owned_route' },
       createdAt: { type: DataTypes.DATE, field: 'created_at' },
       updatedAt: { type: DataTypes.DATE, field: 'updated_at' },
     },

@@ -8,6 +8,7 @@ export const PERMISSIONS = {
   'route.read': ['reviewer', 'designer', 'lead'],
   'route.edit': ['designer', 'lead'],
   'route.comment': ['reviewer', 'designer', 'lead'],
+  'route.flag': ['reviewer', 'designer', 'lead'],
   'route.decide': ['lead'],
   'route.review': ['reviewer', 'lead'],
   'route.delete': ['designer', 'lead'],

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { NotificationMutes } from './notification';
 
 export const ENERGY_UNITS = ['kJ', 'kcal'] as const;
 export const TEMPERATURE_UNITS = ['K', 'degC'] as const;
@@ -14,5 +15,11 @@ export const PreferencesInput = z.strictObject({
   pressureUnit: z.enum(PRESSURE_UNITS),
 });
 export type PreferencesInput = z.infer<typeof PreferencesInput>;
+
+// What PATCH /api/me/preferences takes: any of the units and any of the e-mail mutes, at least one field.
+export const PreferencesPatch = PreferencesInput.partial()
+  .extend({ notificationMutes: NotificationMutes.partial().optional() })
+  .refine((v) => Object.values(v).some((x) => x !== undefined), { message: 'Send at least one preference.', path: ['_'] });
+export type PreferencesPatch = z.infer<typeof PreferencesPatch>;
 
 export const ActiveTeamInput = z.strictObject({ teamId: z.number().int().positive() });

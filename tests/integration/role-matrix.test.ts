@@ -70,6 +70,50 @@ const TABLE: Row[] = [
   { route: 'routes/[routeId]/duplicate', method: 'POST', expect: editorsOfResource(201), prepare: async (w) => ({ params: await routeParams(w), body: {} }) },
   { route: 'routes/[routeId]/archive', method: 'POST', expect: editorsOfResource(200), prepare: async (w) => ({ params: await routeParams(w), body: { archived: true } }) },
   { route: 'routes/[routeId]/evaluate', method: 'POST', expect: readersOfResource(200), prepare: async (w) => ({ params: await routeParams(w) }) },
+  // Revisions, review moves and soft delete: a fresh route per call, so one caller's write never changes the next one's.
+  { route: 'routes/[routeId]/revisions', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: await routeParams(w) }) },
+  {
+    route: 'routes/[routeId]/revisions/[revisionId]', method: 'GET', expect: readersOfResource(200),
+    prepare: async (w) => {
+      const route = await makeRoute(w.teamId, w.leadId);
+      const revision = await getDb().models.RouteRevision.findOne({ where: { routeId: route.id }, order: [['version', 'DESC']] });
+      return { params: { routeId: String(route.id), revisionId: String(revision!.id) } };
+    },
+  },
+  {
+    route: 'routes/[routeId]/revisions/compare', method: 'GET', expect: readersOfResource(200),
+    prepare: async (w) => {
+      const route = await makeRoute(w.teamId, w.leadId);
+      const [to, from] = await getDb().models.RouteRevision.findAll({ where: { routeId: route.id }, order: [['version', 'DESC']] });
+      return { params: { routeId: String(route.id) }, path: `/api/routes/${route.id}/revisions/compare?from=${from!.id}&to=${to!.id}` };
+    },
+  },
+  {
+    route: 'routes/[routeId]/revisions/[revisionId]/restore', method: 'POST', expect: editorsOfResource(200),
+    prepare: async (w) => {
+      const route = await makeRoute(w.teamId, w.leadId);
+      const first = await getDb().models.RouteRevision.findOne({ where: { routeId: route.id }, order: [['version', 'ASC']] });
+      return { params: { routeId: String(route.id), revisionId: String(first!.id) }, body: { version: route.version } };
+    },
+  },
+  { route: 'routes/[routeId]/transitions', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: await routeParams(w) }) },
+  {
+    // Sending a draft for review: designers and leads; the table refuses a reviewer with 403.
+    route: 'routes/[routeId]/transitions', method: 'POST', expect: editorsOfResource(200),
+    prepare: async (w) => {
+      const route = await makeRoute(w.teamId, w.leadId, false);
+      return { params: { routeId: String(route.id) }, body: { to: 'in_review', version: route.version, reviewerIds: [w.reviewerId] } };
+    },
+  },
+  { route: 'routes/[routeId]', method: 'DELETE', expect: editorsOfResource(200), prepare: async (w) => ({ params: await routeParams(w) }) },
+  {
+    route: 'routes/[routeId]/undelete', method: 'POST', expect: leadOnly(200),
+    prepare: async (w) => {
+      const route = await makeRoute(w.teamId, w.leadId, false);
+      await getDb().models.Route.update({ deletedAt: new Date(), deletedById: w.leadId }, { where: { id: route.id } });
+      return { params: { routeId: String(route.id) } };
+    },
+  },
   { route: 'health', method: 'GET', expect: { anonymous: 200, reviewer: 200, designer: 200, lead: 200, foreign: 200 } },
   {
     route: 'signup', method: 'POST', expect: { anonymous: 201, reviewer: 201, designer: 201, lead: 201, foreign: 201 },
@@ -105,6 +149,41 @@ const TABLE: Row[] = [
     route: 'invitations/[token]/accept', method: 'POST', expect: { anonymous: 200, reviewer: 403, designer: 403, lead: 403, foreign: 403 },
     prepare: async (w) => ({ params: { token: (await pendingInvitation(w.teamId, w.leadId)).token }, body: { name: 'Invitee', password: 'long-enough-pass' } }),
   },
+  // Comments, flags, notifications. A comment is edited or deleted by its own author (the caller; the lead for callers outside the team).
+  { route: 'routes/[routeId]/comments', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: await routeParams(w) }) },
+  { route: 'routes/[routeId]/comments', method: 'POST', expect: readersOfResource(201), prepare: async (w) => ({ params: await routeParams(w), body: { body: 'Check the pressure on s1.', stepKey: 's1' } }) },
+  ...(['PATCH', 'DELETE'] as const).map((method): Row => ({
+    route: 'routes/[routeId]/comments/[commentId]', method, expect: readersOfResource(200),
+    prepare: async (w, caller) => {
+      const { createComment } = await import('@/lib/services/comments/create-comment');
+      const author = { reviewer: w.reviewerId, designer: w.designerId, lead: w.leadId, anonymous: w.leadId, foreign: w.leadId }[caller];
+      const params = await routeParams(w);
+      const comment = await createComment({ teamId: w.teamId, routeId: Number(params.routeId), userId: author, input: { body: 'Mine.', stepKey: 's2' } });
+      return { params: { ...params, commentId: String(comment.id) }, body: method === 'PATCH' ? { body: 'Mine, edited.' } : undefined };
+    },
+  })),
+  {
+    route: 'routes/[routeId]/comments/[commentId]/resolve', method: 'POST', expect: readersOfResource(200),
+    prepare: async (w) => {
+      const { createComment } = await import('@/lib/services/comments/create-comment');
+      const params = await routeParams(w);
+      const comment = await createComment({ teamId: w.teamId, routeId: Number(params.routeId), userId: w.leadId, input: { body: 'Settle this.' } });
+      return { params: { ...params, commentId: String(comment.id) }, body: { resolved: true } };
+    },
+  },
+  { route: 'routes/[routeId]/flags', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: await routeParams(w) }) },
+  { route: 'routes/[routeId]/flags', method: 'POST', expect: readersOfResource(201), prepare: async (w) => ({ params: await routeParams(w), body: { stepKey: 's1', category: 'safety', reason: 'Hot hydrogen at 1100 K.' } }) },
+  {
+    route: 'routes/[routeId]/flags/[flagId]/clear', method: 'POST', expect: readersOfResource(200),
+    prepare: async (w) => {
+      const { createFlag } = await import('@/lib/services/flags/create-flag');
+      const params = await routeParams(w);
+      const flag = await createFlag({ teamId: w.teamId, routeId: Number(params.routeId), userId: w.leadId, input: { stepKey: 's2', category: 'cost', reason: 'Catalyst price.' } });
+      return { params: { ...params, flagId: String(flag.id) }, body: { comment: 'Priced a cheaper catalyst.' } };
+    },
+  },
+  { route: 'notifications', method: 'GET', expect: signedIn(200) },
+  { route: 'notifications/read', method: 'POST', expect: signedIn(200), prepare: async () => ({ body: { all: true } }) },
 ];
 
 let dir = '';

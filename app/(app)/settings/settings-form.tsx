@@ -10,13 +10,19 @@ import { applyServerErrors } from '@/lib/forms/apply-server-errors';
 import { apiFetch } from '@/lib/queries/api-fetch';
 import { meKeys, useProfile } from '@/lib/queries/me';
 import { ENERGY_UNITS, PRESSURE_UNITS, PreferencesInput, TEMPERATURE_UNITS } from '@/lib/schemas/preferences';
+import { NotificationMutesForm } from './notification-mutes-form';
 
 const LABELS: Record<string, string> = { kJ: 'kJ/mol', kcal: 'kcal/mol', K: 'kelvin (K)', degC: 'degrees Celsius (°C)', bar: 'bar', atm: 'atm', kPa: 'kPa' };
 
 export function SettingsForm() {
   const { data: profile } = useProfile();
   if (!profile) return <p className="text-sm text-ink-soft">Loading…</p>;
-  return <UnitsForm initial={profile.preferences} />;
+  return (
+    <div className="flex flex-col gap-6">
+      <UnitsForm initial={profile.preferences} />
+      <NotificationMutesForm initial={profile.notificationMutes} />
+    </div>
+  );
 }
 
 function UnitsForm({ initial }: { initial: PreferencesInput }) {

@@ -1,7 +1,9 @@
 import 'server-only';
 import { getDb } from '../../../db';
 import type { Role } from '../../auth/roles';
+import type { NotificationMutes } from '../../schemas/notification';
 import type { EnergyUnit, PressureUnit, TemperatureUnit } from '../../schemas/preferences';
+import { mutesOf } from '../notifications/recipients';
 
 export interface MembershipDto {
   teamId: number;
@@ -14,6 +16,8 @@ export interface ProfileDto {
   memberships: MembershipDto[];
   activeTeamId: number | null;
   preferences: { energyUnit: EnergyUnit; temperatureUnit: TemperatureUnit; pressureUnit: PressureUnit };
+  /** true stops that kind of e-mail; the in-app notification still appears. */
+  notificationMutes: NotificationMutes;
 }
 
 export async function getProfile({ userId }: { userId: number }): Promise<ProfileDto | null> {
@@ -40,5 +44,6 @@ export async function getProfile({ userId }: { userId: number }): Promise<Profil
       temperatureUnit: prefs?.temperatureUnit ?? 'K',
       pressureUnit: prefs?.pressureUnit ?? 'bar',
     },
+    notificationMutes: mutesOf(prefs),
   };
 }

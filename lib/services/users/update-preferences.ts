@@ -1,10 +1,27 @@
 import 'server-only';
 import { getDb } from '../../../db';
-import type { PreferencesInput } from '../../schemas/preferences';
+import type { NotificationMutes } from '../../schemas/notification';
+import type { PreferencesInput, PreferencesPatch } from '../../schemas/preferences';
+import { mutesOf } from '../notifications/recipients';
 
-export async function updatePreferences({ userId, preferences }: { userId: number; preferences: PreferencesInput }) {
+export interface PreferencesDto extends PreferencesInput {
+  notificationMutes: NotificationMutes;
+}
+
+const MUTE_FIELDS = {
+  review_request: 'muteReviewRequest',
+  mention: 'muteMention',
+  status_change: 'muteStatusChange',
+  comment_on_owned_route: 'muteCommentOnOwnedRoute',
+} as const satisfies Record<keyof NotificationMutes, string>;
+
+export async function updatePreferences({ userId, preferences }: { userId: number; preferences: PreferencesPatch }): Promise<PreferencesDto> {
   const { UserPreference } = getDb().models;
+  const { notificationMutes, ...units } = preferences;
+  const mutes = Object.fromEntries(
+    Object.entries(notificationMutes ?? {}).map(([kind, muted]) => [MUTE_FIELDS[kind as keyof NotificationMutes], muted]),
+  );
   const [row] = await UserPreference.findOrCreate({ where: { userId }, defaults: { userId } });
-  await row.update(preferences);
-  return { energyUnit: row.energyUnit, temperatureUnit: row.temperatureUnit, pressureUnit: row.pressureUnit };
+  await row.update({ ...units, ...mutes });
+  return { energyUnit: row.energyUnit, temperatureUnit: row.temperatureUnit, pressureUnit: row.pressureUnit, notificationMutes: mutesOf(row) };
 }

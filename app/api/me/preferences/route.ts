@@ -1,10 +1,10 @@
-// PATCH /api/me/preferences: the user's display units
+// PATCH /api/me/preferences: the user's display units and e-mail mutes (any subset)
 import { withRoute } from '@/lib/api/with-route';
-import { PreferencesInput } from '@/lib/schemas/preferences';
+import { PreferencesPatch } from '@/lib/schemas/preferences';
 import { updatePreferences } from '@/lib/services/users/update-preferences';
 
 export const runtime = 'nodejs';
 
-export const PATCH = withRoute({ access: 'user', body: PreferencesInput }, async ({ user, body }) =>
+export const PATCH = withRoute({ access: 'user', body: PreferencesPatch }, async ({ user, body }) =>
   updatePreferences({ userId: user.id, preferences: body }),
 );

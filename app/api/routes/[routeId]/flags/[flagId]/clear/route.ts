@@ -1,0 +1,11 @@
+// POST /api/routes/[routeId]/flags/[flagId]/clear: clear a flag with a comment on its step, in one transaction
+import { withRoute } from '@/lib/api/with-route';
+import { ClearFlagInput } from '@/lib/schemas/flag';
+import { clearFlag } from '@/lib/services/flags/clear-flag';
+import { teamOfRoute } from '@/lib/services/routes/route-team';
+
+export const runtime = 'nodejs';
+
+export const POST = withRoute({ access: 'team', teamFrom: teamOfRoute, permission: 'route.flag', body: ClearFlagInput }, async ({ team, user, params, body }) =>
+  clearFlag({ teamId: team.id, routeId: Number(params.routeId), flagId: Number(params.flagId), userId: user.id, input: body }),
+);
