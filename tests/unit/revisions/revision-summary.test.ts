@@ -1,0 +1,66 @@
+import { describe, expect, it } from 'vitest';
+import { diffRevisions } from '@/lib/services/revisions/revision-diff';
+import type { RevisionState, RouteSnapshot } from '@/lib/services/revisions/revision-snapshot';
+import { formatKj, joinCapped, MAX_SUMMARY_LENGTH, summariseRevision, summaryParts } from '@/lib/services/revisions/revision-summary';
+import type { StepInput } from '@/lib/schemas/route';
+
+const step = (id: string, patch: Partial<StepInput> = {}): StepInput => ({
+  id, equation: 'CO(g) + 2 H2(g) -> CH3OH(g)', temperature: '500 K', yieldPct: 100, notes: '', position: { x: 0, y: 0 }, ...patch,
+});
+const snap = (steps: StepInput[], patch: Partial<RouteSnapshot> = {}): RouteSnapshot => ({
+  name: 'Kestrel methanol', target: 'CH3OH(g)', targetAmount: '1 mol', marginalThreshold_kJ: -17, steps, links: [], ...patch,
+});
+const state = (s: RouteSnapshot, overall: number | null = null, stepDeltaG: Record<string, number | null> = {}): RevisionState => ({
+  snapshot: s, stepDeltaG, overallDeltaG_kJ: overall,
+});
+
+describe('revision summary', () => {
+  it('reads like the brief: added step, temperature change with one unit, overall ΔG with a real minus sign', () => {
+    const before = state(snap([step('s1'), step('s3')]), -12.4);
+    const after = state(snap([step('s1'), step('s3', { temperature: '650 K' }), step('s4')]), -20.1);
+    expect(summariseRevision(before, after)).toBe('+1 step, T of s3 500 → 650 K, ΔG overall \u221212.4 → \u221220.1 kJ');
+  });
+
+  it('puts the head first and says when nothing changed', () => {
+    const s = state(snap([step('s1')]), -3);
+    expect(summariseRevision(s, s)).toBe('No changes');
+    expect(summariseRevision(s, s, 'Restored revision 2')).toBe('Restored revision 2');
+    expect(summariseRevision(null, s, 'Created')).toBe('Created');
+    const renamed = state(snap([step('s1')], { name: 'Kestrel methanol B' }), -3);
+    expect(summariseRevision(s, renamed, 'Restored revision 2')).toBe('Restored revision 2: renamed "Kestrel methanol" → "Kestrel methanol B"');
+  });
+
+  it('words fields set, cleared, moved, and links', () => {
+    const before = state(snap([step('s1'), step('s2')], { links: [{ from: 's1', to: 's2', species: 'CO(g)' }] }));
+    const after = state(snap([step('s1', { totalPressure: '50 bar', temperature: undefined }), step('s2', { position: { x: 10, y: 0 } })]));
+    expect(summaryParts(diffRevisions(before, after))).toEqual(['T of s1 cleared', 'total P of s1 set to 50 bar', 'moved s2', '\u22121 link']);
+  });
+
+  it('leaves out an overall ΔG change that rounds away, and notes one that appears', () => {
+    expect(summaryParts(diffRevisions(state(snap([step('s1')]), -12.41), state(snap([step('s1')]), -12.44)))).toEqual([]);
+    expect(summaryParts(diffRevisions(state(snap([step('s1')]), null), state(snap([step('s1')]), -0.04)))).toEqual(['ΔG overall now 0.0 kJ']);
+  });
+
+  it('never passes the cap, and says how many parts it left out', () => {
+    const many = Array.from({ length: 60 }, (_, i) => `s${i}`);
+    const before = state(snap(many.map((id) => step(id))));
+    const after = state(snap(many.map((id) => step(id, { temperature: '650.25 K' }))));
+    const line = summariseRevision(before, after, 'Restored revision 12');
+    expect(line.length).toBeLessThanOrEqual(MAX_SUMMARY_LENGTH);
+    expect(line).toMatch(/^Restored revision 12: T of s0 500 → 650\.25 K, .*, \+\d+ more$/);
+    const shown = line.split(', ').length - 1;
+    expect(Number(/\+(\d+) more$/.exec(line)![1]) + shown).toBe(60);
+  });
+
+  it('caps a single over-long part and a long head', () => {
+    expect(joinCapped('', ['x'.repeat(500)]).length).toBeLessThanOrEqual(MAX_SUMMARY_LENGTH);
+    expect(joinCapped('', ['x'.repeat(500)])).toBe('+1 more');
+    expect(joinCapped('D'.repeat(400), []).length).toBe(MAX_SUMMARY_LENGTH);
+  });
+
+  it('formats kJ with one decimal, no negative zero', () => {
+    expect(formatKj(-0.04)).toBe('0.0');
+    expect(formatKj(-20.06)).toBe('\u221220.1');
+    expect(formatKj(135)).toBe('135.0');
+  });
+});
