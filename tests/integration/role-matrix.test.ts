@@ -114,50 +114,6 @@ const TABLE: Row[] = [
       return { params: { routeId: String(route.id) } };
     },
   },
-  // Revisions, review moves and soft delete: a fresh route per call, so one caller's write never changes the next one's.
-  { route: 'routes/[routeId]/revisions', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: await routeParams(w) }) },
-  {
-    route: 'routes/[routeId]/revisions/[revisionId]', method: 'GET', expect: readersOfResource(200),
-    prepare: async (w) => {
-      const route = await makeRoute(w.teamId, w.leadId);
-      const revision = await getDb().models.RouteRevision.findOne({ where: { routeId: route.id }, order: [['version', 'DESC']] });
-      return { params: { routeId: String(route.id), revisionId: String(revision!.id) } };
-    },
-  },
-  {
-    route: 'routes/[routeId]/revisions/compare', method: 'GET', expect: readersOfResource(200),
-    prepare: async (w) => {
-      const route = await makeRoute(w.teamId, w.leadId);
-      const [to, from] = await getDb().models.RouteRevision.findAll({ where: { routeId: route.id }, order: [['version', 'DESC']] });
-      return { params: { routeId: String(route.id) }, path: `/api/routes/${route.id}/revisions/compare?from=${from!.id}&to=${to!.id}` };
-    },
-  },
-  {
-    route: 'routes/[routeId]/revisions/[revisionId]/restore', method: 'POST', expect: editorsOfResource(200),
-    prepare: async (w) => {
-      const route = await makeRoute(w.teamId, w.leadId);
-      const first = await getDb().models.RouteRevision.findOne({ where: { routeId: route.id }, order: [['version', 'ASC']] });
-      return { params: { routeId: String(route.id), revisionId: String(first!.id) }, body: { version: route.version } };
-    },
-  },
-  { route: 'routes/[routeId]/transitions', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: await routeParams(w) }) },
-  {
-    // Sending a draft for review: designers and leads; the table refuses a reviewer with 403.
-    route: 'routes/[routeId]/transitions', method: 'POST', expect: editorsOfResource(200),
-    prepare: async (w) => {
-      const route = await makeRoute(w.teamId, w.leadId, false);
-      return { params: { routeId: String(route.id) }, body: { to: 'in_review', version: route.version, reviewerIds: [w.reviewerId] } };
-    },
-  },
-  { route: 'routes/[routeId]', method: 'DELETE', expect: editorsOfResource(200), prepare: async (w) => ({ params: await routeParams(w) }) },
-  {
-    route: 'routes/[routeId]/undelete', method: 'POST', expect: leadOnly(200),
-    prepare: async (w) => {
-      const route = await makeRoute(w.teamId, w.leadId, false);
-      await getDb().models.Route.update({ deletedAt: new Date(), deletedById: w.leadId }, { where: { id: route.id } });
-      return { params: { routeId: String(route.id) } };
-    },
-  },
   { route: 'health', method: 'GET', expect: { anonymous: 200, reviewer: 200, designer: 200, lead: 200, foreign: 200 } },
   {
     route: 'signup', method: 'POST', expect: { anonymous: 201, reviewer: 201, designer: 201, lead: 201, foreign: 201 },
