@@ -72,6 +72,9 @@ describe('workflow: every (from, to) pair for every role', () => {
             expect(row!.version).toBe(route.version + 1);
             expect(recorded).toBe(1);
             expect((res.body as TransitionOutcome).transition).toMatchObject({ from, to, actor: { id: userOf(role) } });
+            // An approval is of a thermodynamic screen only, and the answer says so.
+            if (to === 'approved') expect((res.body as TransitionOutcome).caution).toMatch(/rates.*runaway.*toxicity/);
+            else expect(res.body).not.toHaveProperty('caution');
           } else {
             expect(row!.status).toBe(from);
             expect(recorded).toBe(0);

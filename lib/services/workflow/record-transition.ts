@@ -3,6 +3,7 @@ import { Op, type Transaction } from 'sequelize';
 import { getDb } from '../../../db';
 import type { Route } from '../../../db/models/route';
 import type { RouteStatus } from '../../schemas/workflow';
+import { APPROVAL_CAUTION } from '../notifications/notify-workflow';
 import type { PersonRef, TransitionOutcome } from './transition-dto';
 
 async function names(ids: number[], transaction: Transaction): Promise<Map<number, string>> {
@@ -58,6 +59,7 @@ export async function recordTransition({
     },
     reviewerIds: submission?.reviewerIds ?? [],
     submitterId: submission?.actorId ?? null,
+    ...(to === 'approved' ? { caution: APPROVAL_CAUTION } : {}),
   };
 }
 

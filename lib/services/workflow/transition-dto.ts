@@ -27,4 +27,6 @@ export interface TransitionOutcome {
   reviewerIds: number[];
   /** who sent the route for review most recently; null if it never was */
   submitterId: number | null;
+  /** on approval: what the approval does not cover, to show beside it */
+  caution?: string;
 }
