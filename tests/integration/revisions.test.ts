@@ -88,6 +88,18 @@ describe('revisions: written by create and every save', () => {
     expect(await getDb().models.RouteRevision.count({ where: { routeId: route.id } })).toBe(2);
   });
 
+  it('a route saved before revisions existed (seeded rows) is compared against its saved rows', async () => {
+    const route = await newRoute('Kestrel methanol seeded');
+    const first = await save(route.id, saveBody(route));
+    await getDb().models.RouteRevision.destroy({ where: { routeId: route.id } });
+    const hotter = SAMPLE_STEPS.map((st) => (st.id === 's2' ? { ...st, temperature: '500 K' } : st));
+    const next = await save(route.id, saveBody(first.route, { steps: hotter }));
+    const before = first.evaluation.overall.deltaG_kJ;
+    const after = next.evaluation.overall.deltaG_kJ;
+    const kj = (x: number) => (Math.round(x * 10) / 10).toFixed(1).replace('-', '\u2212');
+    expect(next.revision.summary).toBe(`T of s2 298.15 → 500 K, ΔG overall ${kj(before)} → ${kj(after)} kJ`);
+  });
+
   it('lists newest first, a page at a time, and caps the page size', async () => {
     const route = await newRoute('Kestrel methanol D');
     const doc = (await save(route.id, saveBody(route))).route;
