@@ -115,6 +115,12 @@ describe('routes: list, duplicate, archive', () => {
     expect(active.items.map((i) => i.id)).toEqual([doc.id]);
     const archived = (await callRoute(listRoutes, { userId: w.designerId, path: '/api/routes?q=Original&archived=1' })).body as { items: { id: number }[] };
     expect(archived.items.map((i) => i.id)).toEqual([route.id]);
+    // Archived is read-only: a save is refused with a reason, and nothing changes.
+    const current = (await callRoute(getRoute, { userId: w.designerId, params: { routeId: String(route.id) } })).body as RouteDocumentDto;
+    const refused = await callRoute(saveRoute, { method: 'PUT', userId: w.designerId, params: { routeId: String(route.id) }, body: saveBody(current, { name: 'Edited while archived' }) });
+    expect(refused.status).toBe(422);
+    expect(errorOf(refused.body).message).toMatch(/archived/);
+    expect(((await callRoute(getRoute, { userId: w.designerId, params: { routeId: String(route.id) } })).body as RouteDocumentDto).name).toBe('Original');
     await callRoute(archive, { method: 'POST', userId: w.designerId, params: { routeId: String(route.id) }, body: { archived: false } });
     const back = (await callRoute(listRoutes, { userId: w.designerId, path: '/api/routes?q=Original' })).body as { items: unknown[] };
     expect(back.items).toHaveLength(2);

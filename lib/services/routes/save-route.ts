@@ -45,6 +45,7 @@ export async function saveRoute({ teamId, userId, routeId, input, origin }: { te
   return sequelize.transaction(async (transaction) => {
     const current = await models.Route.findOne({ where: { id: routeId, teamId, deletedAt: null }, transaction });
     if (!current) throw new AppError('NOT_FOUND', 'No such route.');
+    if (current.archivedAt) throw new AppError('UNPROCESSABLE', 'This route is archived, so it is read-only. Unarchive it to edit it.');
     if (current.version !== input.version) throw conflict(current.version, input.version);
     const previous = (await latestRevisionState({ routeId, transaction })) ?? stateOfDocument(await getRoute({ teamId, routeId, transaction }));
     const wasApproved = current.status === 'approved';
