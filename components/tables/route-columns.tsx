@@ -5,8 +5,8 @@ import Link from 'next/link';
 import type { RouteSummaryDto } from '@/lib/services/routes/route-dto';
 import { formatEnergy, type EnergyUnit } from '../ladder/energy-format';
 import { Button } from '../ui/button';
+import { When } from '@/components/ui/when';
 
-const DATE_TIME = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' });
 
 export const ROUTE_NUMERIC_COLUMNS = ['steps', 'overallDeltaG', 'uphillSteps'];
 
@@ -75,9 +75,7 @@ export function routeColumns({
         <span className="text-ink-soft">
           {row.original.updatedBy}
           <br />
-          <time dateTime={row.original.updatedAt} className="text-xs text-ink-faint">
-            {DATE_TIME.format(new Date(row.original.updatedAt))}
-          </time>
+          <When iso={row.original.updatedAt} />
         </span>
       ),
     },

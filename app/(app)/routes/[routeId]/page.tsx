@@ -22,5 +22,5 @@ export default async function RouteEditorPage({ params }: { params: Promise<{ ro
     throw error;
   });
   if (!route) notFound();
-  return <RouteEditorClient key={route.id} initialRoute={route} role={membership.role} />;
+  return <RouteEditorClient key={route.id} initialRoute={route} role={membership.role} teamId={teamId} selfId={profile.user.id} />;
 }

@@ -11,7 +11,7 @@ import { RouteEditorStoreProvider } from '@/stores/route-editor-store';
 import { ArchivedNotice } from './_components/archived-notice';
 import { RouteEditor } from './_components/route-editor';
 
-export function RouteEditorClient({ initialRoute, role }: { initialRoute: RouteDocumentDto; role: Role }) {
+export function RouteEditorClient({ initialRoute, role, teamId, selfId }: { initialRoute: RouteDocumentDto; role: Role; teamId: number; selfId: number }) {
   const { data: profile } = useProfile();
   const { data: route = initialRoute } = useQuery({ ...routeDetailQuery(initialRoute.id), initialData: initialRoute });
   const preferences = profile?.preferences ?? { energyUnit: 'kJ', temperatureUnit: 'K', pressureUnit: 'bar' };
@@ -24,7 +24,7 @@ export function RouteEditorClient({ initialRoute, role }: { initialRoute: RouteD
     <div className="flex flex-col gap-3">
       {route.archived ? <ArchivedNotice routeId={route.id} canUnarchive={mayEdit} /> : null}
       <RouteEditorStoreProvider key={editorKey} initialDoc={draftOf(route)} initialVersion={route.version}>
-        <RouteEditor routeId={route.id} canEdit={mayEdit && !route.archived} units={preferences} />
+        <RouteEditor routeId={route.id} canEdit={mayEdit && !route.archived} units={preferences} review={{ teamId, selfId, role, status: route.status, archived: route.archived }} />
       </RouteEditorStoreProvider>
     </div>
   );

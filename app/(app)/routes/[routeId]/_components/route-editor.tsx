@@ -22,11 +22,22 @@ import { StepPalette } from './step-palette';
 import { useAutosave } from './use-autosave';
 import { SHORTCUT_HELP, useEditorShortcuts } from './use-editor-shortcuts';
 import { useRouteEvaluation } from './use-route-evaluation';
+import { ReviewSection } from './review-section';
+import { WorkflowBar } from './workflow-bar';
+import type { Role } from '@/lib/auth/roles';
 
 const FIT_OPTIONS = { padding: 0.2, maxZoom: 1.25, duration: 200 };
 export const LINK_REFUSAL = 'Link a product of one step to the same species consumed by the next.';
 
-export function RouteEditor({ routeId, canEdit, units }: { routeId: number; canEdit: boolean; units: PanelUnits }) {
+export interface ReviewContext {
+  teamId: number;
+  selfId: number;
+  role: Role;
+  status: string;
+  archived: boolean;
+}
+
+export function RouteEditor({ routeId, canEdit, units, review }: { routeId: number; canEdit: boolean; units: PanelUnits; review: ReviewContext }) {
   const store = useRouteEditorStoreApi();
   // Strings, not the steps array: the editor re-renders when ids or equations change, not on every drag frame.
   const stepIdsKey = useRouteEditorStore((s) => s.doc.steps.map((x) => x.id).join('|'));
@@ -99,6 +110,11 @@ export function RouteEditor({ routeId, canEdit, units }: { routeId: number; canE
             Target <span className="font-mono">{target}</span>
             {canEdit ? null : <span className="ml-2 rounded bg-paper-deep px-1.5 py-0.5 text-xs">read-only</span>}
           </p>
+          {review.archived ? null : (
+            <div className="mt-1.5">
+              <WorkflowBar routeId={routeId} teamId={review.teamId} status={review.status} role={review.role} selfId={review.selfId} />
+            </div>
+          )}
         </div>
         <div className="flex items-center gap-3">
           {canEdit ? <SaveStatus isEvaluating={isEvaluating} onRetry={() => void saveNow()} /> : <p className="text-xs text-ink-faint">{isEvaluating ? 'evaluating…' : ''}</p>}
@@ -173,6 +189,7 @@ export function RouteEditor({ routeId, canEdit, units }: { routeId: number; canE
           }}
         />
       </div>
+      <ReviewSection routeId={routeId} canEdit={canEdit} unit={units.energyUnit} />
       {canEdit ? <ConflictDialog routeId={routeId} /> : null}
     </div>
   );

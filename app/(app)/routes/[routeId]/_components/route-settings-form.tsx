@@ -7,6 +7,7 @@ import { z } from 'zod';
 import { energyFromKJ, energyToKJ, type EnergyUnit } from '@/components/ladder/energy-format';
 import { RouteMeta } from '@/lib/schemas/route';
 import type { RouteMetaPatch } from '@/stores/route-editor-store';
+import { COMPACT_INPUT } from '@/components/ui/input-class';
 
 type Meta = Required<RouteMetaPatch>;
 
@@ -20,7 +21,7 @@ const SettingsSchema = z.object({
 type SettingsInput = z.input<typeof SettingsSchema>;
 type SettingsValues = z.output<typeof SettingsSchema>;
 
-const INPUT = 'w-full rounded-md border border-paper-edge bg-white px-2 py-1 text-sm outline-none focus:border-pine-500 focus:ring-2 focus:ring-pine-100 disabled:bg-paper';
+const INPUT = COMPACT_INPUT;
 
 const toValues = (meta: Meta, unit: EnergyUnit): SettingsInput => ({
   name: meta.name,

@@ -7,8 +7,9 @@ import { temperatureUnitLabel } from '@/components/ladder/energy-format';
 import { conditionRowsFor, StepFormSchema, stepSignature, toFormValues, toStepPatch, type FormUnits, type StepFormInput, type StepFormValues } from '@/lib/route-editor/step-form';
 import { StepInput } from '@/lib/schemas/route';
 import { BalanceCheck } from './balance-check';
+import { COMPACT_INPUT } from '@/components/ui/input-class';
 
-const INPUT = 'w-full rounded-md border border-paper-edge bg-white px-2 py-1 text-sm outline-none focus:border-pine-500 focus:ring-2 focus:ring-pine-100 disabled:bg-paper';
+const INPUT = COMPACT_INPUT;
 const LABEL = 'text-xs font-medium text-ink';
 
 function FieldError({ id, message }: { id: string; message?: string }) {
