@@ -12,8 +12,8 @@ export function isOutdated(comment: Comment, ctx: RouteContext): boolean {
 }
 
 export function toCommentDto(comment: Comment, ctx: RouteContext, names: Map<number, string>): CommentDto {
-  const isDeleted = comment.deletedAt !== null;
-  const person = (id: number | null) => (id !== null && names.has(id) ? { id, name: names.get(id)! } : null);
+  const isDeleted = comment.deletedAt != null;
+  const person = (id: number | null | undefined) => (typeof id === 'number' && names.has(id) ? { id, name: names.get(id)! } : null);
   return {
     id: comment.id,
     routeId: comment.routeId,
@@ -32,7 +32,7 @@ export function toCommentDto(comment: Comment, ctx: RouteContext, names: Map<num
 
 /** Every user id a DTO of these comments names. */
 export function namedUserIds(comments: Comment[]): number[] {
-  return comments.flatMap((c) => [c.authorId, c.resolvedById, ...c.mentions.map((m) => m.userId)].filter((id): id is number => id !== null));
+  return comments.flatMap((c) => [c.authorId, c.resolvedById, ...c.mentions.map((m) => m.userId)].filter((id): id is number => typeof id === 'number'));
 }
 
 // A deleted comment stays only as the head of a thread that still has live replies.
@@ -42,14 +42,14 @@ export function buildThreads(comments: Comment[], ctx: RouteContext, names: Map<
   const threads: ThreadDto[] = [];
   for (const root of comments) {
     if (root.parentId !== null) continue;
-    const live = (replies.get(root.id) ?? []).filter((r) => r.deletedAt === null);
-    if (root.deletedAt !== null && live.length === 0) continue;
+    const live = (replies.get(root.id) ?? []).filter((r) => r.deletedAt == null);
+    if (root.deletedAt != null && live.length === 0) continue;
     threads.push({
       root: toCommentDto(root, ctx, names),
       replies: live.map((r) => toCommentDto(r, ctx, names)),
-      resolved: root.resolvedAt !== null,
+      resolved: root.resolvedAt != null,
       resolvedAt: root.resolvedAt?.toISOString() ?? null,
-      resolvedBy: root.resolvedById !== null && names.has(root.resolvedById) ? { id: root.resolvedById, name: names.get(root.resolvedById)! } : null,
+      resolvedBy: root.resolvedById != null && names.has(root.resolvedById) ? { id: root.resolvedById, name: names.get(root.resolvedById)! } : null,
     });
   }
   return threads;

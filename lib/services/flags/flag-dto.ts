@@ -2,7 +2,7 @@ import type { StepFlag } from '../../../db/models/step-flag';
 import type { FlagDto } from '../../schemas/flag';
 
 export function toFlagDto(flag: StepFlag, names: Map<number, string>): FlagDto {
-  const person = (id: number | null) => (id !== null && names.has(id) ? { id, name: names.get(id)! } : null);
+  const person = (id: number | null | undefined) => (typeof id === 'number' && names.has(id) ? { id, name: names.get(id)! } : null);
   return {
     id: flag.id,
     routeId: flag.routeId,
@@ -11,13 +11,13 @@ export function toFlagDto(flag: StepFlag, names: Map<number, string>): FlagDto {
     reason: flag.reason,
     createdBy: person(flag.createdById),
     createdAt: flag.createdAt.toISOString(),
-    isOpen: flag.clearedAt === null,
+    isOpen: flag.clearedAt == null,
     clearedAt: flag.clearedAt?.toISOString() ?? null,
     clearedBy: person(flag.clearedById),
-    clearCommentId: flag.clearCommentId,
+    clearCommentId: flag.clearCommentId ?? null,
   };
 }
 
 export function flagUserIds(flags: StepFlag[]): number[] {
-  return flags.flatMap((f) => [f.createdById, f.clearedById]).filter((id): id is number => id !== null);
+  return flags.flatMap((f) => [f.createdById, f.clearedById]).filter((id): id is number => typeof id === 'number');
 }

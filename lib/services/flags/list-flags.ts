@@ -14,6 +14,6 @@ export async function listFlags({ teamId, routeId, query }: { teamId: number; ro
   });
   const names = await userNames(flagUserIds(rows));
   const openByStep: Record<string, number> = {};
-  for (const f of rows) if (f.clearedAt === null) openByStep[f.stepKey] = (openByStep[f.stepKey] ?? 0) + 1;
+  for (const f of rows) if (f.clearedAt == null) openByStep[f.stepKey] = (openByStep[f.stepKey] ?? 0) + 1;
   return { flags: rows.map((f) => toFlagDto(f, names)), openByStep };
 }
