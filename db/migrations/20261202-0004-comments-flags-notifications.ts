@@ -66,7 +66,8 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
     read_at: { type: DataTypes.DATE, allowNull: true },
     created_at: { type: DataTypes.DATE, allowNull: false },
   });
-  await qi.addIndex('notifications', ['user_id', 'created_at'], { name: 'notifications_user_time' });
+  // The list is newest first by id (keyset paging on id).
+  await qi.addIndex('notifications', ['user_id', 'id'], { name: 'notifications_user_newest' });
   await qi.addIndex('notifications', ['user_id', 'read_at'], { name: 'notifications_user_unread' });
   await qi.addIndex('notifications', ['team_id'], { name: 'notifications_team' });
   await qi.addIndex('notifications', ['route_id'], { name: 'notifications_route' });
