@@ -9,6 +9,7 @@ import type { EnergyUnit, TemperatureUnit } from '../ladder/energy-format';
 import { hasStepPayload, readStepPayload, type StepDragPayload } from './step-drop';
 import { STEP_NODE_TYPES, speciesOfHandle } from './step-node';
 import { useLinkEdges, useStepNodes, type NodeSize } from './use-step-nodes';
+import type { ReviewMarksByStep } from '../review/review-marks';
 
 export interface LinkAttempt {
   from: string;
@@ -35,7 +36,10 @@ export function RouteCanvas({
   onRemoveLink,
   onDropStep,
   onInit,
+  reviewMarks,
 }: {
+  /** open flags and unresolved comments per step, shown on the nodes */
+  reviewMarks?: ReviewMarksByStep;
   steps: StepInput[];
   links: LinkInput[];
   results: Map<string, RouteStepResult>;
@@ -59,7 +63,7 @@ export function RouteCanvas({
   // Fit once on load; an empty board keeps a 1:1 view, so the first drop does not jump the viewport.
   const [shouldFitOnLoad] = useState(() => steps.length > 0);
 
-  const nodes = useStepNodes({ steps, results, selectedStepId, sizes, stepLabels, energyUnit, temperatureUnit });
+  const nodes = useStepNodes({ steps, results, selectedStepId, sizes, stepLabels, energyUnit, temperatureUnit, reviewMarks });
   const edges = useLinkEdges(links, steps, selectedEdgeId);
 
   const handleNodesChange = useCallback(

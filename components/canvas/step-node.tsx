@@ -16,6 +16,9 @@ export interface StepNodeData {
   deltaGText: string;
   cls: StepClass | null;
   signUncertain: boolean;
+  /** open flags and unresolved comments, in words ("" when none) */
+  reviewText: string;
+  hasFlags: boolean;
 }
 
 export const reactantHandleId = (species: string) => `r:${species}`;
@@ -48,6 +51,11 @@ function StepNodeView({ id, data, selected }: NodeProps<StepNodeData>) {
         <span className="font-semibold text-ink-soft">{data.label}</span>
         <NodeClassBadge cls={data.cls} signUncertain={data.signUncertain} />
       </div>
+      {data.reviewText ? (
+        <p className={`border-b border-paper-edge px-2 py-0.5 text-[11px] font-medium ${data.hasFlags ? 'bg-brass-100 text-brass-700' : 'text-pine-700'}`} data-testid="step-review-marks">
+          {data.reviewText}
+        </p>
+      ) : null}
       <p className="break-words px-2 py-1.5 font-mono text-[12px] leading-snug text-ink">{data.equation || <span className="text-ink-faint">blank step: type an equation</span>}</p>
       <div className="flex justify-between gap-2 px-2 pb-1 text-ink-soft">
         <span>T {data.temperatureText}</span>

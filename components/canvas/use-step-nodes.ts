@@ -6,12 +6,13 @@ import { equationSpecies } from '@/lib/route-editor/equation-species';
 import { temperatureKOf } from '@/lib/route-editor/temperature-text';
 import type { LinkInput, StepInput } from '@/lib/schemas/route';
 import type { RouteStepResult } from '@/lib/thermo/route';
+import { reviewMarkText, type ReviewMarksByStep, type StepReviewMarks } from '../review/review-marks';
 import { formatEnergy, formatTemperature, type EnergyUnit, type TemperatureUnit } from '../ladder/energy-format';
 import { productHandleId, reactantHandleId, type StepNodeData } from './step-node';
 
 export type NodeSize = { width: number; height: number };
 
-function nodeData(step: StepInput, label: string, result: RouteStepResult | undefined, energyUnit: EnergyUnit, temperatureUnit: TemperatureUnit): StepNodeData {
+function nodeData(step: StepInput, label: string, result: RouteStepResult | undefined, marks: StepReviewMarks | undefined, energyUnit: EnergyUnit, temperatureUnit: TemperatureUnit): StepNodeData {
   const { reactants, products } = equationSpecies(step.equation);
   const T = result?.result?.temperature_K ?? temperatureKOf(step.temperature);
   const engine = result?.result ?? null;
@@ -26,6 +27,8 @@ function nodeData(step: StepInput, label: string, result: RouteStepResult | unde
     deltaGText: formatEnergy(deltaG, energyUnit, { perMol: true }),
     cls: result?.class ?? null,
     signUncertain: result?.signUncertain ?? false,
+    reviewText: reviewMarkText(marks),
+    hasFlags: (marks?.flags ?? 0) > 0,
   };
 }
 
@@ -38,6 +41,7 @@ function sameData(a: StepNodeData, b: StepNodeData): boolean {
     a.deltaGText === b.deltaGText &&
     a.cls === b.cls &&
     a.signUncertain === b.signUncertain &&
+    a.reviewText === b.reviewText &&
     a.reactants.join('|') === b.reactants.join('|') &&
     a.products.join('|') === b.products.join('|')
   );
@@ -46,6 +50,7 @@ function sameData(a: StepNodeData, b: StepNodeData): boolean {
 interface CachedNode {
   step: StepInput;
   result: RouteStepResult | undefined;
+  marks: StepReviewMarks | undefined;
   label: string;
   data: StepNodeData;
 }
@@ -59,7 +64,9 @@ export function useStepNodes({
   stepLabels,
   energyUnit,
   temperatureUnit,
+  reviewMarks,
 }: {
+  reviewMarks?: ReviewMarksByStep;
   steps: StepInput[];
   stepLabels: Record<string, string>;
   results: Map<string, RouteStepResult>;
@@ -74,16 +81,17 @@ export function useStepNodes({
     const byId = new Map<string, CachedNode>();
     const nodes = steps.map((step, index) => {
       const result = results.get(step.id);
+      const marks = reviewMarks?.[step.id];
       const label = stepLabels[step.id] ?? `Step ${index + 1}`;
       const hit = previous.get(step.id);
       let data: StepNodeData;
-      if (hit && hit.result === result && hit.label === label && (hit.step === step || hit.step.equation === step.equation && hit.step.temperature === step.temperature)) {
+      if (hit && hit.result === result && hit.marks === marks && hit.label === label && (hit.step === step || hit.step.equation === step.equation && hit.step.temperature === step.temperature)) {
         data = hit.data;
       } else {
-        const fresh = nodeData(step, label, result, energyUnit, temperatureUnit);
+        const fresh = nodeData(step, label, result, marks, energyUnit, temperatureUnit);
         data = hit && sameData(hit.data, fresh) ? hit.data : fresh;
       }
-      byId.set(step.id, { step, result, label, data });
+      byId.set(step.id, { step, result, marks, label, data });
       const size = sizes[step.id];
       return {
         id: step.id,
@@ -92,13 +100,13 @@ export function useStepNodes({
         data,
         selected: step.id === selectedStepId,
         deletable: false,
-        ariaLabel: `${data.label}: ${step.equation || 'blank'}`,
+        ariaLabel: `${data.label}: ${step.equation || 'blank'}${data.reviewText ? ` (${data.reviewText})` : ''}`,
         ...(size ? { width: size.width, height: size.height } : {}),
       } satisfies Node<StepNodeData>;
     });
     cache.current = { energyUnit, temperatureUnit, byId };
     return nodes;
-  }, [steps, results, selectedStepId, sizes, stepLabels, energyUnit, temperatureUnit]);
+  }, [steps, results, reviewMarks, selectedStepId, sizes, stepLabels, energyUnit, temperatureUnit]);
 }
 
 export const linkEdgeId = (link: LinkInput) => `${link.from}>${link.to}:${link.species}`;

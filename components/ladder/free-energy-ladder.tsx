@@ -14,6 +14,7 @@ import { LADDER_COLOURS as C } from './ladder-palette';
 import { LadderStepMark } from './ladder-step-mark';
 import { LadderTooltip } from './ladder-tooltip';
 import { useElementWidth } from './use-element-width';
+import type { ReviewMarksByStep } from '../review/review-marks';
 
 export interface FreeEnergyLadderProps {
   evaluation: RouteEvaluateResponse | null | undefined;
@@ -26,6 +27,8 @@ export interface FreeEnergyLadderProps {
   /** file name stem for the exports */
   exportName?: string;
   height?: number;
+  /** open flags and unresolved comments per step, written above the risers */
+  reviewMarks?: ReviewMarksByStep;
 }
 
 const FALLBACK_WIDTH = 720;
@@ -39,6 +42,7 @@ export function FreeEnergyLadder({
   basisLabel = 'per mol of target',
   exportName = 'free-energy-ladder',
   height = 340,
+  reviewMarks,
 }: FreeEnergyLadderProps) {
   const [containerRef, width] = useElementWidth<HTMLDivElement>(FALLBACK_WIDTH);
   const svgRef = useRef<SVGSVGElement | null>(null);
@@ -180,6 +184,7 @@ export function FreeEnergyLadder({
               key={r.step.id}
               layout={r}
               label={labelOf(r.step.id)}
+              reviewMarks={reviewMarks?.[r.step.id]}
               unit={energyUnit}
               patternPrefix={prefix}
               plotBottom={layout.plot.bottom}

@@ -6,6 +6,7 @@ import type { EnergyUnit } from './energy-format';
 import { riserText, stepAriaLabel } from './ladder-describe';
 import type { RiserLayout } from './ladder-geometry';
 import { CLASS_STYLES, LADDER_COLOURS as C } from './ladder-palette';
+import { compactReviewMarkText, reviewMarkText, type StepReviewMarks } from '../review/review-marks';
 
 export interface StepMarkHandlers {
   onSelect: (id: string) => void;
@@ -18,6 +19,7 @@ export interface StepMarkHandlers {
 interface StepMarkProps extends StepMarkHandlers {
   layout: RiserLayout;
   label: string;
+  reviewMarks?: StepReviewMarks;
   unit: EnergyUnit;
   patternPrefix: string;
   plotBottom: number;
@@ -34,6 +36,8 @@ export function LadderStepMark(props: StepMarkProps) {
   const id = r.step.id;
   const style = CLASS_STYLES[r.step.cls];
   const text = riserText(r.step);
+  const review = reviewMarkText(props.reviewMarks);
+  const reviewShort = compactReviewMarkText(props.reviewMarks);
 
   const handleFocus = (e: FocusEvent<SVGGElement>): void => {
     // Only keyboard focus draws the ring; a click already shows where it landed.
@@ -44,7 +48,7 @@ export function LadderStepMark(props: StepMarkProps) {
     ref: (el: SVGGElement | null) => props.registerRef(id, el),
     role: 'button',
     tabIndex: 0,
-    'aria-label': stepAriaLabel(r.step, label, unit, isSelected),
+    'aria-label': `${stepAriaLabel(r.step, label, unit, isSelected)}${review ? `; ${review}` : ''}`,
     'aria-pressed': isSelected,
     'aria-describedby': tooltipId,
     'data-step-id': id,
@@ -116,6 +120,11 @@ export function LadderStepMark(props: StepMarkProps) {
       >
         {shown}
       </text>
+      {reviewShort ? (
+        <text x={r.bandX + r.bandWidth / 2} y={Math.max(10, hitTop - 2)} textAnchor="middle" fontSize={10} fontWeight={700} fill={C.brassDeep} data-testid="ladder-review-marks">
+          {reviewShort}
+        </text>
+      ) : null}
       {hasFocusRing ? (
         <rect
           data-export-skip

@@ -5,6 +5,7 @@ import { usePathname } from 'next/navigation';
 import type { ReactNode } from 'react';
 import { useProfile } from '@/lib/queries/me';
 import type { ProfileDto } from '@/lib/services/users/get-profile';
+import { NotificationBell } from './notification-bell';
 import { StepwellMark } from './stepwell-mark';
 import { TeamSwitcher } from './team-switcher';
 import { UserMenu } from './user-menu';
@@ -46,6 +47,7 @@ export function AppShell({ profile: initial, children }: { profile: ProfileDto; 
             })}
           </nav>
           <TeamSwitcher profile={profile} />
+          {profile.memberships.length ? <NotificationBell /> : null}
           <UserMenu name={profile.user.name} email={profile.user.email} />
         </div>
       </header>

@@ -1,6 +1,7 @@
 'use client';
 
-import { useCallback, useMemo, useRef } from 'react';
+import { useSearchParams } from 'next/navigation';
+import { useCallback, useEffect, useMemo, useRef } from 'react';
 import type { ReactFlowInstance } from 'reactflow';
 import { useShallow } from 'zustand/react/shallow';
 import type { LinkAttempt } from '@/components/canvas/route-canvas';
@@ -23,6 +24,7 @@ import { useAutosave } from './use-autosave';
 import { SHORTCUT_HELP, useEditorShortcuts } from './use-editor-shortcuts';
 import { useRouteEvaluation } from './use-route-evaluation';
 import { ReviewSection } from './review-section';
+import { useReviewData } from './use-review-data';
 import { WorkflowBar } from './workflow-bar';
 import type { Role } from '@/lib/auth/roles';
 
@@ -48,6 +50,12 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
   const { canUndo, canRedo } = useRouteEditorStore(useShallow((s) => ({ canUndo: s.past.length > 0, canRedo: s.future.length > 0 })));
   const { evaluation, results, isEvaluating, error } = useRouteEvaluation(routeId);
   const { saveNow } = useAutosave(routeId, { enabled: canEdit });
+  const reviewData = useReviewData(routeId, review.teamId);
+  // Links from mails and notifications name a step: open the route with it selected.
+  const linkedStep = useSearchParams().get('step');
+  useEffect(() => {
+    if (linkedStep && store.getState().doc.steps.some((s) => s.id === linkedStep)) store.getState().selectStep(linkedStep);
+  }, [linkedStep, store]);
 
   const flow = useRef<ReactFlowInstance | null>(null);
   const canvasBox = useRef<HTMLDivElement>(null);
@@ -146,6 +154,7 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
             energyUnit={units.energyUnit}
             temperatureUnit={units.temperatureUnit}
             isReadOnly={!canEdit}
+            reviewMarks={reviewData.marks}
             onSelectStep={handleSelectStep}
             onMoveStep={handleMoveStep}
             onLink={handleLink}
@@ -173,6 +182,7 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
             onSelectStep={(id) => store.getState().selectStep(id)}
             stepLabels={ladderLabels}
             exportName={name}
+            reviewMarks={reviewData.marks}
           />
         </section>
         <RemediesPanel
@@ -189,7 +199,7 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
           }}
         />
       </div>
-      <ReviewSection routeId={routeId} canEdit={canEdit} unit={units.energyUnit} />
+      <ReviewSection routeId={routeId} selfId={review.selfId} role={review.role} canEdit={canEdit} unit={units.energyUnit} stepLabels={stepLabels} data={reviewData} />
       {canEdit ? <ConflictDialog routeId={routeId} /> : null}
     </div>
   );
