@@ -91,9 +91,23 @@ export async function runEditorDragBench(baseUrl: string, { moves = 300 } = {}):
     const temperature = page.getByLabel(/^Temperature/);
     const ladderHtml = () => page.evaluate(`document.querySelector('svg[aria-label^="Free-energy ladder"]')?.innerHTML ?? ''`) as Promise<string>;
     const updates: number[] = [];
+    // Where the time goes: from the edit to the evaluate request leaving, and the request's round trip.
+    const toRequest: number[] = [];
+    const roundTrips: number[] = [];
+    let editStarted = 0;
+    let requestSent = 0;
+    const isEvaluate = (url: string) => url.endsWith(`/api/routes/${created.id}/evaluate`);
+    page.on('request', (req) => {
+      if (!isEvaluate(req.url()) || !editStarted) return;
+      requestSent = performance.now();
+      toRequest.push(requestSent - editStarted);
+    });
+    page.on('requestfinished', (req) => {
+      if (isEvaluate(req.url()) && requestSent) roundTrips.push(performance.now() - requestSent);
+    });
     for (let i = 0; i < 8; i += 1) {
       const before = await ladderHtml();
-      const editStarted = performance.now();
+      editStarted = performance.now();
       await temperature.fill(String(420 + (i % 2) * 60 + i));
       await page.waitForFunction(
         (old) => (document.querySelector('svg[aria-label^="Free-energy ladder"]')?.innerHTML ?? '') !== old,
@@ -115,6 +129,8 @@ export async function runEditorDragBench(baseUrl: string, { moves = 300 } = {}):
       frames_over_50ms: frames.filter((f) => f > 50).length,
       ladder_update_p50_ms: round(percentile(updates, 50), 0),
       ladder_update_max_ms: round(Math.max(...updates), 0),
+      ladder_update_edit_to_request_p50_ms: round(percentile(toRequest, 50), 0),
+      ladder_update_round_trip_p50_ms: round(percentile(roundTrips, 50), 0),
     };
   } finally {
     await browser.close();

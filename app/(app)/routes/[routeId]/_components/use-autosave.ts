@@ -3,6 +3,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useCallback, useEffect, useRef } from 'react';
 import { ApiError } from '@/lib/queries/api-fetch';
+import { reviewKeys } from '@/lib/queries/revisions';
 import { routeKeys, saveRoute } from '@/lib/queries/routes';
 import type { RouteDraft } from '@/lib/schemas/route';
 import { useRouteEditorStoreApi } from '@/stores/route-editor-store';
@@ -29,6 +30,8 @@ export function useAutosave(routeId: number, { enabled }: { enabled: boolean }) 
       store.getState().markSaved(answer.route.version, draft);
       queryClient.setQueryData(routeKeys.detail(routeId), answer.route);
       void queryClient.invalidateQueries({ queryKey: routeKeys.lists() });
+      // A save is a new revision, may outdate comments, and may send an approved route back to draft.
+      void queryClient.invalidateQueries({ queryKey: reviewKeys.route(routeId) });
     } catch (error) {
       failedDoc.current = draft;
       const isConflict = error instanceof ApiError && error.status === 409;

@@ -7,9 +7,9 @@ import { engineFingerprint } from '@/lib/route-editor/route-draft';
 import type { RouteStepResult } from '@/lib/thermo/route';
 import { useSettledDoc } from './use-settled-doc';
 
-const EVALUATE_DEBOUNCE_MS = 150;
+const EVALUATE_DEBOUNCE_MS = 80;
 
-// Evaluates the working draft ~150 ms after it settles; the last good answer stays on screen meanwhile.
+// Evaluates the working draft ~80 ms after it settles (typing pauses are longer); the last good answer stays on screen meanwhile.
 export function useRouteEvaluation(routeId: number) {
   const settled = useSettledDoc(EVALUATE_DEBOUNCE_MS);
   const fingerprint = useMemo(() => engineFingerprint(settled), [settled]);

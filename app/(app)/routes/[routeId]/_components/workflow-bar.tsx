@@ -1,13 +1,13 @@
 'use client';
 
-import { useQueryClient } from '@tanstack/react-query';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { StatusBadge } from '@/components/review/status-badge';
 import { Button } from '@/components/ui/button';
 import type { Role } from '@/lib/auth/roles';
-import { moveRoute, reviewKeys } from '@/lib/queries/revisions';
+import { moveRoute, reviewKeys, transitionsQuery } from '@/lib/queries/revisions';
 import { routeKeys } from '@/lib/queries/routes';
-import type { RouteStatus } from '@/lib/schemas/workflow';
+import { ROUTE_STATUS_LABELS, type RouteStatus } from '@/lib/schemas/workflow';
 import { allowedMoves } from '@/lib/services/workflow/transition-table';
 import { useRouteEditorStore, useRouteEditorStoreApi } from '@/stores/route-editor-store';
 import { MoveDialog } from './move-dialog';
@@ -20,6 +20,8 @@ export function WorkflowBar({ routeId, teamId, status, role, selfId }: { routeId
   const pendingEdits = useRouteEditorStore((s) => s.isDirty || s.saveStatus === 'saving');
   const [moving, setMoving] = useState<RouteStatus | null>(null);
   const moves = allowedMoves(status, role);
+  // The latest move, with its note: why the route is where it is ("edited after approval", "clear the flag first").
+  const latest = useQuery(transitionsQuery(routeId)).data?.items[0];
 
   const submit = async (values: { note: string; reviewerIds?: number[] }) => {
     if (!moving) return;
@@ -43,6 +45,12 @@ export function WorkflowBar({ routeId, teamId, status, role, selfId }: { routeId
           {to === 'in_review' && status === 'changes_requested' ? 'Send back for review' : MOVE_LABELS[to].action}
         </Button>
       ))}
+      {latest && latest.to === status ? (
+        <p className="text-xs text-ink-soft" data-testid="latest-move">
+          {ROUTE_STATUS_LABELS[latest.from]} → {ROUTE_STATUS_LABELS[latest.to]} by {latest.actor.name}
+          {latest.note ? <span>: “{latest.note}”</span> : null}
+        </p>
+      ) : null}
       {moving ? <MoveDialog to={moving} teamId={teamId} selfId={selfId} onClose={() => setMoving(null)} onSubmit={submit} /> : null}
     </div>
   );
