@@ -184,6 +184,7 @@ const TABLE: Row[] = [
   },
   { route: 'notifications', method: 'GET', expect: signedIn(200) },
   { route: 'notifications/read', method: 'POST', expect: signedIn(200), prepare: async () => ({ body: { all: true } }) },
+  { route: 'routes/[routeId]/activity', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: await routeParams(w) }) },
 ];
 
 let dir = '';
