@@ -5,6 +5,7 @@ import { deleteRoute } from '@/lib/services/routes/delete-route';
 import { getRoute } from '@/lib/services/routes/get-route';
 import { teamOfRoute } from '@/lib/services/routes/route-team';
 import { saveRoute } from '@/lib/services/routes/save-route';
+import { notifyTransition } from '@/lib/services/workflow/notify-transition';
 
 export const runtime = 'nodejs';
 export const dynamic = 'force-dynamic';
@@ -15,7 +16,12 @@ export const GET = withRoute({ access: 'team', teamFrom: teamOfRoute, permission
 
 export const PUT = withRoute(
   { access: 'team', teamFrom: teamOfRoute, permission: 'route.edit', body: SaveRouteInput, maxBodyBytes: 2 * 1024 * 1024 },
-  async ({ team, user, params, body }) => saveRoute({ teamId: team.id, userId: user.id, routeId: Number(params.routeId), input: body }),
+  async ({ team, user, params, body }) => {
+    const saved = await saveRoute({ teamId: team.id, userId: user.id, routeId: Number(params.routeId), input: body });
+    // Editing an approved route sent it back to draft: tell the owner and reviewers, after the commit.
+    if (saved.transition) await notifyTransition(saved.transition);
+    return saved;
+  },
 );
 
 export const DELETE = withRoute({ access: 'team', teamFrom: teamOfRoute, permission: 'route.delete' }, async ({ team, user, params }) =>

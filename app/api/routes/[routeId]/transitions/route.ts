@@ -1,8 +1,9 @@
-// GET/POST /api/routes/[routeId]/transitions: the route's review history, and moving it to another review status
+// GET/POST /api/routes/[routeId]/transitions: the route's review history, and moving it to another review status (then notifying)
 import { withRoute } from '@/lib/api/with-route';
 import { ListTransitionsQuery, TransitionInput } from '@/lib/schemas/workflow';
 import { teamOfRoute } from '@/lib/services/routes/route-team';
 import { listTransitions } from '@/lib/services/workflow/list-transitions';
+import { notifyTransition } from '@/lib/services/workflow/notify-transition';
 import { transitionRoute } from '@/lib/services/workflow/transition-route';
 
 export const runtime = 'nodejs';
@@ -13,6 +14,9 @@ export const GET = withRoute({ access: 'team', teamFrom: teamOfRoute, permission
 );
 
 // Who may make which move is the workflow table's call, so the gate here is only membership.
-export const POST = withRoute({ access: 'team', teamFrom: teamOfRoute, permission: 'route.read', body: TransitionInput }, async ({ team, user, params, body }) =>
-  transitionRoute({ teamId: team.id, userId: user.id, role: team.role, routeId: Number(params.routeId), input: body }),
-);
+// Notices go out only after the move has committed; a failed one never undoes it.
+export const POST = withRoute({ access: 'team', teamFrom: teamOfRoute, permission: 'route.read', body: TransitionInput }, async ({ team, user, params, body }) => {
+  const outcome = await transitionRoute({ teamId: team.id, userId: user.id, role: team.role, routeId: Number(params.routeId), input: body });
+  await notifyTransition(outcome);
+  return outcome;
+});
