@@ -2,6 +2,7 @@ import 'server-only';
 import type { Transaction } from 'sequelize';
 import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
+import { readLinkInputs, readStepInputs } from './read-route-rows';
 import { toRouteDocument, type RouteDocumentDto } from './route-dto';
 
 // A deleted route is gone for every reader and writer until a lead brings it back.
@@ -12,11 +13,7 @@ export async function findRouteRow({ teamId, routeId, transaction }: { teamId: n
 }
 
 export async function getRoute({ teamId, routeId, transaction }: { teamId: number; routeId: number; transaction?: Transaction }): Promise<RouteDocumentDto> {
-  const { Step, StepLink } = getDb().models;
   const route = await findRouteRow({ teamId, routeId, transaction });
-  const [steps, links] = await Promise.all([
-    Step.findAll({ where: { routeId }, order: [['sort_order', 'ASC']], transaction }),
-    StepLink.findAll({ where: { routeId }, order: [['id', 'ASC']], transaction }),
-  ]);
+  const [steps, links] = await Promise.all([readStepInputs(routeId, transaction), readLinkInputs(routeId, transaction)]);
   return toRouteDocument(route, steps, links);
 }

@@ -1,6 +1,5 @@
 import type { Route } from '../../../db/models/route';
-import type { Step, StepConditions } from '../../../db/models/step';
-import type { StepLink } from '../../../db/models/step-link';
+import type { StepConditions } from '../../../db/models/step';
 import type { LinkInput, StepInput } from '../../schemas/route';
 
 export interface RouteSummaryDto {
@@ -48,22 +47,7 @@ export function toRouteSummary(route: Route, updatedByName: string): RouteSummar
   };
 }
 
-export function toStepInput(step: Step): StepInput {
-  return {
-    id: step.stepKey,
-    equation: step.equation,
-    ...step.conditions,
-    yieldPct: step.yieldPct,
-    notes: step.notes,
-    position: { x: step.positionX, y: step.positionY },
-  };
-}
-
-export function toLinkInput(link: StepLink): LinkInput {
-  return { from: link.fromKey, to: link.toKey, species: link.species };
-}
-
-export function toRouteDocument(route: Route, steps: Step[], links: StepLink[]): RouteDocumentDto {
+export function toRouteDocument(route: Route, steps: StepInput[], links: LinkInput[]): RouteDocumentDto {
   return {
     id: route.id,
     name: route.name,
@@ -75,8 +59,8 @@ export function toRouteDocument(route: Route, steps: Step[], links: StepLink[]):
     originRouteId: route.originRouteId,
     archived: route.archivedAt !== null,
     updatedAt: route.updatedAt.toISOString(),
-    steps: steps.map(toStepInput),
-    links: links.map(toLinkInput),
+    steps,
+    links,
   };
 }
 
