@@ -139,4 +139,8 @@ test('history: every save is a revision; two compare field by field, and a resto
   await expect(list.getByRole('listitem').first()).toContainText('Restored revision 2');
   await stepNode(page, 's2').locator('p.font-mono').click();
   await expect(page.getByRole('textbox', { name: /Temperature/ })).toHaveValue('500');
+
+  await review(page).getByRole('tab', { name: 'Activity' }).click();
+  const feed = review(page).getByRole('list', { name: 'Activity, newest first' });
+  await expect(feed.getByRole('listitem').first()).toContainText('Restored revision 2');
 });

@@ -5,12 +5,13 @@ import type { EnergyUnit } from '@/components/ladder/energy-format';
 import { Tabs } from '@/components/ui/tabs';
 import { can } from '@/lib/auth/permissions';
 import type { Role } from '@/lib/auth/roles';
+import { ActivityPanel } from './activity-panel';
 import { DiscussionPanel } from './discussion-panel';
 import { FlagsPanel } from './flags-panel';
 import { HistoryPanel } from './history-panel';
 import type { useReviewData } from './use-review-data';
 
-type ReviewTab = 'discussion' | 'flags' | 'history';
+type ReviewTab = 'discussion' | 'flags' | 'history' | 'activity';
 
 // Below the ladder: the route's review work.
 export function ReviewSection({
@@ -42,6 +43,7 @@ export function ReviewSection({
           { key: 'discussion', label: `Discussion${count(openThreads)}` },
           { key: 'flags', label: `Flags${count(openFlags)}` },
           { key: 'history', label: 'History' },
+          { key: 'activity', label: 'Activity' },
         ]}
         active={tab}
         onChange={setTab}
@@ -59,6 +61,7 @@ export function ReviewSection({
         ) : null}
         {tab === 'flags' ? <FlagsPanel routeId={routeId} canFlag={can(role, 'route.flag')} stepLabels={stepLabels} refresh={data.refresh} /> : null}
         {tab === 'history' ? <HistoryPanel routeId={routeId} canEdit={canEdit} unit={unit} /> : null}
+        {tab === 'activity' ? <ActivityPanel routeId={routeId} stepLabels={stepLabels} /> : null}
       </Tabs>
     </section>
   );
