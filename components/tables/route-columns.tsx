@@ -7,7 +7,6 @@ import { formatEnergy, type EnergyUnit } from '../ladder/energy-format';
 import { Button } from '../ui/button';
 import { When } from '@/components/ui/when';
 
-
 export const ROUTE_NUMERIC_COLUMNS = ['steps', 'overallDeltaG', 'uphillSteps'];
 
 function UphillCell({ count }: { count: number | null }) {
@@ -29,15 +28,20 @@ function UphillCell({ count }: { count: number | null }) {
 export function routeColumns({
   energyUnit,
   canEdit,
+  canDelete = false,
   busyRouteId,
   onDuplicate,
   onArchive,
+  onDelete,
 }: {
   energyUnit: EnergyUnit;
   canEdit: boolean;
+  /** designers and leads: a Delete action that asks first */
+  canDelete?: boolean;
   busyRouteId: number | null;
   onDuplicate: (route: RouteSummaryDto) => void;
   onArchive: (route: RouteSummaryDto, archived: boolean) => void;
+  onDelete?: (route: RouteSummaryDto) => void;
 }): ColumnDef<RouteSummaryDto>[] {
   const columns: ColumnDef<RouteSummaryDto>[] = [
     {
@@ -80,7 +84,8 @@ export function routeColumns({
       ),
     },
   ];
-  if (!canEdit) return columns;
+  const hasDelete = canDelete && onDelete !== undefined;
+  if (!canEdit && !hasDelete) return columns;
   return [
     ...columns,
     {
@@ -92,12 +97,21 @@ export function routeColumns({
         const isBusy = busyRouteId === route.id;
         return (
           <div className="flex justify-end gap-1 whitespace-nowrap">
-            <Button variant="quiet" disabled={isBusy} onClick={() => onDuplicate(route)} aria-label={`Duplicate ${route.name} as an alternative`}>
-              Duplicate as alternative
-            </Button>
-            <Button variant="quiet" disabled={isBusy} onClick={() => onArchive(route, !route.archived)} aria-label={`${route.archived ? 'Unarchive' : 'Archive'} ${route.name}`}>
-              {route.archived ? 'Unarchive' : 'Archive'}
-            </Button>
+            {canEdit ? (
+              <>
+                <Button variant="quiet" disabled={isBusy} onClick={() => onDuplicate(route)} aria-label={`Duplicate ${route.name} as an alternative`}>
+                  Duplicate as alternative
+                </Button>
+                <Button variant="quiet" disabled={isBusy} onClick={() => onArchive(route, !route.archived)} aria-label={`${route.archived ? 'Unarchive' : 'Archive'} ${route.name}`}>
+                  {route.archived ? 'Unarchive' : 'Archive'}
+                </Button>
+              </>
+            ) : null}
+            {hasDelete ? (
+              <Button variant="danger" disabled={isBusy} onClick={() => onDelete(route)} aria-label={`Delete ${route.name}`}>
+                Delete
+              </Button>
+            ) : null}
           </div>
         );
       },

@@ -1,6 +1,7 @@
 import { keepPreviousData, queryOptions } from '@tanstack/react-query';
 import type { ListRoutesQuery, RouteDraft, SaveRouteInput } from '../schemas/route';
 import type { LibraryReaction } from '../services/routes/search-library-reactions';
+import type { DeletedRouteDto } from '../services/routes/list-deleted-routes';
 import type { RouteDocumentDto, RouteSummaryDto } from '../services/routes/route-dto';
 import type { BalanceCheck } from '../services/thermo/check-equation-balance';
 import type { RouteEvaluateResponse } from '../thermo/route';
@@ -95,3 +96,37 @@ export const duplicateRoute = (routeId: number, name?: string) =>
 
 export const setRouteArchived = (routeId: number, archived: boolean) =>
   apiFetch<unknown>(`/api/routes/${routeId}/archive`, { method: 'POST', body: { archived } });
+
+export interface DeletedRouteListPage {
+  items: DeletedRouteDto[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+// Under routeKeys.lists(), so every change that refreshes the lists refreshes this one too.
+export const deletedRouteKeys = {
+  list: (paging: { page: number; pageSize: number }) => [...routeKeys.lists(), 'deleted', paging] as const,
+};
+
+/** Routes deleted within the undo window, newest deletion first (leads only). */
+export const deletedRouteListQuery = (paging: { page: number; pageSize: number }) =>
+  queryOptions({
+    queryKey: deletedRouteKeys.list(paging),
+    queryFn: () => apiFetch<DeletedRouteListPage>(`/api/routes?deleted=1&page=${paging.page}&pageSize=${paging.pageSize}`),
+    placeholderData: (previous) => previous,
+  });
+
+export interface DeletedRouteAnswer {
+  id: number;
+  deleted: true;
+  deletedAt: string;
+  restorableUntil: string;
+}
+
+export const deleteRoute = (routeId: number) => apiFetch<DeletedRouteAnswer>(`/api/routes/${routeId}`, { method: 'DELETE' });
+
+export const undeleteRoute = (routeId: number) => apiFetch<{ id: number; deleted: false; version: number }>(`/api/routes/${routeId}/undelete`, { method: 'POST', body: {} });
+
+/** How long a lead can bring a deleted route back (the server's window; shown in the UI's wording). */
+export const UNDELETE_DAYS = 30;

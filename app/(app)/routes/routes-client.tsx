@@ -14,9 +14,11 @@ import { can } from '@/lib/auth/permissions';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { ApiError } from '@/lib/queries/api-fetch';
 import { activeMembership, useProfile } from '@/lib/queries/me';
-import { duplicateRoute, routeKeys, routeListQuery, setRouteArchived } from '@/lib/queries/routes';
+import { deleteRoute, duplicateRoute, routeKeys, routeListQuery, setRouteArchived, UNDELETE_DAYS } from '@/lib/queries/routes';
 import { ROUTE_SORTS, type ListRoutesQuery } from '@/lib/schemas/route';
 import type { RouteSummaryDto } from '@/lib/services/routes/route-dto';
+import { DeleteRouteDialog } from './delete-route-dialog';
+import { DeletedRoutes } from './deleted-routes';
 import { NewRouteDialog } from './new-route-dialog';
 
 type Sort = ListRoutesQuery['sort'];
@@ -27,6 +29,9 @@ export function RoutesClient() {
   const { data: profile } = useProfile();
   const role = activeMembership(profile)?.role;
   const canEdit = can(role, 'route.edit');
+  const canDelete = can(role, 'route.delete');
+  // Seeing and undoing deletions is the lead's call, as on the server.
+  const isLead = can(role, 'route.decide');
   const energyUnit = profile?.preferences.energyUnit ?? 'kJ';
 
   const [search, setSearch] = useState('');
@@ -36,6 +41,8 @@ export function RoutesClient() {
   const [pageSize, setPageSize] = useState(25);
   const [showArchived, setShowArchived] = useState(false);
   const [isCreating, setIsCreating] = useState(false);
+  const [showDeleted, setShowDeleted] = useState(false);
+  const [toDelete, setToDelete] = useState<RouteSummaryDto | null>(null);
   const [message, setMessage] = useState<{ tone: 'success' | 'error'; text: string } | null>(null);
 
   const sortId = sorting[0]?.id ?? 'updatedAt';
@@ -67,13 +74,22 @@ export function RoutesClient() {
     },
     onError,
   });
-  const busyRouteId = duplicate.isPending ? (duplicate.variables?.id ?? null) : archive.isPending ? (archive.variables?.route.id ?? null) : null;
+  const remove = useMutation({
+    mutationFn: (route: RouteSummaryDto) => deleteRoute(route.id),
+    onSuccess: (_data, route) => {
+      setToDelete(null);
+      setMessage({ tone: 'success', text: `Deleted “${route.name}”. ${isLead ? 'You can undo this under “Recently deleted”' : 'A group lead can undo this'} for ${UNDELETE_DAYS} days.` });
+      return refreshLists();
+    },
+  });
+  const busyRouteId = remove.isPending ? (remove.variables?.id ?? null) : duplicate.isPending ? (duplicate.variables?.id ?? null) : archive.isPending ? (archive.variables?.route.id ?? null) : null;
 
   const columns = useMemo(
     () =>
       routeColumns({
         energyUnit,
         canEdit,
+        canDelete,
         busyRouteId,
         onDuplicate: (route) => {
           setMessage(null);
@@ -83,45 +99,22 @@ export function RoutesClient() {
           setMessage(null);
           archive.mutate({ route, archived });
         },
+        onDelete: (route) => {
+          setMessage(null);
+          remove.reset();
+          setToDelete(route);
+        },
       }),
-    // The mutation objects change every render; their mutate functions are stable.
+    // The mutation objects change every render; their mutate and reset functions are stable.
     // eslint-disable-next-line react-hooks/exhaustive-deps
-    [energyUnit, canEdit, busyRouteId, duplicate.mutate, archive.mutate],
+    [energyUnit, canEdit, canDelete, busyRouteId, duplicate.mutate, archive.mutate, remove.reset],
   );
 
   const items = routes.data?.items ?? [];
   const isFiltered = Boolean(q);
 
-  return (
-    <div className="flex flex-col gap-3">
-      <div className="flex flex-wrap items-end gap-3">
-        <TextField
-          label="Search"
-          type="search"
-          value={search}
-          onChange={(e) => {
-            setSearch(e.target.value);
-            setPage(1);
-          }}
-          placeholder="Name or target"
-          className="w-64"
-        />
-        <label className="flex items-center gap-1.5 pb-1.5 text-sm">
-          <input
-            type="checkbox"
-            checked={showArchived}
-            onChange={(e) => {
-              setShowArchived(e.target.checked);
-              setPage(1);
-            }}
-            className="accent-pine-600"
-          />
-          Show archived routes
-        </label>
-        <div className="flex-1" />
-        {canEdit ? <Button onClick={() => setIsCreating(true)}>New route</Button> : null}
-      </div>
-
+  const listView = (
+    <>
       <div aria-live="polite">{message ? <Notice tone={message.tone}>{message.text}</Notice> : null}</div>
 
       {routes.isPending ? (
@@ -176,7 +169,67 @@ export function RoutesClient() {
           />
         </>
       )}
+    </>
+  );
+
+  return (
+    <div className="flex flex-col gap-3">
+      <div className="flex flex-wrap items-end gap-3">
+        {showDeleted ? null : (
+          <TextField
+            label="Search"
+            type="search"
+            value={search}
+            onChange={(e) => {
+              setSearch(e.target.value);
+              setPage(1);
+            }}
+            placeholder="Name or target"
+            className="w-64"
+          />
+        )}
+        {showDeleted ? null : (
+          <label className="flex items-center gap-1.5 pb-1.5 text-sm">
+            <input
+              type="checkbox"
+              checked={showArchived}
+              onChange={(e) => {
+                setShowArchived(e.target.checked);
+                setPage(1);
+              }}
+              className="accent-pine-600"
+            />
+            Show archived routes
+          </label>
+        )}
+        {isLead ? (
+          <Button
+            variant={showDeleted ? 'primary' : 'secondary'}
+            aria-pressed={showDeleted}
+            onClick={() => {
+              setShowDeleted(!showDeleted);
+              setMessage(null);
+            }}
+          >
+            Recently deleted
+          </Button>
+        ) : null}
+        <div className="flex-1" />
+        {canEdit && !showDeleted ? <Button onClick={() => setIsCreating(true)}>New route</Button> : null}
+      </div>
+
+      {showDeleted ? <DeletedRoutes /> : listView}
       {canEdit ? <NewRouteDialog open={isCreating} onClose={() => setIsCreating(false)} /> : null}
+      {canDelete ? (
+        <DeleteRouteDialog
+          route={toDelete}
+          isLead={isLead}
+          isDeleting={remove.isPending}
+          error={remove.error ? (remove.error instanceof ApiError ? remove.error.message : 'That did not work. Try again.') : null}
+          onConfirm={() => toDelete && remove.mutate(toDelete)}
+          onClose={() => setToDelete(null)}
+        />
+      ) : null}
     </div>
   );
 }
