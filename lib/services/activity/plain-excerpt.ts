@@ -1,25 +1,33 @@
-// A comment's markdown as one short line of plain text for the feed. Pure. Raw HTML stays as text, as the renderer shows it.
+// A comment's markdown as one short line of plain text for the feed: the words a reader sees, without markup.
+// Raw HTML stays as text, as the comment renderer shows it. Pure.
+import { fromMarkdown } from 'mdast-util-from-markdown';
 
 export const EXCERPT_CHARS = 160;
 
+interface MdNode {
+  type: string;
+  value?: string;
+  alt?: string | null;
+  children?: MdNode[];
+}
+
+const TEXT_NODES = new Set(['text', 'inlineCode', 'html', 'code']);
+const BLOCK_NODES = new Set(['paragraph', 'heading', 'blockquote', 'list', 'listItem', 'code', 'table', 'tableRow', 'tableCell', 'thematicBreak']);
+
+function collect(node: MdNode, out: string[]): string[] {
+  if (TEXT_NODES.has(node.type)) out.push(node.value ?? '');
+  else if (node.type === 'image') out.push(node.alt ?? '');
+  else if (node.type === 'break') out.push(' ');
+  for (const child of node.children ?? []) {
+    collect(child, out);
+    // Blocks (paragraphs, list items, quotes, code) end with a space so their words do not run together.
+    if (BLOCK_NODES.has(child.type) || (node.type === 'root' && child.type === 'html')) out.push(' ');
+  }
+  return out;
+}
+
 export function markdownToPlain(markdown: string): string {
-  return (
-    markdown
-      // fenced code: keep the code, drop the fences and the language tag
-      .replace(/^ {0,3}(`{3,}|~{3,})[^\n]*\n([\s\S]*?)(?:^ {0,3}\1[^\n]*$|(?![\s\S]))/gm, '$2')
-      .replace(/!\[([^\]]*)\]\([^)]*\)/g, '$1')
-      .replace(/\[([^\]]+)\]\([^)]*\)/g, '$1')
-      .replace(/<((?:https?|mailto):[^>\s]+)>/g, '$1')
-      .replace(/`+([^`]+?)`+/g, '$1')
-      .replace(/^ {0,3}(?:#{1,6}\s+|>\s?|[-*+]\s+|\d{1,9}[.)]\s+)/gm, '')
-      .replace(/(\*\*|__)(?=\S)([\s\S]*?\S)\1/g, '$2')
-      .replace(/(^|[^\w*])\*(?=\S)([^*\n]*?\S)\*(?![\w*])/g, '$1$2')
-      .replace(/(^|[^\w])_(?=\S)([^_\n]*?\S)_(?!\w)/g, '$1$2')
-      .replace(/~~(?=\S)([\s\S]*?\S)~~/g, '$1')
-      .replace(/\\([\\`*_{}[\]()#+\-.!~>|])/g, '$1')
-      .replace(/\s+/g, ' ')
-      .trim()
-  );
+  return collect(fromMarkdown(markdown) as MdNode, []).join('').replace(/\s+/g, ' ').trim();
 }
 
 /** At most `max` characters, cut at a word where one is near, with an ellipsis when cut. */

@@ -106,7 +106,9 @@ describe('comment excerpts', () => {
       'Check the pressure on s1 and CH3OH(g). quoted item',
     );
     expect(markdownToPlain('```text\nT = 1100 K\n```\nthen cool')).toBe('T = 1100 K then cool');
-    expect(markdownToPlain('keep snake_case_names and 2*3*4')).toBe('keep snake_case_names and 2*3*4');
+    expect(markdownToPlain('keep snake_case_names, \\*literal stars\\* and [a ref][r]\n\n[r]: https://example.test')).toBe('keep snake_case_names, *literal stars* and a ref');
+    expect(markdownToPlain('*nested **strong** words*  \nnext line')).toBe('nested strong words next line');
+    expect(markdownToPlain('CH**3**OH and H~2~O')).toBe('CH3OH and H~2~O');
     // Raw HTML stays as text, as the comment renderer shows it.
     expect(markdownToPlain('is <b>1100 K</b> safe?')).toBe('is <b>1100 K</b> safe?');
   });
