@@ -3,6 +3,7 @@ import * as coreTables from './20261201-0001-core-tables';
 import * as routesStepsLinks from './20261201-0002-routes-steps-links';
 import * as revisionsWorkflow from './20261202-0003-revisions-workflow';
 import * as commentsFlagsNotifications from './20261202-0004-comments-flags-notifications';
+import * as decisions from './20261202-0005-decisions';
 
 export interface MigrationModule {
   up(params: { context: QueryInterface }): Promise<void>;
@@ -15,4 +16,5 @@ export const MIGRATIONS: ReadonlyArray<{ name: string; module: MigrationModule }
   { name: '20261201-0002-routes-steps-links', module: routesStepsLinks },
   { name: '20261202-0003-revisions-workflow', module: revisionsWorkflow },
   { name: '20261202-0004-comments-flags-notifications', module: commentsFlagsNotifications },
+  { name: '20261202-0005-decisions', module: decisions },
 ];

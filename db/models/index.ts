@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { initAuditEvent } from './audit-event';
 import { initComment } from './comment';
+import { initDecision } from './decision';
 import { initDriverReaction } from './driver-reaction';
 import { initInvitation } from './invitation';
 import { initMembership } from './membership';
@@ -33,6 +34,7 @@ export function initModels(sequelize: Sequelize) {
   const RouteRevision = initRouteRevision(sequelize);
   const RouteTransition = initRouteTransition(sequelize);
   const RouteReviewer = initRouteReviewer(sequelize);
+  const Decision = initDecision(sequelize);
 
   Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
@@ -54,8 +56,9 @@ export function initModels(sequelize: Sequelize) {
   RouteTransition.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
   RouteTransition.hasMany(RouteReviewer, { foreignKey: 'transitionId', as: 'reviewers' });
   RouteReviewer.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+  Decision.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
 
-  return { User, Team, Membership, Invitation, AuditEvent, UserPreference, Route, Step, StepLink, DriverReaction, RouteRevision, RouteTransition, RouteReviewer, Comment, StepFlag, Notification };
+  return { User, Team, Membership, Invitation, AuditEvent, UserPreference, Route, Step, StepLink, DriverReaction, RouteRevision, RouteTransition, RouteReviewer, Comment, StepFlag, Notification, Decision };
 }
 
 export type Models = ReturnType<typeof initModels>;
