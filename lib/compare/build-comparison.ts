@@ -17,6 +17,7 @@ export interface RouteForComparison {
   target: string;
   targetAmount: string;
   status: string;
+  version: number;
   archived: boolean;
   updatedAt: string;
   updatedBy: string;
@@ -32,7 +33,7 @@ function compareOne(route: RouteForComparison, lookup?: SpeciesLookup): Compared
   const { outcome, request, openFlags, unresolvedComments, stepCount, ...meta } = route;
   const facts = { status: meta.status, updatedAt: meta.updatedAt, updatedBy: meta.updatedBy, stepCount, openFlags, unresolvedComments };
   const head = {
-    id: meta.id, name: meta.name, target: meta.target, targetAmount: meta.targetAmount, status: meta.status,
+    id: meta.id, name: meta.name, target: meta.target, targetAmount: meta.targetAmount, status: meta.status, version: meta.version,
     archived: meta.archived, updatedAt: meta.updatedAt, updatedBy: meta.updatedBy,
   };
   if ('error' in outcome) return { ...head, ladder: null, error: outcome.error, metrics: metricsOf(facts, null) };

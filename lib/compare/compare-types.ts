@@ -74,6 +74,8 @@ export interface ComparedRoute {
   target: string;
   targetAmount: string;
   status: string;
+  /** the saved route's version (the workflow's moves ask for it) */
+  version: number;
   archived: boolean;
   updatedAt: string;
   updatedBy: string;

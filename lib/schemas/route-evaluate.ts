@@ -27,6 +27,8 @@ export const RouteEvaluateRequestSchema = z.strictObject({
   links: z.array(RouteLinkSchema).optional(),
   /** default −17 kJ/mol (≈ K = 10^3 at 298 K, common practice) */
   marginalThreshold_kJ: z.number().finite().max(0).optional(),
+  /** ignored by the engine: the board's name, positions and notes in an exported route file (lib/schemas/route-transfer.ts) */
+  stepwell: z.unknown().optional(),
 });
 
 export type RouteStep = z.infer<typeof RouteStepSchema>;

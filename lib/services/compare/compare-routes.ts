@@ -70,6 +70,7 @@ export async function compareRoutes({ teamId, ids, whatIf = {}, transaction }: {
     target: doc.target,
     targetAmount: doc.targetAmount,
     status: doc.status,
+    version: doc.version,
     archived: doc.archived,
     updatedAt: doc.updatedAt,
     updatedBy,
