@@ -185,6 +185,33 @@ const TABLE: Row[] = [
   { route: 'notifications', method: 'GET', expect: signedIn(200) },
   { route: 'notifications/read', method: 'POST', expect: signedIn(200), prepare: async () => ({ body: { all: true } }) },
   { route: 'routes/[routeId]/activity', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: await routeParams(w) }) },
+  // Compare, decisions and route files. A foreign caller's active team is their own, so the main team's ids are 404 there.
+  {
+    route: 'compare', method: 'GET', expect: readersOfResource(200),
+    prepare: async (w) => ({ path: `/api/compare?ids=${(await makeRoute(w.teamId, w.leadId)).id},${(await makeRoute(w.teamId, w.leadId)).id}` }),
+  },
+  { route: 'decisions', method: 'GET', expect: signedIn(200) },
+  {
+    route: 'decisions', method: 'POST', expect: leadOnly(201),
+    prepare: async (w) => {
+      const [a, b] = [await makeRoute(w.teamId, w.leadId), await makeRoute(w.teamId, w.leadId)];
+      return { body: { routeIds: [a.id, b.id], chosenRouteId: a.id, rationale: 'Fewer uphill steps.' } };
+    },
+  },
+  {
+    route: 'decisions/[decisionId]', method: 'GET', expect: readersOfResource(200),
+    prepare: async (w) => {
+      const { recordDecision } = await import('@/lib/services/decisions/record-decision');
+      const [a, b] = [await makeRoute(w.teamId, w.leadId), await makeRoute(w.teamId, w.leadId)];
+      const { decision } = await recordDecision({ teamId: w.teamId, userId: w.leadId, role: 'lead', input: { routeIds: [a.id, b.id], chosenRouteId: b.id, rationale: 'Cheaper feed.', shelveOthers: false } });
+      return { params: { decisionId: String(decision.id) } };
+    },
+  },
+  { route: 'routes/[routeId]/export', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: await routeParams(w) }) },
+  {
+    route: 'routes/import', method: 'POST', expect: editorsOwnTeam(201),
+    prepare: async () => ({ body: { target: 'NH3(g)', steps: [{ id: 'a', equation: 'N2(g) + 3 H2(g) -> 2 NH3(g)', temperature: '700 K' }], stepwell: { format: 'stepwell.route/1', name: 'Imported ammonia' } } }),
+  },
 ];
 
 let dir = '';
