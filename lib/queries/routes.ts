@@ -129,4 +129,4 @@ export const deleteRoute = (routeId: number) => apiFetch<DeletedRouteAnswer>(`/a
 export const undeleteRoute = (routeId: number) => apiFetch<{ id: number; deleted: false; version: number }>(`/api/routes/${routeId}/undelete`, { method: 'POST', body: {} });
 
 /** How long a lead can bring a deleted route back (the server's window; shown in the UI's wording). */
-export const UNDELETE_DAYS = 30;
+export { UNDELETE_WINDOW_DAYS as UNDELETE_DAYS } from '../schemas/route';

@@ -65,3 +65,6 @@ export type ListRoutesQuery = z.infer<typeof ListRoutesQuery>;
 export const RouteDraft = RouteMeta.extend({ steps: SaveRouteInput.shape.steps, links: SaveRouteInput.shape.links });
 export const RouteDraftBody = RouteDraft.optional();
 export type RouteDraft = z.infer<typeof RouteDraft>;
+
+/** How long a lead can bring a deleted route back; shared by the service and the pages. */
+export const UNDELETE_WINDOW_DAYS = 30;

@@ -2,9 +2,10 @@ import 'server-only';
 import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
 import { recordEvent } from '../audit/record-event';
+import { UNDELETE_WINDOW_DAYS } from '../../schemas/route';
 import { findRouteRow } from './get-route';
 
-export const UNDELETE_WINDOW_DAYS = 30;
+export { UNDELETE_WINDOW_DAYS };
 const WINDOW_MS = UNDELETE_WINDOW_DAYS * 86_400_000;
 
 export function restorableUntil(deletedAt: Date): Date {
