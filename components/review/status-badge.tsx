@@ -17,7 +17,7 @@ export function StatusBadge({ status }: { status: string }) {
   const look = isKnownStatus(status) ? LOOK[status] : LOOK.draft;
   const label = isKnownStatus(status) ? ROUTE_STATUS_LABELS[status] : status;
   return (
-    <span className={`inline-flex items-center gap-1 rounded border px-1.5 py-0.5 text-xs font-medium ${look.className}`}>
+    <span data-testid="status-badge" className={`inline-flex items-center gap-1 rounded border px-1.5 py-0.5 text-xs font-medium ${look.className}`}>
       <span aria-hidden="true">{look.glyph}</span>
       {label}
     </span>
