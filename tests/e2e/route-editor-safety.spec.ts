@@ -99,3 +99,24 @@ test('an archived route opens read-only and can be unarchived', async ({ page })
   await expect(page.getByTestId('palette-item').first()).toBeVisible();
   await expect(page.getByLabel('Route name')).toBeEnabled();
 });
+
+test('a designer deletes a route from the list; a lead brings it back from "Recently deleted"', async ({ page, browser }) => {
+  const route = await makeRoute(page.request, `E2E deleted route ${Date.now()}`);
+  await page.goto('/routes');
+  await page.getByRole('button', { name: `Delete ${route.name}` }).click();
+  const dialog = page.getByRole('dialog', { name: `Delete “${route.name}”?` });
+  await expect(dialog).toContainText('A group lead can undo this for 30 days');
+  await dialog.getByRole('button', { name: 'Delete route' }).click();
+  await expect(page.getByRole('link', { name: route.name })).toHaveCount(0);
+  expect((await page.request.get(`/api/routes/${route.id}`)).status()).toBe(404);
+  await expect(page.getByRole('button', { name: 'Recently deleted' })).toHaveCount(0);
+
+  const leadContext = await browser.newContext();
+  const lead = await leadContext.newPage();
+  await signIn(lead, DEMO_USERS.find((u) => u.role === 'lead')!.email, DEMO_PASSWORD);
+  await lead.getByRole('button', { name: 'Recently deleted' }).click();
+  await lead.getByRole('button', { name: `Undo delete of ${route.name}` }).click();
+  await expect(lead.getByRole('button', { name: `Undo delete of ${route.name}` })).toHaveCount(0);
+  expect((await lead.request.get(`/api/routes/${route.id}`)).status()).toBe(200);
+  await leadContext.close();
+});
