@@ -68,6 +68,20 @@ describe('routes: create, save, versions', () => {
     expect((reread.body as RouteDocumentDto).version).toBe(route.version);
   });
 
+  it('saves a blank step (just dropped from the palette) and reports it on that step only', async () => {
+    const route = await newRoute('Blank step');
+    const blank = { id: 'b1', equation: '', yieldPct: 100, notes: '', position: { x: 0, y: 200 } };
+    const res = await callRoute(saveRoute, { method: 'PUT', userId: w.designerId, params: { routeId: String(route.id) }, body: saveBody(route, { steps: [...SAMPLE_STEPS, blank] }) });
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    const { evaluation } = res.body as { evaluation: { steps: { id: string; class: string; error: { message: string } | null }[] } };
+    const b1 = evaluation.steps.find((s) => s.id === 'b1')!;
+    expect(b1.class).toBe('error');
+    expect(b1.error?.message).toBeTruthy();
+    expect(evaluation.steps.filter((s) => s.class !== 'error')).toHaveLength(2);
+    const draft = await callRoute(evaluate, { method: 'POST', userId: w.designerId, params: { routeId: String(route.id) }, body: { ...saveBody(route, { steps: [blank], links: [] }), version: undefined } });
+    expect(draft.status, JSON.stringify(draft.body)).toBe(200);
+  });
+
   it('refuses more than 500 steps and duplicate step ids', async () => {
     const route = await newRoute('Too big');
     const many = Array.from({ length: 501 }, (_, i) => ({ ...SAMPLE_STEPS[0]!, id: `s${i}` }));

@@ -19,8 +19,10 @@ export function toRouteEvaluateRequest(route: RouteLike) {
     target: route.target,
     targetAmount: route.targetAmount,
     marginalThreshold_kJ: route.marginalThreshold_kJ,
-    steps: route.steps.map(({ id, yieldPct, notes: _notes, position: _position, ...fields }) => ({
+    steps: route.steps.map(({ id, yieldPct, notes: _notes, position: _position, equation, ...fields }) => ({
       id,
+      // A blank equation stays: the engine reports it on that step while the rest of the route evaluates.
+      equation,
       ...Object.fromEntries(Object.entries(fields).filter(([, v]) => v !== '' && v !== undefined)),
       yield: yieldPct / 100,
     })),
