@@ -78,7 +78,7 @@ describe('routes: create, save, versions', () => {
     expect(b1.class).toBe('error');
     expect(b1.error?.message).toBeTruthy();
     expect(evaluation.steps.filter((s) => s.class !== 'error')).toHaveLength(2);
-    const draft = await callRoute(evaluate, { method: 'POST', userId: w.designerId, params: { routeId: String(route.id) }, body: { ...saveBody(route, { steps: [blank], links: [] }), version: undefined } });
+    const draft = await callRoute(evaluate, { method: 'POST', userId: w.designerId, params: { routeId: String(route.id) }, body: { ...saveBody(route, { steps: [blank, ...SAMPLE_STEPS] }), version: undefined } });
     expect(draft.status, JSON.stringify(draft.body)).toBe(200);
   });
 
