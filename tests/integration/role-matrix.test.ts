@@ -212,6 +212,7 @@ const TABLE: Row[] = [
     route: 'routes/import', method: 'POST', expect: editorsOwnTeam(201),
     prepare: async () => ({ body: { target: 'NH3(g)', steps: [{ id: 'a', equation: 'N2(g) + 3 H2(g) -> 2 NH3(g)', temperature: '700 K' }], stepwell: { format: 'stepwell.route/1', name: 'Imported ammonia' } } }),
   },
+  { route: 'routes/[routeId]/alternatives', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: await routeParams(w) }) },
 ];
 
 let dir = '';
