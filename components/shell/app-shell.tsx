@@ -26,7 +26,7 @@ export function AppShell({ profile: initial, children }: { profile: ProfileDto; 
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:rounded focus:bg-white focus:px-2 focus:py-1">
         Skip to content
       </a>
-      <header className="border-b border-paper-edge bg-white">
+      <header className="border-b border-paper-edge bg-white print:hidden">
         <div className="mx-auto flex max-w-7xl items-center gap-4 px-4 py-2">
           <Link href="/routes" className="flex items-center gap-2 font-semibold">
             <StepwellMark /> <span>Stepwell</span>

@@ -16,7 +16,7 @@ import { useRouteEditorStore, useRouteEditorStoreApi } from '@/stores/route-edit
 import { BoardCanvas } from './board-canvas';
 import { ConflictDialog } from './conflict-dialog';
 import { RouteWarnings } from './route-warnings';
-import { SafetyCaution } from './safety-caution';
+import { SafetyCaution } from '@/components/safety/safety-caution';
 import { SaveStatus } from './save-status';
 import { SidePanel, type PanelUnits } from './side-panel';
 import { StepPalette } from './step-palette';

@@ -1,6 +1,6 @@
 import { Notice } from '@/components/ui/notice';
 
-// Shown on every route: the screen's limits, in plain words.
+// Shown wherever routes are judged (the editor, the comparison, the report): the screen's limits, in plain words.
 export function SafetyCaution() {
   return (
     <Notice tone="caution" title="A thermodynamic screen only">
