@@ -25,6 +25,35 @@ function UphillCell({ count }: { count: number | null }) {
   );
 }
 
+/** Ticks for choosing routes to compare; the list keeps which are ticked. */
+export interface CompareSelection {
+  isSelected: (routeId: number) => boolean;
+  onToggle: (route: RouteSummaryDto, selected: boolean) => void;
+}
+
+function selectColumn({ isSelected, onToggle }: CompareSelection): ColumnDef<RouteSummaryDto> {
+  return {
+    id: 'select',
+    header: () => <span className="sr-only">Compare</span>,
+    enableSorting: false,
+    cell: ({ row }) => {
+      const route = row.original;
+      // The comparison refuses archived routes, so they cannot be ticked.
+      return (
+        <input
+          type="checkbox"
+          checked={isSelected(route.id)}
+          disabled={route.archived}
+          title={route.archived ? 'Archived routes cannot be compared; unarchive it first.' : undefined}
+          onChange={(e) => onToggle(route, e.target.checked)}
+          aria-label={`Select ${route.name} to compare`}
+          className="mt-0.5 accent-pine-600"
+        />
+      );
+    },
+  };
+}
+
 export function routeColumns({
   energyUnit,
   canEdit,
@@ -33,6 +62,7 @@ export function routeColumns({
   onDuplicate,
   onArchive,
   onDelete,
+  selection,
 }: {
   energyUnit: EnergyUnit;
   canEdit: boolean;
@@ -42,8 +72,10 @@ export function routeColumns({
   onDuplicate: (route: RouteSummaryDto) => void;
   onArchive: (route: RouteSummaryDto, archived: boolean) => void;
   onDelete?: (route: RouteSummaryDto) => void;
+  selection?: CompareSelection;
 }): ColumnDef<RouteSummaryDto>[] {
   const columns: ColumnDef<RouteSummaryDto>[] = [
+    ...(selection ? [selectColumn(selection)] : []),
     {
       id: 'name',
       header: 'Name',

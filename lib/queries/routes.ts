@@ -2,6 +2,7 @@ import { keepPreviousData, queryOptions } from '@tanstack/react-query';
 import type { ListRoutesQuery, RouteDraft, SaveRouteInput } from '../schemas/route';
 import type { LibraryReaction } from '../services/routes/search-library-reactions';
 import type { DeletedRouteDto } from '../services/routes/list-deleted-routes';
+import type { RouteAlternativesDto } from '../services/routes/list-alternatives';
 import type { RouteDocumentDto, RouteSummaryDto } from '../services/routes/route-dto';
 import type { BalanceCheck } from '../services/thermo/check-equation-balance';
 import type { RouteEvaluateResponse } from '../thermo/route';
@@ -130,3 +131,18 @@ export const undeleteRoute = (routeId: number) => apiFetch<{ id: number; deleted
 
 /** How long a lead can bring a deleted route back (the server's window; shown in the UI's wording). */
 export { UNDELETE_WINDOW_DAYS as UNDELETE_DAYS } from '../schemas/route';
+
+// Under routeKeys.lists(), so duplicating, archiving or deleting a route refreshes the menu too.
+export const routeAlternativesKeys = {
+  of: (routeId: number) => [...routeKeys.lists(), 'alternatives', routeId] as const,
+};
+
+/** The route a route was duplicated from and the routes duplicated from it (deleted ones left out). */
+export const routeAlternativesQuery = (routeId: number) =>
+  queryOptions({ queryKey: routeAlternativesKeys.of(routeId), queryFn: () => apiFetch<RouteAlternativesDto>(`/api/routes/${routeId}/alternatives`) });
+
+/** Posts a parsed route file; the server checks it field by field and creates nothing when one is wrong. */
+export const importRouteFile = (file: unknown) => apiFetch<RouteDocumentDto>('/api/routes/import', { method: 'POST', body: file });
+
+/** The compare page for these routes, in the order given (the page's first column is the first id). */
+export const comparePageHref = (ids: readonly number[]) => `/routes/compare?ids=${ids.join(',')}`;

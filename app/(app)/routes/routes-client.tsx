@@ -2,7 +2,9 @@
 
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { SortingState } from '@tanstack/react-table';
+import { useRouter } from 'next/navigation';
 import { useMemo, useState } from 'react';
+import { CompareSelectionBar, type SelectedRoute } from '@/components/tables/compare-selection-bar';
 import { DataTable } from '@/components/tables/data-table';
 import { ROUTE_NUMERIC_COLUMNS, routeColumns } from '@/components/tables/route-columns';
 import { TablePagination } from '@/components/tables/table-pagination';
@@ -14,11 +16,12 @@ import { can } from '@/lib/auth/permissions';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { ApiError } from '@/lib/queries/api-fetch';
 import { activeMembership, useProfile } from '@/lib/queries/me';
-import { deleteRoute, duplicateRoute, routeKeys, routeListQuery, setRouteArchived, UNDELETE_DAYS } from '@/lib/queries/routes';
+import { comparePageHref, deleteRoute, duplicateRoute, routeKeys, routeListQuery, setRouteArchived, UNDELETE_DAYS } from '@/lib/queries/routes';
 import { ROUTE_SORTS, type ListRoutesQuery } from '@/lib/schemas/route';
 import type { RouteSummaryDto } from '@/lib/services/routes/route-dto';
 import { DeleteRouteDialog } from './delete-route-dialog';
 import { DeletedRoutes } from './deleted-routes';
+import { ImportRouteDialog } from './import-route-dialog';
 import { NewRouteDialog } from './new-route-dialog';
 
 type Sort = ListRoutesQuery['sort'];
@@ -26,6 +29,7 @@ const isSort = (id: string): id is Sort => (ROUTE_SORTS as readonly string[]).in
 
 export function RoutesClient() {
   const queryClient = useQueryClient();
+  const router = useRouter();
   const { data: profile } = useProfile();
   const role = activeMembership(profile)?.role;
   const canEdit = can(role, 'route.edit');
@@ -41,6 +45,8 @@ export function RoutesClient() {
   const [pageSize, setPageSize] = useState(25);
   const [showArchived, setShowArchived] = useState(false);
   const [isCreating, setIsCreating] = useState(false);
+  const [isImporting, setIsImporting] = useState(false);
+  const [selected, setSelected] = useState<SelectedRoute[]>([]);
   const [showDeleted, setShowDeleted] = useState(false);
   const [toDelete, setToDelete] = useState<RouteSummaryDto | null>(null);
   const [message, setMessage] = useState<{ tone: 'success' | 'error'; text: string } | null>(null);
@@ -56,6 +62,7 @@ export function RoutesClient() {
   };
   const routes = useQuery(routeListQuery(query));
 
+  const untick = (id: number) => setSelected((current) => current.filter((r) => r.id !== id));
   const refreshLists = () => queryClient.invalidateQueries({ queryKey: routeKeys.lists() });
   const onError = (error: unknown) => setMessage({ tone: 'error', text: error instanceof ApiError ? error.message : 'That did not work. Try again.' });
   const duplicate = useMutation({
@@ -69,6 +76,7 @@ export function RoutesClient() {
   const archive = useMutation({
     mutationFn: ({ route, archived }: { route: RouteSummaryDto; archived: boolean }) => setRouteArchived(route.id, archived),
     onSuccess: (_data, { route, archived }) => {
+      if (archived) untick(route.id); // an archived route cannot be compared
       setMessage({ tone: 'success', text: `${archived ? 'Archived' : 'Restored'} “${route.name}”.` });
       return refreshLists();
     },
@@ -78,6 +86,7 @@ export function RoutesClient() {
     mutationFn: (route: RouteSummaryDto) => deleteRoute(route.id),
     onSuccess: (_data, route) => {
       setToDelete(null);
+      untick(route.id);
       setMessage({ tone: 'success', text: `Deleted “${route.name}”. ${isLead ? 'You can undo this under “Recently deleted”' : 'A group lead can undo this'} for ${UNDELETE_DAYS} days.` });
       return refreshLists();
     },
@@ -104,10 +113,15 @@ export function RoutesClient() {
           remove.reset();
           setToDelete(route);
         },
+        selection: {
+          isSelected: (id) => selected.some((r) => r.id === id),
+          onToggle: (route, isOn) =>
+            setSelected((current) => (isOn ? [...current.filter((r) => r.id !== route.id), { id: route.id, name: route.name }] : current.filter((r) => r.id !== route.id))),
+        },
       }),
     // The mutation objects change every render; their mutate and reset functions are stable.
     // eslint-disable-next-line react-hooks/exhaustive-deps
-    [energyUnit, canEdit, canDelete, busyRouteId, duplicate.mutate, archive.mutate, remove.reset],
+    [energyUnit, canEdit, canDelete, busyRouteId, duplicate.mutate, archive.mutate, remove.reset, selected],
   );
 
   const items = routes.data?.items ?? [];
@@ -143,6 +157,12 @@ export function RoutesClient() {
         </EmptyState>
       ) : (
         <>
+          <CompareSelectionBar
+            selected={selected}
+            onCompare={() => router.push(comparePageHref(selected.map((r) => r.id)))}
+            onUntick={untick}
+            onClear={() => setSelected([])}
+          />
           <DataTable
             caption="Routes of your team"
             data={items}
@@ -215,11 +235,19 @@ export function RoutesClient() {
           </Button>
         ) : null}
         <div className="flex-1" />
-        {canEdit && !showDeleted ? <Button onClick={() => setIsCreating(true)}>New route</Button> : null}
+        {canEdit && !showDeleted ? (
+          <>
+            <Button variant="secondary" onClick={() => setIsImporting(true)}>
+              Import route JSON
+            </Button>
+            <Button onClick={() => setIsCreating(true)}>New route</Button>
+          </>
+        ) : null}
       </div>
 
       {showDeleted ? <DeletedRoutes /> : listView}
       {canEdit ? <NewRouteDialog open={isCreating} onClose={() => setIsCreating(false)} /> : null}
+      {canEdit ? <ImportRouteDialog open={isImporting} onClose={() => setIsImporting(false)} /> : null}
       {canDelete ? (
         <DeleteRouteDialog
           route={toDelete}
