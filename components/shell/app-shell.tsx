@@ -12,6 +12,7 @@ import { UserMenu } from './user-menu';
 
 const NAV = [
   { href: '/routes', label: 'Routes' },
+  { href: '/decisions', label: 'Decisions' },
   { href: '/species', label: 'Species' },
   { href: '/fits', label: 'Data fits' },
   { href: '/team', label: 'Team' },

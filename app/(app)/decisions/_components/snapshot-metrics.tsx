@@ -1,0 +1,99 @@
+'use client';
+
+import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
+import { useMemo } from 'react';
+import { metricText, type MetricUnits } from '@/components/compare/metric-format';
+import { formatTemperatureChange, type TemperatureUnit } from '@/components/ladder/energy-format';
+import type { ComparisonSnapshot } from '@/lib/compare/compare-types';
+import { METRIC_ROWS, type MetricRow } from '@/lib/compare/metric-rows';
+import type { WhatIf } from '@/lib/schemas/compare';
+
+/** The conditions the comparison was run at, in words. */
+export function whatIfText(whatIf: WhatIf, unit: TemperatureUnit): string {
+  const parts: string[] = [];
+  if (whatIf.temperatureOffset_K) parts.push(`every step ${formatTemperatureChange(whatIf.temperatureOffset_K, unit)} from its saved temperature`);
+  if (whatIf.standardPressure) parts.push(`standard pressure ${whatIf.standardPressure}`);
+  return parts.length ? `What-if: ${parts.join('; ')}.` : 'At the routes’ saved conditions (no what-if).';
+}
+
+const helper = createColumnHelper<MetricRow>();
+
+// The metrics as they stood when the decision was made: one column per route, best values marked in words too.
+export function SnapshotMetrics({ snapshot, units, chosenRouteId }: { snapshot: ComparisonSnapshot; units: MetricUnits; chosenRouteId: number | null }) {
+  const columns = useMemo(
+    () => [
+      helper.display({
+        id: 'metric',
+        header: () => 'Metric',
+        cell: ({ row }) => (
+          <span>
+            <span className="font-medium">{row.original.label}</span>
+            {row.original.basis ? <span className="block text-xs text-ink-faint">{row.original.basis}</span> : null}
+          </span>
+        ),
+      }),
+      ...snapshot.routes.map((route) =>
+        helper.display({
+          id: `route-${route.id}`,
+          header: () => (
+            <span>
+              {route.name}
+              {route.id === chosenRouteId ? <span className="ml-1 rounded bg-pine-50 px-1 text-[11px] font-medium normal-case text-pine-700">chosen</span> : null}
+            </span>
+          ),
+          cell: ({ row }) => {
+            const { key, best } = row.original;
+            const isBest = best !== 'none' && (snapshot.best[key] ?? []).includes(route.id);
+            return (
+              <span className={isBest ? 'font-semibold text-downhill' : ''}>
+                {metricText(key, route.metrics, units)}
+                {isBest ? <span className="ml-1 rounded bg-downhill-bg px-1 text-[11px]">best</span> : null}
+              </span>
+            );
+          },
+        }),
+      ),
+    ],
+    [snapshot, units, chosenRouteId],
+  );
+  const table = useReactTable({ data: METRIC_ROWS as MetricRow[], columns, getCoreRowModel: getCoreRowModel(), getRowId: (r) => r.key });
+
+  return (
+    <div className="overflow-x-auto rounded-lg border border-paper-edge bg-white">
+      <table className="w-full border-collapse text-left text-sm">
+        <caption className="sr-only">Metrics of the compared routes when the decision was made</caption>
+        <thead className="bg-paper-deep text-xs uppercase tracking-wide text-ink-faint">
+          {table.getHeaderGroups().map((group) => (
+            <tr key={group.id}>
+              {group.headers.map((header) => (
+                <th key={header.id} scope="col" className="px-3 py-2 align-bottom font-semibold">
+                  {flexRender(header.column.columnDef.header, header.getContext())}
+                </th>
+              ))}
+            </tr>
+          ))}
+        </thead>
+        <tbody>
+          {table.getRowModel().rows.map((row) => (
+            <tr key={row.id} className="border-t border-paper-edge align-top">
+              {row.getVisibleCells().map((cell, i) =>
+                i === 0 ? (
+                  <th key={cell.id} scope="row" className="w-64 px-3 py-2 text-left font-normal">
+                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                  </th>
+                ) : (
+                  <td key={cell.id} className="px-3 py-2 tabular-nums">
+                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                  </td>
+                ),
+              )}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <p className="border-t border-paper-edge px-3 py-2 text-xs text-ink-faint">
+        “best” marks the best value of a row as the comparison ranked it; rows without a ranking (temperature span, last edit, edited by) mark none.
+      </p>
+    </div>
+  );
+}
