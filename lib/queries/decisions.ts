@@ -15,6 +15,8 @@ export const decisionListQuery = (paging: { page: number; pageSize: number }) =>
     queryKey: decisionKeys.list(paging),
     queryFn: () => apiFetch<DecisionListDto>(`/api/decisions?page=${paging.page}&pageSize=${paging.pageSize}`),
     placeholderData: (previous) => previous,
+    // A decision just recorded on the compare page must show on arrival here.
+    staleTime: 0,
   });
 
 /** One decision with the snapshot it was made on; a missing or foreign id is a 404, not worth a retry. */
@@ -22,5 +24,6 @@ export const decisionDetailQuery = (decisionId: number) =>
   queryOptions({
     queryKey: decisionKeys.detail(decisionId),
     queryFn: () => apiFetch<DecisionDetailDto>(`/api/decisions/${decisionId}`),
+    staleTime: 0, // its "superseded by" can change
     retry: (count, error) => !(error instanceof ApiError && error.status === 404) && count < 1,
   });
