@@ -45,7 +45,7 @@ export function MetricsTable({ comparison, units, visible, caption }: { comparis
               </span>
               <button
                 type="button"
-                className="shrink-0 rounded border border-paper-edge px-1 text-xs text-ink-soft hover:bg-paper-deep"
+                className="shrink-0 rounded border border-paper-edge px-1 text-xs text-ink-soft hover:bg-paper-deep print:hidden"
                 aria-label={`Order routes by ${r.label}${active ? (sort.dir === 'asc' ? ', now ascending' : ', now descending') : ''}`}
                 onClick={() => setSort(next)}
               >

@@ -12,12 +12,19 @@ import { Notice } from '@/components/ui/notice';
 import { can } from '@/lib/auth/permissions';
 import { METRIC_ROWS } from '@/lib/compare/metric-rows';
 import type { MetricKey } from '@/lib/compare/compare-types';
+import { ApiError } from '@/lib/queries/api-fetch';
 import { compareQuery } from '@/lib/queries/compare';
 import { activeMembership, useProfile } from '@/lib/queries/me';
 import type { WhatIf } from '@/lib/schemas/compare';
 import { CompareView } from './compare-view';
 import { RecordDecision } from './decision-form';
 import { WhatIfForm } from './what-if-form';
+
+// The server's field messages say what is wrong with the ids or the what-if; its headline only that something is.
+function errorText(error: Error): string {
+  const fields = error instanceof ApiError ? Object.values(error.fields ?? {}) : [];
+  return fields.length ? fields.join(' ') : error.message;
+}
 
 function reportHref(ids: readonly number[], whatIf: WhatIf, basis: LadderBasis): string {
   const params = new URLSearchParams({ ids: ids.join(','), basis });
@@ -39,7 +46,7 @@ export function CompareClient({ ids }: { ids: number[] }) {
   if (query.isError && !query.data) {
     return (
       <Notice tone="error" title="These routes cannot be compared">
-        {query.error.message} <Link href="/routes" className="underline">Back to the routes list</Link> to pick 2 to 4 routes of your team.
+        {errorText(query.error)} <Link href="/routes" className="underline">Back to the routes list</Link> to pick 2 to 4 routes of your team.
       </Notice>
     );
   }
@@ -57,7 +64,7 @@ export function CompareClient({ ids }: { ids: number[] }) {
       <SafetyCaution />
       <section aria-label="Comparison settings" className="flex flex-col gap-3 rounded-lg border border-paper-edge bg-white p-3">
         <WhatIfForm value={whatIf} busy={query.isFetching} onApply={setWhatIf} />
-        {query.isError ? <Notice tone="error">{query.error.message}</Notice> : null}
+        {query.isError ? <Notice tone="error">{errorText(query.error)}</Notice> : null}
         {Object.keys(comparison.whatIf).length ? (
           <p className="text-sm text-marginal" role="status">
             What-if in force: {comparison.whatIf.temperatureOffset_K ? `every temperature ${comparison.whatIf.temperatureOffset_K > 0 ? '+' : ''}${comparison.whatIf.temperatureOffset_K} K` : ''}
