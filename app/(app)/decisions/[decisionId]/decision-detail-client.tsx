@@ -12,6 +12,7 @@ import { decisionDetailQuery } from '@/lib/queries/decisions';
 import { useProfile } from '@/lib/queries/me';
 import type { DecisionDetailDto } from '@/lib/services/decisions/decision-dto';
 import { SnapshotMetrics, whatIfText } from '../_components/snapshot-metrics';
+import { SafetyCaution } from '@/components/safety/safety-caution';
 
 const BACK = (
   <Link href="/decisions" className="text-sm text-pine-700 underline-offset-2 hover:underline">
@@ -115,10 +116,7 @@ export function DecisionDetail({ decision }: { decision: DecisionDetailDto }) {
         <SnapshotMetrics snapshot={decision.snapshot} units={units} chosenRouteId={decision.chosen?.id ?? null} />
       </section>
 
-      <Notice tone="caution" title="A thermodynamic screen only">
-        These numbers say whether each step can run downhill in free energy. They say nothing of rates, heat release and runaway, or toxicity: those need their own
-        review before any work at the bench.
-      </Notice>
+      <SafetyCaution />
     </div>
   );
 }

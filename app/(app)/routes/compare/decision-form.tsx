@@ -12,6 +12,7 @@ import { TextAreaField } from '@/components/ui/text-area-field';
 import type { ComparedRoute } from '@/lib/compare/compare-types';
 import { applyServerErrors } from '@/lib/forms/apply-server-errors';
 import { recordDecision } from '@/lib/queries/compare';
+import { decisionKeys } from '@/lib/queries/decisions';
 import type { WhatIf } from '@/lib/schemas/compare';
 import { MAX_RATIONALE } from '@/lib/schemas/decision';
 
@@ -43,7 +44,7 @@ export function RecordDecision({ routes, whatIf }: { routes: ComparedRoute[]; wh
         ...(Object.keys(whatIf).length ? { whatIf } : {}),
       });
       setSaved({ id: answer.decision.id, caution: answer.caution });
-      await queryClient.invalidateQueries({ queryKey: ['compare'] });
+      await Promise.all([queryClient.invalidateQueries({ queryKey: ['compare'] }), queryClient.invalidateQueries({ queryKey: decisionKeys.all })]);
     } catch (error) {
       setBanner(applyServerErrors(error, setError, ['chosenRouteId', 'rationale']));
     }

@@ -26,6 +26,7 @@ import { useRouteEvaluation } from './use-route-evaluation';
 import { ReviewSection } from './review-section';
 import { useReviewData } from './use-review-data';
 import { WorkflowBar } from './workflow-bar';
+import { AlternativesMenu } from './alternatives-menu';
 import type { Role } from '@/lib/auth/roles';
 
 const FIT_OPTIONS = { padding: 0.2, maxZoom: 1.25, duration: 200 };
@@ -119,7 +120,8 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
             {canEdit ? null : <span className="ml-2 rounded bg-paper-deep px-1.5 py-0.5 text-xs">read-only</span>}
           </p>
           {review.archived ? null : (
-            <div className="mt-1.5">
+            <div className="mt-1.5 flex flex-wrap items-center gap-2">
+              <AlternativesMenu routeId={routeId} />
               <WorkflowBar routeId={routeId} teamId={review.teamId} status={review.status} role={review.role} selfId={review.selfId} />
             </div>
           )}
