@@ -52,6 +52,7 @@ async function main() {
   await section('route (in-process)', results, () => optional('route.bench.ts', 'runRouteBench'));
   await withServer(async () => {
     await section('route endpoint (HTTP)', results, () => runRouteEndpointBench(E2E_BASE_URL));
+    await section('compare endpoint (HTTP)', results, () => optional('compare.bench.ts', 'runCompareBench', E2E_BASE_URL));
     await section('editor drag (Chromium)', results, () => optional('editor-drag.bench.ts', 'runEditorDragBench', E2E_BASE_URL));
   });
   const out = { machine: `${process.platform} ${process.arch}, node ${process.version}`, ranAt: new Date().toISOString(), results };
