@@ -68,6 +68,9 @@ test('a lead compares two routes on one scale, tries a what-if, exports CSV and 
   await expect(page.getByRole('heading', { name: 'Route comparison' })).toBeVisible();
   await expect(page.getByRole('region', { name: 'Decision' })).toContainText('No uphill step and no coupling needed');
   await expect(page.getByText('A thermodynamic screen only', { exact: true })).toBeVisible();
+
+  await page.goto('/decisions');
+  await expect(page.getByRole('table')).toContainText('No uphill step and no coupling needed');
 });
 
 test('bad comparisons get a clear message, and a reviewer sees no decision form', async ({ page }) => {
@@ -82,4 +85,58 @@ test('bad comparisons get a clear message, and a reviewer sees no decision form'
   await page.goto(`/routes/compare?ids=${list.items.map((r) => r.id).join(',')}`);
   await expect(page.getByRole('table')).toBeVisible();
   await expect(page.getByRole('form', { name: 'Record the decision' })).toHaveCount(0);
+});
+
+test('alternatives lead to a comparison; a route travels as JSON and comes back through the importer', async ({ page }) => {
+  await signIn(page, email('lead'), DEMO_PASSWORD);
+  const stamp = Date.now();
+  const original = await makeRoute(page.request, `E2E original ${stamp}`, { equation: 'CH4(g) + H2O(g) -> CO(g) + 3 H2(g)', temperature: '1000 K' });
+  const copy = (await (await page.request.post(`/api/routes/${original}/duplicate`, { data: {} })).json()) as { id: number };
+
+  await page.goto(`/routes/${original}`);
+  await page.getByRole('button', { name: /^Alternatives \(1\)/ }).click();
+  await page.getByRole('link', { name: 'Compare these' }).click();
+  await expect(page).toHaveURL(new RegExp(`/routes/compare\\?ids=${original}(%2C|,)${copy.id}$`));
+  await expect(page.getByRole('table')).toBeVisible();
+
+  // Export, then import the same file as a new route.
+  const exported = await page.request.get(`/api/routes/${original}/export`);
+  expect(exported.status()).toBe(200);
+  const file = test.info().outputPath('route.json');
+  fs.writeFileSync(file, await exported.text());
+  await page.goto('/routes');
+  await page.getByRole('button', { name: 'Import route JSON' }).click();
+  await page.getByLabel('Route file').setInputFiles(file);
+  await page.getByRole('button', { name: 'Import route', exact: true }).click();
+  await expect(page).toHaveURL(/\/routes\/\d+$/);
+  expect(page.url()).not.toMatch(new RegExp(`/routes/${original}$`));
+  await expect(page.getByRole('heading', { level: 1 })).toContainText(`E2E original ${stamp}`);
+  await expect(page.locator('.react-flow__node')).toHaveCount(2);
+
+  // A malformed file is refused before anything is sent.
+  const bad = test.info().outputPath('bad.json');
+  fs.writeFileSync(bad, '{ "target": ');
+  await page.goto('/routes');
+  await page.getByRole('button', { name: 'Import route JSON' }).click();
+  await page.getByLabel('Route file').setInputFiles(bad);
+  await expect(page.getByText(/Nothing was sent/)).toBeVisible();
+});
+
+test('a reviewer reads the decision log with the rationale, and cannot record one', async ({ page, browser }) => {
+  await signIn(page, email('lead'), DEMO_PASSWORD);
+  const stamp = Date.now();
+  const a = await makeRoute(page.request, `E2E log a ${stamp}`, { equation: 'CH4(g) + H2O(g) -> CO(g) + 3 H2(g)', temperature: '1000 K' });
+  const b = await makeRoute(page.request, `E2E log b ${stamp}`, { equation: 'CH4(g) + 1/2 O2(g) -> CO(g) + 2 H2(g)', temperature: '1000 K' });
+  const rationale = `Log check ${stamp}: route b needs no driver.`;
+  expect((await page.request.post('/api/decisions', { data: { routeIds: [a, b], chosenRouteId: b, rationale } })).status()).toBe(201);
+
+  const context = await browser.newContext();
+  const reviewer = await context.newPage();
+  await signIn(reviewer, email('reviewer'), DEMO_PASSWORD);
+  expect((await reviewer.request.post('/api/decisions', { data: { routeIds: [a, b], chosenRouteId: a, rationale: 'not mine to make' } })).status()).toBe(403);
+  await reviewer.goto('/decisions');
+  const row = reviewer.getByRole('row').filter({ hasText: rationale });
+  await expect(row).toContainText(`E2E log b ${stamp}`);
+  await expect(reviewer.getByText(/never edited/i)).toBeVisible();
+  await context.close();
 });
