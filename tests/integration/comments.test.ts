@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { DELETE as deleteComment, PATCH as editComment } from '@/app/api/routes/[routeId]/comments/[commentId]/route';
 import { POST as resolveThread } from '@/app/api/routes/[routeId]/comments/[commentId]/resolve/route';
 import { GET as listComments, POST as postComment } from '@/app/api/routes/[routeId]/comments/route';
@@ -6,22 +6,10 @@ import type { CommentDto, CommentListDto, ThreadDto } from '@/lib/schemas/commen
 import { getRoute } from '@/lib/services/routes/get-route';
 import { saveRoute } from '@/lib/services/routes/save-route';
 import { callRoute, errorOf } from './support/http';
-import { makeOwnedRoute, makeReviewTeam, startMailbox, type ReviewTeam } from './support/review-team';
-import { setupTestDb, teardownTestDb } from './support/test-db';
+import { makeOwnedRoute, type ReviewTeam, withReviewWorld } from './support/review-team';
 
-let dir = '';
-let smtp: { close: () => Promise<void> };
 let team: ReviewTeam;
-
-beforeAll(async () => {
-  ({ dir } = await setupTestDb());
-  smtp = await startMailbox();
-  team = await makeReviewTeam();
-});
-afterAll(async () => {
-  await smtp.close();
-  await teardownTestDb(dir);
-});
+withReviewWorld((t) => (team = t));
 
 const post = (routeId: number, userId: number, body: unknown) => callRoute(postComment, { method: 'POST', userId, params: { routeId: String(routeId) }, body });
 const list = async (routeId: number, userId = team.reviewerId, path?: string) => {

@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { getDb } from '@/db';
 import { GET as compare } from '@/app/api/compare/route';
 import { GET as getOne } from '@/app/api/decisions/[decisionId]/route';
@@ -7,23 +7,12 @@ import type { Comparison } from '@/lib/compare/compare-types';
 import type { DecisionDetailDto, DecisionListDto } from '@/lib/services/decisions/decision-dto';
 import { makeRoute } from './support/fixtures';
 import { callRoute, errorOf } from './support/http';
-import { makeReviewTeam, startMailbox, type ReviewTeam } from './support/review-team';
-import { setupTestDb, teardownTestDb } from './support/test-db';
+import { type ReviewTeam, withReviewWorld } from './support/review-team';
 
 const { GET: list, POST: record } = decisionsModule;
 
-let dir = '';
 let team: ReviewTeam;
-let smtp: Awaited<ReturnType<typeof startMailbox>>;
-beforeAll(async () => {
-  ({ dir } = await setupTestDb());
-  smtp = await startMailbox();
-  team = await makeReviewTeam();
-});
-afterAll(async () => {
-  await smtp.close();
-  await teardownTestDb(dir);
-});
+withReviewWorld((t) => (team = t));
 
 const route = () => makeRoute(team.teamId, team.designerId);
 const post = (userId: number | null, body: unknown) => callRoute(record, { method: 'POST', userId, body });

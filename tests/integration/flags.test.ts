@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { getDb } from '@/db';
 import { GET as listComments } from '@/app/api/routes/[routeId]/comments/route';
 import { POST as clearFlag } from '@/app/api/routes/[routeId]/flags/[flagId]/clear/route';
@@ -7,22 +7,10 @@ import type { CommentListDto } from '@/lib/schemas/comment';
 import type { FlagDto, FlagListDto } from '@/lib/schemas/flag';
 import { makeRoute } from './support/fixtures';
 import { callRoute, errorOf } from './support/http';
-import { makeOwnedRoute, makeReviewTeam, startMailbox, type ReviewTeam } from './support/review-team';
-import { setupTestDb, teardownTestDb } from './support/test-db';
+import { makeOwnedRoute, type ReviewTeam, withReviewWorld } from './support/review-team';
 
-let dir = '';
-let smtp: { close: () => Promise<void> };
 let team: ReviewTeam;
-
-beforeAll(async () => {
-  ({ dir } = await setupTestDb());
-  smtp = await startMailbox();
-  team = await makeReviewTeam();
-});
-afterAll(async () => {
-  await smtp.close();
-  await teardownTestDb(dir);
-});
+withReviewWorld((t) => (team = t));
 
 const flag = (routeId: number, userId: number, body: unknown) => callRoute(postFlag, { method: 'POST', userId, params: { routeId: String(routeId) }, body });
 const clear = (routeId: number, flagId: number, userId: number, body: unknown) =>

@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { getDb } from '@/db';
 import { GET as me } from '@/app/api/me/route';
 import { PATCH as patchPreferences } from '@/app/api/me/preferences/route';
@@ -8,22 +8,10 @@ import { POST as postComment } from '@/app/api/routes/[routeId]/comments/route';
 import type { NotificationPageDto } from '@/lib/schemas/notification';
 import { APPROVAL_CAUTION, notifyReviewRequest, notifyStatusChange } from '@/lib/services/notifications/notify-workflow';
 import { callRoute, errorOf } from './support/http';
-import { mailTo, makeOwnedRoute, makeReviewTeam, startMailbox, type ReviewTeam } from './support/review-team';
-import { setupTestDb, teardownTestDb } from './support/test-db';
+import { mailTo, makeOwnedRoute, type ReviewTeam, withReviewWorld } from './support/review-team';
 
-let dir = '';
-let smtp: { close: () => Promise<void> };
 let team: ReviewTeam;
-
-beforeAll(async () => {
-  ({ dir } = await setupTestDb());
-  smtp = await startMailbox();
-  team = await makeReviewTeam();
-});
-afterAll(async () => {
-  await smtp.close();
-  await teardownTestDb(dir);
-});
+withReviewWorld((t) => (team = t));
 
 const handle = (email: string) => email.split('@')[0]!;
 const comment = (routeId: number, userId: number, body: Record<string, unknown>) => callRoute(postComment, { method: 'POST', userId, params: { routeId: String(routeId) }, body });

@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { PATCH as patchPreferences } from '@/app/api/me/preferences/route';
 import { GET as listNotifications } from '@/app/api/notifications/route';
 import { PUT as saveRoute } from '@/app/api/routes/[routeId]/route';
@@ -9,22 +9,10 @@ import type { RouteDocumentDto } from '@/lib/services/routes/route-dto';
 import type { TransitionOutcome } from '@/lib/services/workflow/transition-dto';
 import { SAMPLE_LINKS, SAMPLE_STEPS } from './support/fixtures';
 import { callRoute } from './support/http';
-import { mailTo, makeOwnedRoute, makeReviewTeam, startMailbox, type ReviewTeam } from './support/review-team';
-import { setupTestDb, teardownTestDb } from './support/test-db';
+import { mailTo, makeOwnedRoute, type ReviewTeam, withReviewWorld } from './support/review-team';
 
-let dir = '';
-let smtp: { close: () => Promise<void> };
 let team: ReviewTeam;
-
-beforeAll(async () => {
-  ({ dir } = await setupTestDb());
-  smtp = await startMailbox();
-  team = await makeReviewTeam();
-});
-afterAll(async () => {
-  await smtp.close();
-  await teardownTestDb(dir);
-});
+withReviewWorld((t) => (team = t));
 
 const move = (route: { id: number }, userId: number, body: Record<string, unknown>) =>
   callRoute(transition, { method: 'POST', userId, params: { routeId: String(route.id) }, body });

@@ -1,3 +1,5 @@
+import { afterAll, beforeAll } from 'vitest';
+import { setupTestDb, teardownTestDb } from './test-db';
 import { getDb } from '@/db';
 import type { Role } from '@/lib/auth/roles';
 import { startFakeSmtpServer } from '@/lib/mail/fake-smtp-server';
@@ -54,4 +56,22 @@ export async function startMailbox() {
 /** Mails the fake SMTP server received for one address, newest first. */
 export function mailTo(address: string): StoredMail[] {
   return readMailbox(process.env.MAIL_DIR!).filter((m) => m.to.includes(address));
+}
+
+/**
+ * The shared set-up of the review tests: a temporary database with real migrations, the fake SMTP
+ * server and the invented team, made before the file's tests and removed after them.
+ */
+export function withReviewWorld(onReady: (team: ReviewTeam) => void): void {
+  let dir = '';
+  let smtp: Awaited<ReturnType<typeof startMailbox>> | undefined;
+  beforeAll(async () => {
+    ({ dir } = await setupTestDb());
+    smtp = await startMailbox();
+    onReady(await makeReviewTeam());
+  });
+  afterAll(async () => {
+    await smtp?.close();
+    await teardownTestDb(dir);
+  });
 }
