@@ -4,6 +4,9 @@ import * as routesStepsLinks from './20261201-0002-routes-steps-links';
 import * as revisionsWorkflow from './20261202-0003-revisions-workflow';
 import * as commentsFlagsNotifications from './20261202-0004-comments-flags-notifications';
 import * as decisions from './20261202-0005-decisions';
+import * as fits from './20261202-0007-fits';
+import * as teamSpecies from './20261202-0006-team-species';
+import * as passwordResetSessions from './20261203-0008-password-reset-sessions';
 
 export interface MigrationModule {
   up(params: { context: QueryInterface }): Promise<void>;
@@ -17,4 +20,7 @@ export const MIGRATIONS: ReadonlyArray<{ name: string; module: MigrationModule }
   { name: '20261202-0003-revisions-workflow', module: revisionsWorkflow },
   { name: '20261202-0004-comments-flags-notifications', module: commentsFlagsNotifications },
   { name: '20261202-0005-decisions', module: decisions },
+  { name: '20261202-0006-team-species', module: teamSpecies },
+  { name: '20261203-0008-password-reset-sessions', module: passwordResetSessions },
+  { name: '20261202-0007-fits', module: fits },
 ];

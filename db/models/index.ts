@@ -3,9 +3,12 @@ import { initAuditEvent } from './audit-event';
 import { initComment } from './comment';
 import { initDecision } from './decision';
 import { initDriverReaction } from './driver-reaction';
+import { initFit } from './fit';
+import { initFitDataSet } from './fit-data-set';
 import { initInvitation } from './invitation';
 import { initMembership } from './membership';
 import { initNotification } from './notification';
+import { initPasswordResetToken } from './password-reset-token';
 import { initRoute } from './route';
 import { initRouteReviewer } from './route-reviewer';
 import { initRouteRevision } from './route-revision';
@@ -13,6 +16,8 @@ import { initRouteTransition } from './route-transition';
 import { initStep } from './step';
 import { initStepFlag } from './step-flag';
 import { initStepLink } from './step-link';
+import { initSpeciesImport } from './species-import';
+import { initTeamSpecies } from './team-species';
 import { initTeam } from './team';
 import { initUser } from './user';
 import { initUserPreference } from './user-preference';
@@ -35,6 +40,11 @@ export function initModels(sequelize: Sequelize) {
   const RouteTransition = initRouteTransition(sequelize);
   const RouteReviewer = initRouteReviewer(sequelize);
   const Decision = initDecision(sequelize);
+  const FitDataSet = initFitDataSet(sequelize);
+  const Fit = initFit(sequelize);
+  const PasswordResetToken = initPasswordResetToken(sequelize);
+  const SpeciesImport = initSpeciesImport(sequelize);
+  const TeamSpecies = initTeamSpecies(sequelize);
 
   Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
@@ -57,8 +67,13 @@ export function initModels(sequelize: Sequelize) {
   RouteTransition.hasMany(RouteReviewer, { foreignKey: 'transitionId', as: 'reviewers' });
   RouteReviewer.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   Decision.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
+  SpeciesImport.belongsTo(User, { foreignKey: 'importedById', as: 'importedBy' });
+  TeamSpecies.belongsTo(User, { foreignKey: 'updatedById', as: 'updatedBy' });
 
-  return { User, Team, Membership, Invitation, AuditEvent, UserPreference, Route, Step, StepLink, DriverReaction, RouteRevision, RouteTransition, RouteReviewer, Comment, StepFlag, Notification, Decision };
+  Fit.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+  FitDataSet.belongsTo(User, { foreignKey: 'updatedById', as: 'updatedBy' });
+
+  return { FitDataSet, Fit, User, PasswordResetToken, Team, Membership, Invitation, AuditEvent, UserPreference, Route, Step, StepLink, DriverReaction, RouteRevision, RouteTransition, RouteReviewer, Comment, StepFlag, Notification, Decision, SpeciesImport, TeamSpecies };
 }
 
 export type Models = ReturnType<typeof initModels>;
