@@ -6,22 +6,10 @@ import { DEMO_PASSWORD, DEMO_USERS } from '../db/seeders/demo-team';
 import { signInSession, type Session } from './support/http-session';
 import { percentile, round } from './support/stats';
 import { syntheticChain } from './support/synthetic-route';
+import { timedRequests } from './support/timed-requests';
 
-const WARMUP = 5;
 const ROUTES = 4;
 const STEPS = 50;
-
-async function timed(requests: number, call: (i: number) => Promise<Response>): Promise<number[]> {
-  const timings: number[] = [];
-  for (let i = 0; i < requests + WARMUP; i += 1) {
-    const started = performance.now();
-    const res = await call(i);
-    await res.arrayBuffer();
-    if (!res.ok) throw new Error(`compare failed: ${res.status}`);
-    if (i >= WARMUP) timings.push(performance.now() - started);
-  }
-  return timings;
-}
 
 async function createRoute(session: Session, k: number): Promise<number> {
   // Each route its own temperatures, so the four share no remedies.
@@ -43,10 +31,10 @@ export async function runCompareBench(baseUrl: string, { requests = 60 } = {}): 
   for (let k = 0; k < ROUTES; k += 1) ids.push(await createRoute(session, k));
   const compare = (offset?: number) => session.fetch(`/api/compare?ids=${ids.join(',')}${offset === undefined ? '' : `&temperatureOffset_K=${offset}`}`);
 
-  const unchanged = await timed(requests, () => compare());
+  const unchanged = await timedRequests(requests, 'compare', () => compare());
   const whatIfRequests = Math.max(10, Math.floor(requests / 3));
   // Offsets from +1.013 K upwards, never repeating, never matching a step's saved temperature.
-  const whatIf = await timed(whatIfRequests, (i) => compare(Number((1.013 + i * 0.731).toFixed(3))));
+  const whatIf = await timedRequests(whatIfRequests, 'compare', (i) => compare(Number((1.013 + i * 0.731).toFixed(3))));
   return {
     compare4x50_http_p50_ms: round(percentile(unchanged, 50)),
     compare4x50_http_p95_ms: round(percentile(unchanged, 95)),

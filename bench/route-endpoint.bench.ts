@@ -7,20 +7,8 @@ import { DEMO_PASSWORD, DEMO_USERS } from '../db/seeders/demo-team';
 import { signInSession, type Session } from './support/http-session';
 import { percentile, round } from './support/stats';
 import { syntheticChain } from './support/synthetic-route';
+import { timedRequests } from './support/timed-requests';
 
-const WARMUP = 5;
-
-async function timed(requests: number, call: (i: number) => Promise<Response>): Promise<number[]> {
-  const timings: number[] = [];
-  for (let i = 0; i < requests + WARMUP; i += 1) {
-    const started = performance.now();
-    const res = await call(i);
-    await res.arrayBuffer();
-    if (!res.ok) throw new Error(`evaluate failed: ${res.status}`);
-    if (i >= WARMUP) timings.push(performance.now() - started);
-  }
-  return timings;
-}
 
 async function createChainRoute(session: Session) {
   const chain = syntheticChain(200);
@@ -37,13 +25,13 @@ export async function runRouteEndpointBench(baseUrl: string, { requests = 60 } =
   const { id, doc } = await createChainRoute(session);
   const evaluate = (body?: unknown) => session.fetch(`/api/routes/${id}/evaluate`, { method: 'POST', ...(body ? { body } : {}) });
 
-  const edited = await timed(requests, (i) => {
+  const edited = await timedRequests(requests, 'evaluate', (i) => {
     const steps = doc.steps.map((s, k) => (k === (i * 37) % doc.steps.length ? { ...s, temperature: `${450 + (i % 50)}.25 K` } : s));
     return evaluate({ ...doc, steps });
   });
-  const saved = await timed(requests, () => evaluate());
+  const saved = await timedRequests(requests, 'evaluate', () => evaluate());
   const coldRequests = Math.max(10, Math.floor(requests / 3));
-  const cold = await timed(coldRequests, (i) => evaluate({ ...doc, ...syntheticChain(200, 0.001 * (i + 1)) }));
+  const cold = await timedRequests(coldRequests, 'evaluate', (i) => evaluate({ ...doc, ...syntheticChain(200, 0.001 * (i + 1)) }));
   return {
     route200_edit_http_p50_ms: round(percentile(edited, 50)),
     route200_edit_http_p95_ms: round(percentile(edited, 95)),

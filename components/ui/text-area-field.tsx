@@ -1,5 +1,6 @@
 import { forwardRef, useId, type TextareaHTMLAttributes } from 'react';
 import { COMPACT_INPUT } from './input-class';
+import { FieldNote, fieldNoteId } from './field-note';
 
 interface TextAreaFieldProps extends TextareaHTMLAttributes<HTMLTextAreaElement> {
   label: string;
@@ -15,22 +16,14 @@ export const TextAreaField = forwardRef<HTMLTextAreaElement, TextAreaFieldProps>
 ) {
   const autoId = useId();
   const inputId = id ?? autoId;
-  const describedBy = error ? `${inputId}-error` : hint ? `${inputId}-hint` : undefined;
+  const describedBy = fieldNoteId(inputId, error, hint);
   return (
     <div className={`flex flex-col gap-1 ${className}`}>
       <label htmlFor={inputId} className={hideLabel ? 'sr-only' : 'text-xs font-medium text-ink'}>
         {label}
       </label>
       <textarea ref={ref} id={inputId} rows={rows} aria-invalid={error ? true : undefined} aria-describedby={describedBy} className={`${COMPACT_INPUT} ${error ? 'border-uphill' : ''}`} {...props} />
-      {error ? (
-        <p id={`${inputId}-error`} className="text-xs text-uphill">
-          {error}
-        </p>
-      ) : hint ? (
-        <p id={`${inputId}-hint`} className="text-xs text-ink-faint">
-          {hint}
-        </p>
-      ) : null}
+      <FieldNote inputId={inputId} error={error} hint={hint} />
     </div>
   );
 });

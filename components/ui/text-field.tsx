@@ -1,4 +1,5 @@
 import { forwardRef, useId, type InputHTMLAttributes } from 'react';
+import { FieldNote, fieldNoteId } from './field-note';
 
 interface TextFieldProps extends InputHTMLAttributes<HTMLInputElement> {
   label: string;
@@ -9,7 +10,7 @@ interface TextFieldProps extends InputHTMLAttributes<HTMLInputElement> {
 export const TextField = forwardRef<HTMLInputElement, TextFieldProps>(function TextField({ label, error, hint, id, className = '', ...props }, ref) {
   const autoId = useId();
   const inputId = id ?? autoId;
-  const describedBy = error ? `${inputId}-error` : hint ? `${inputId}-hint` : undefined;
+  const describedBy = fieldNoteId(inputId, error, hint);
   return (
     <div className={`flex flex-col gap-1 ${className}`}>
       <label htmlFor={inputId} className="text-sm font-medium text-ink">
@@ -23,15 +24,7 @@ export const TextField = forwardRef<HTMLInputElement, TextFieldProps>(function T
         className={`rounded-md border bg-white px-2.5 py-1.5 text-sm shadow-sm outline-none focus:border-pine-500 focus:ring-2 focus:ring-pine-100 ${error ? 'border-uphill' : 'border-paper-edge'}`}
         {...props}
       />
-      {error ? (
-        <p id={`${inputId}-error`} className="text-xs text-uphill">
-          {error}
-        </p>
-      ) : hint ? (
-        <p id={`${inputId}-hint`} className="text-xs text-ink-faint">
-          {hint}
-        </p>
-      ) : null}
+      <FieldNote inputId={inputId} error={error} hint={hint} />
     </div>
   );
 });
