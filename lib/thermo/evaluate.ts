@@ -9,10 +9,11 @@ import { ThermoError, isThermoError } from './errors';
 import { kFromLnK } from './fit';
 import { parseSpecies } from './notation';
 import { phaseWarnings } from './phase-checks';
+import { applyOverride, type OverrideSummary } from './reaction-override';
 import { STANDARD_PRESSURES_BAR, lnKFromDeltaG, reactionThermoAt, type ReactionSpecies } from './reaction-thermo';
 import { resolveReaction } from './resolve-reaction';
 import { assertFiniteNumbers } from './sanitise';
-import { builtinLookup, type SpeciesLookup } from './species-library';
+import { builtinLookup, type SpeciesLookup, type SpeciesOrigin } from './species-library';
 import { makeSpeciesMatcher, type CanonicalKey } from './species-matcher';
 import { reactionUncertainty, type UncertaintyResult } from './uncertainty';
 import { parseTemperature } from './units';
@@ -27,6 +28,9 @@ export interface SpeciesProvenance {
   source: string;
   sourceRef: string;
   flags: string[];
+  /** whose value was used: the built-in library's or the team's own */
+  origin: SpeciesOrigin;
+  /** a team value used in place of a built-in one of the same key */
   override: boolean;
 }
 
@@ -52,6 +56,8 @@ export interface EvaluateResponse {
   equilibrium: EquilibriumSummary | null;
   species: SpeciesProvenance[];
   warnings: EngineWarning[];
+  /** present when ΔH° and ΔS° came from `override` (a saved fit), not the library */
+  override?: OverrideSummary;
 }
 
 // Hard limits: below 10 K or above 50 000 K no record of any species applies at all.
@@ -140,7 +146,8 @@ export function evaluateStep(request: EvaluateRequest, opts: EvaluateOptions = {
   const canonicalKey = canonicalKeyFor(lookup);
   const match = makeSpeciesMatcher(species, canonicalKey);
 
-  const thermo = reactionThermoAt(species, T, { heatCapacity, standardPressure_bar });
+  const fitted = request.override ? applyOverride(request.override, species, T, { lookup, standardPressure_bar }) : null;
+  const thermo = fitted?.thermo ?? reactionThermoAt(species, T, { heatCapacity, standardPressure_bar });
   const lnK = lnKFromDeltaG(thermo.deltaG0_kJ, T);
   const k = kFromLnK(lnK);
 
@@ -157,6 +164,7 @@ export function evaluateStep(request: EvaluateRequest, opts: EvaluateOptions = {
     ...dataWarnings(species, lookup, thermo.ghsMismatch_kJ),
     ...q.warnings,
     ...eq.warnings,
+    ...(fitted ? [fitted.warning] : []),
   ];
 
   const response: EvaluateResponse = {
@@ -174,10 +182,10 @@ export function evaluateStep(request: EvaluateRequest, opts: EvaluateOptions = {
     lnQ: q.lnQ,
     deltaG_kJ,
     direction: direction(decisive, scale),
-    crossover_K: memoCrossover(species, { heatCapacity, standardPressure_bar }),
+    crossover_K: fitted ? fitted.crossover_K : memoCrossover(species, { heatCapacity, standardPressure_bar }),
     maxWork_kJ: -decisive,
     cellPotential_V: request.electrons === undefined ? null : (-decisive * 1000) / (request.electrons * FARADAY),
-    uncertainty: reactionUncertainty(species, decisive),
+    uncertainty: fitted ? fitted.uncertainty(decisive) : reactionUncertainty(species, decisive),
     equilibrium: eq.result,
     species: species.map((s) => ({
       key: s.key,
@@ -186,9 +194,11 @@ export function evaluateStep(request: EvaluateRequest, opts: EvaluateOptions = {
       source: s.record.source,
       sourceRef: s.record.sourceRef,
       flags: [...s.record.flags],
+      origin: lookup.origin?.(s.key) ?? 'library',
       override: lookup.shadowed?.(s.key) !== undefined,
     })),
     warnings,
+    ...(fitted ? { override: fitted.summary } : {}),
   };
   return opts.checkFinite === false ? response : assertFiniteNumbers(response);
 }

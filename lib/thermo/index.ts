@@ -7,7 +7,7 @@ export { checkBalance, describeImbalance, balanceEquation, type BalanceReport } 
 export { evaluateStep, type EvaluateResponse, type Direction, type SpeciesProvenance } from './evaluate';
 export { runFit, type FitResponse } from './fit-request';
 export { fitVantHoff, kAtTemperature, kFromLnK, type FitPoint, type VantHoffFit, type KValue } from './fit';
-export { builtinLookup, builtinSpecies, layeredLookup, libraryMeta, type SpeciesLookup } from './species-library';
+export { builtinLookup, builtinSpecies, layeredLookup, libraryMeta, type SpeciesLookup, type SpeciesOrigin } from './species-library';
 export type { SpeciesRecord, CpModel, Nasa9Cp, ConstantCp, SpeciesFlag, LibraryPhase } from './species-types';
 export {
   parseQuantity,

@@ -12,9 +12,13 @@ export interface SpeciesLookup {
   suggest(key: string, limit?: number, elements?: Record<string, number>): string[];
   /** the built-in record a team species shadows, if any */
   shadowed?(key: string): SpeciesRecord | undefined;
+  /** where the record `get(key)` returns comes from; absent means the built-in library */
+  origin?(key: string): SpeciesOrigin;
   /** closest writable names ("ethanol(l)") or keys for an unknown name; same phase first on ties */
   suggestName?(name: string, phaseOrForm: string, limit?: number): string[];
 }
+
+export type SpeciesOrigin = 'library' | 'team';
 
 interface NameCandidate {
   /** as the user would write it: "ethanol(l)", or the key itself */
@@ -161,6 +165,7 @@ export function layeredLookup(teamSpecies: readonly SpeciesRecord[], base: Speci
       return [...new Set([...own, ...base.suggest(key, limit, elements)])].slice(0, limit);
     },
     shadowed: (key) => (team.get(key) ? base.get(key) : undefined),
+    origin: (key) => (team.get(key) ? 'team' : (base.origin?.(key) ?? 'library')),
     suggestName: (name, phaseOrForm, limit = 5) => {
       const own = team.suggestName(name, phaseOrForm, limit);
       return [...new Set([...own, ...(base.suggestName?.(name, phaseOrForm, limit) ?? [])])].slice(0, limit);

@@ -5,4 +5,4 @@ import { evaluateBatch } from '@/lib/services/thermo/evaluate-batch';
 
 export const runtime = 'nodejs';
 
-export const POST = withRoute({ access: 'team', permission: 'thermo.evaluate', body: EvaluateBody }, async ({ body }) => evaluateBatch(body));
+export const POST = withRoute({ access: 'team', permission: 'thermo.evaluate', body: EvaluateBody }, async ({ body, team }) => evaluateBatch(body, { teamId: team.id }));

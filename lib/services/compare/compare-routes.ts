@@ -8,10 +8,13 @@ import { applyWhatIf } from '../../compare/what-if';
 import type { WhatIf } from '../../schemas/compare';
 import { ThermoError } from '../../thermo/errors';
 import { evaluateRoute, type RouteEvaluateRequest } from '../../thermo/route';
+import type { SpeciesLookup } from '../../thermo/species-library';
 import { listDrivers } from '../drivers/list-drivers';
+import { fitOverrides } from '../fits/fit-overrides';
 import { toRouteEvaluateRequest } from '../routes/evaluate-route-document';
 import { readLinkInputs, readStepInputs } from '../routes/read-route-rows';
 import { toRouteDocument } from '../routes/route-dto';
+import { teamLookup } from '../species/team-lookup';
 import { reviewCounts } from './review-counts';
 
 const quoted = (names: string[]) => names.map((n) => `“${n}”`).join(', ');
@@ -41,9 +44,9 @@ async function loadRoutes(teamId: number, ids: number[], transaction?: Transacti
   );
 }
 
-function evaluateOutcome(request: RouteEvaluateRequest, drivers: Awaited<ReturnType<typeof listDrivers>>): RouteForComparison['outcome'] {
+function evaluateOutcome(request: RouteEvaluateRequest, drivers: Awaited<ReturnType<typeof listDrivers>>, lookup: SpeciesLookup): RouteForComparison['outcome'] {
   try {
-    return { evaluation: evaluateRoute(request, { drivers }) };
+    return { evaluation: evaluateRoute(request, { drivers, lookup }) };
   } catch (error) {
     // A route the engine refuses as a whole (no steps, a cycle) stays in the comparison with its reason.
     if (error instanceof ThermoError) return { error: { code: error.code, message: error.message, field: error.field ?? null } };
@@ -54,9 +57,10 @@ function evaluateOutcome(request: RouteEvaluateRequest, drivers: Awaited<ReturnT
 /** Evaluates 2–4 routes of the team under one what-if, never saving, and puts them side by side. */
 export async function compareRoutes({ teamId, ids, whatIf = {}, transaction }: { teamId: number; ids: number[]; whatIf?: WhatIf; transaction?: Transaction }): Promise<Comparison> {
   const loaded = await loadRoutes(teamId, ids, transaction);
-  const [drivers, counts] = await Promise.all([listDrivers({ teamId }), reviewCounts({ teamId, routeIds: ids, transaction })]);
+  const [drivers, counts, lookup] = await Promise.all([listDrivers({ teamId }), reviewCounts({ teamId, routeIds: ids, transaction }), teamLookup(teamId, transaction)]);
+  const fits = await fitOverrides({ teamId, steps: loaded.flatMap((l) => l.doc.steps), transaction });
   const prepared = loaded.map(({ row, doc, updatedBy }) => {
-    const { request, problems } = applyWhatIf(toRouteEvaluateRequest(doc) as RouteEvaluateRequest, whatIf);
+    const { request, problems } = applyWhatIf(toRouteEvaluateRequest(doc, fits) as RouteEvaluateRequest, whatIf);
     return { row, doc, updatedBy, request, problems };
   });
   const problems = prepared.flatMap((p) => p.problems.map((x) => `${p.doc.name}: ${x.message}`));
@@ -77,7 +81,7 @@ export async function compareRoutes({ teamId, ids, whatIf = {}, transaction }: {
     stepCount: row.stepCount === doc.steps.length ? row.stepCount : doc.steps.length,
     ...counts.get(doc.id)!,
     request,
-    outcome: evaluateOutcome(request, drivers),
+    outcome: evaluateOutcome(request, drivers, lookup),
   }));
   return buildComparison(routes, whatIf);
 }

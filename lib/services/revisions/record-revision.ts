@@ -2,6 +2,7 @@ import 'server-only';
 import type { Transaction } from 'sequelize';
 import { getDb } from '../../../db';
 import type { RouteDocumentDto } from '../routes/route-dto';
+import type { SpeciesLookup } from '../../thermo/species-library';
 import { evaluateRouteDocument, type RouteEvaluation } from '../routes/evaluate-route-document';
 import { toRevisionState, toRevisionSummary, type RevisionSummaryDto } from './revision-dto';
 import { energiesOf, toSnapshot, type RevisionState } from './revision-snapshot';
@@ -14,9 +15,9 @@ export async function latestRevisionState({ routeId, transaction }: { routeId: n
 }
 
 // A route without revisions is compared against its saved rows, evaluated once for their ΔG.
-export function stateOfDocument(doc: RouteDocumentDto, evaluation?: RouteEvaluation): RevisionState {
+export function stateOfDocument(doc: RouteDocumentDto, evaluation?: RouteEvaluation, lookup?: SpeciesLookup): RevisionState {
   const snapshot = toSnapshot(doc);
-  return { snapshot, ...energiesOf(evaluation ?? (doc.steps.length ? evaluateRouteDocument(snapshot) : null)) };
+  return { snapshot, ...energiesOf(evaluation ?? (doc.steps.length ? evaluateRouteDocument(snapshot, lookup) : null)) };
 }
 
 /** Writes the revision for a document just saved at `doc.version`, in the save's transaction. */

@@ -4,6 +4,7 @@ import { recordEvent } from '../audit/record-event';
 import { latestRevisionState, recordRevision, stateOfDocument } from '../revisions/record-revision';
 import { getRoute } from './get-route';
 import { stepRow } from './route-dto';
+import { teamLookup } from '../species/team-lookup';
 
 // An alternative starts as a full copy that remembers where it came from; its revision 1 says so.
 export async function duplicateRoute({ teamId, userId, routeId, name }: { teamId: number; userId: number; routeId: number; name?: string }) {
@@ -32,7 +33,7 @@ export async function duplicateRoute({ teamId, userId, routeId, name }: { teamId
     await recordEvent({ teamId, actorId: userId, action: 'route.duplicated', targetType: 'route', targetId: copy.id, data: { from: routeId } }, transaction);
     const doc = await getRoute({ teamId, routeId: copy.id, transaction });
     // The copy's energies are the source's: the newest revision holds them, else the source is evaluated once.
-    const energies = (await latestRevisionState({ routeId, transaction })) ?? stateOfDocument(source);
+    const energies = (await latestRevisionState({ routeId, transaction })) ?? stateOfDocument(source, undefined, await teamLookup(teamId, transaction));
     await recordRevision({
       doc, teamId, userId, evaluation: null, previous: null, head: `Duplicated from ${source.name}`, transaction,
       energies: { stepDeltaG: energies.stepDeltaG, overallDeltaG_kJ: energies.overallDeltaG_kJ },

@@ -8,6 +8,7 @@ import { recordRevision } from '../revisions/record-revision';
 import { evaluateRouteDocument, summariseEvaluation } from './evaluate-route-document';
 import { getRoute } from './get-route';
 import { stepRow } from './route-dto';
+import { teamLookup } from '../species/team-lookup';
 
 // A yield of 0.07 must come back as 7 %, not 7.000000000000001.
 const percent = (fraction: number) => Math.round(fraction * 100 * 1e9) / 1e9;
@@ -36,7 +37,7 @@ export function routeFileToDocument(input: RouteImportInput) {
 /** Creates the route in the caller's team in one transaction, with its first revision. */
 export async function importRoute({ teamId, userId, input }: { teamId: number; userId: number; input: RouteImportInput }) {
   const doc = routeFileToDocument(input);
-  const evaluation = evaluateRouteDocument(doc);
+  const evaluation = evaluateRouteDocument(doc, await teamLookup(teamId));
   const summary = summariseEvaluation(doc, evaluation);
   const { sequelize, models } = getDb();
   return sequelize.transaction(async (transaction) => {

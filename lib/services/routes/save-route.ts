@@ -3,12 +3,14 @@ import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
 import type { SaveRouteInput } from '../../schemas/route';
 import { recordEvent } from '../audit/record-event';
+import { fitOverrides } from '../fits/fit-overrides';
 import { latestRevisionState, recordRevision, stateOfDocument } from '../revisions/record-revision';
 import { recordTransition } from '../workflow/record-transition';
 import type { TransitionOutcome } from '../workflow/transition-dto';
 import { evaluateRouteDocument, summariseEvaluation } from './evaluate-route-document';
 import { getRoute } from './get-route';
 import { stepRow } from './route-dto';
+import { teamLookup } from '../species/team-lookup';
 
 function assertConsistent(input: SaveRouteInput): void {
   const keys = new Set<string>();
@@ -39,7 +41,9 @@ export interface SaveOrigin {
 // Every save writes a revision; saving an approved route sends it back to draft, recorded as a move.
 export async function saveRoute({ teamId, userId, routeId, input, origin }: { teamId: number; userId: number; routeId: number; input: SaveRouteInput; origin?: SaveOrigin }) {
   assertConsistent(input);
-  const evaluation = evaluateRouteDocument(input);
+  const lookup = await teamLookup(teamId);
+  // A step's fit must be the team's (404 otherwise); its ΔH° and ΔS° go into the cached ΔG.
+  const evaluation = evaluateRouteDocument(input, lookup, await fitOverrides({ teamId, steps: input.steps }));
   const summary = summariseEvaluation(input, evaluation);
   const { sequelize, models } = getDb();
   return sequelize.transaction(async (transaction) => {
@@ -47,7 +51,7 @@ export async function saveRoute({ teamId, userId, routeId, input, origin }: { te
     if (!current) throw new AppError('NOT_FOUND', 'No such route.');
     if (current.archivedAt) throw new AppError('UNPROCESSABLE', 'This route is archived, so it is read-only. Unarchive it to edit it.');
     if (current.version !== input.version) throw conflict(current.version, input.version);
-    const previous = (await latestRevisionState({ routeId, transaction })) ?? stateOfDocument(await getRoute({ teamId, routeId, transaction }));
+    const previous = (await latestRevisionState({ routeId, transaction })) ?? stateOfDocument(await getRoute({ teamId, routeId, transaction }), undefined, lookup);
     const wasApproved = current.status === 'approved';
     const [updated] = await models.Route.update(
       {
