@@ -10,6 +10,8 @@ export interface StepConditions {
   initial?: Record<string, string>;
   totalPressure?: string;
   electrons?: number;
+  /** a saved fit whose ΔH° and ΔS° the step uses instead of the library */
+  fitId?: number | null;
 }
 
 export class Step extends Model<InferAttributes<Step>, InferCreationAttributes<Step>> {

@@ -21,6 +21,20 @@ export const EvaluateRequestSchema = z.strictObject({
   electrons: PositiveFinite.max(1000).optional(),
   fugacityCoefficients: speciesMap(PositiveFinite).optional(),
   activityCoefficients: speciesMap(PositiveFinite).optional(),
+  /** ΔH°, ΔS° for this reaction from elsewhere (a saved fit) instead of the library; ΔCp = 0 */
+  override: z
+    .strictObject({
+      /** the reaction the values are for; the step must be it or a multiple of it */
+      equation: z.string().trim().min(1).max(500),
+      deltaH0_kJ: z.number().finite(),
+      deltaS0_J_per_K: z.number().finite(),
+      /** named in the answer and its warning, e.g. fit #3 “N2O4 dissociation” */
+      source: z.string().trim().min(1).max(200),
+      /** the temperatures the values were fitted over */
+      range_K: z.tuple([PositiveFinite, PositiveFinite]).optional(),
+      stderr: z.strictObject({ deltaH0_kJ: z.number().finite().nonnegative(), deltaS0_J_per_K: z.number().finite().nonnegative(), covariance_HS: z.number().finite() }).optional(),
+    })
+    .optional(),
 });
 
 export type EvaluateRequest = z.infer<typeof EvaluateRequestSchema>;

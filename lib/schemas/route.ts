@@ -20,6 +20,8 @@ export const StepInput = z.strictObject({
   initial: speciesMap(QuantityString).optional(),
   totalPressure: Quantity.optional(),
   electrons: PositiveFinite.max(1000).optional(),
+  /** a saved fit of the team whose ΔH° and ΔS° this step uses instead of the library */
+  fitId: z.number().int().positive().nullable().optional(),
   yieldPct: z.number().gt(0, { message: 'Yield must be above 0 %.' }).max(100, { message: 'Yield is at most 100 %.' }).default(100),
   notes: z.string().max(4000).default(''),
   position: z.strictObject({ x: z.number().finite(), y: z.number().finite() }).default({ x: 0, y: 0 }),

@@ -6,7 +6,7 @@ import { T_REF } from './constants';
 import type { ReactionSpecies } from './reaction-thermo';
 import type { SpeciesRecord } from './species-types';
 
-export type SigmaOrigin = 'published' | 'compilation difference' | 'none';
+export type SigmaOrigin = 'published' | 'compilation difference' | 'fit' | 'none';
 
 export interface SigmaSource {
   species: string;

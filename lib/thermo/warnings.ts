@@ -10,7 +10,8 @@ export type WarningCode =
   | 'FROM_MEMORY'
   | 'EQUILIBRIUM_LIMIT'
   | 'INERT_SPECIES'
-  | 'SOLVENT_IN_EXCESS';
+  | 'SOLVENT_IN_EXCESS'
+  | 'FITTED_VALUES';
 
 export interface EngineWarning {
   code: WarningCode;

@@ -91,6 +91,8 @@ function checkTarget(target: string, lookup: SpeciesLookup): void {
 
 function computeRemedies(e: Evaluated, goal_kJ: number, ctx: CouplingContext): Remedy[] {
   const r = e.result!;
+  // Fitted ΔH°, ΔS° get condition remedies only: the temperature search and coupling sums read the library's species.
+  if (e.request.override) return conditionsRemedies(e.request, r, goal_kJ, ctx.lookup);
   return [
     temperatureRemedy(e.request, r, goal_kJ, ctx.lookup),
     ...conditionsRemedies(e.request, r, goal_kJ, ctx.lookup),
