@@ -5,6 +5,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare email: string;
   declare name: string;
   declare passwordHash: string;
+  /** Raised by "sign out everywhere" and by a password reset; older JWTs stop working. */
+  declare sessionEpoch: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -16,6 +18,7 @@ export function initUser(sequelize: Sequelize): typeof User {
       email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
       name: { type: DataTypes.STRING(120), allowNull: false },
       passwordHash: { type: DataTypes.STRING(100), allowNull: false, field: 'password_hash' },
+      sessionEpoch: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0, field: 'session_epoch' },
       createdAt: { type: DataTypes.DATE, field: 'created_at' },
       updatedAt: { type: DataTypes.DATE, field: 'updated_at' },
     },

@@ -1,14 +1,18 @@
 import 'server-only';
 import type { NextAuthOptions } from 'next-auth';
 import CredentialsProvider from 'next-auth/providers/credentials';
+import { getDb } from '../../db';
 import { SignInInput } from '../schemas/auth';
 import { authenticateUser } from '../services/users/authenticate-user';
 import { authSecret, env } from '../env';
+import { currentSessionUser, SessionRevokedError } from './session-policy';
 
 export function authOptions(): NextAuthOptions {
   return {
     secret: authSecret(),
+    // maxAge is the idle limit (each visit renews it); session-policy adds an absolute limit and the epoch check.
     session: { strategy: 'jwt', maxAge: env().SESSION_MAX_AGE_S },
+    jwt: { maxAge: env().SESSION_MAX_AGE_S },
     pages: { signIn: '/sign-in' },
     providers: [
       CredentialsProvider({
@@ -24,12 +28,28 @@ export function authOptions(): NextAuthOptions {
     ],
     callbacks: {
       async jwt({ token, user }) {
-        if (user) token.sub = user.id;
+        if (user) {
+          const row = await getDb().models.User.findByPk(Number(user.id));
+          token.sub = user.id;
+          token.epoch = row?.sessionEpoch ?? 0;
+          token.authAt = Math.floor(Date.now() / 1000);
+          return token;
+        }
+        // Throwing makes next-auth clear the cookie: the session was revoked, has hit its absolute limit, or its user is gone.
+        if (!(await currentSessionUser(token))) throw new SessionRevokedError('This session has ended. Sign in again.');
         return token;
       },
       async session({ session, token }) {
         if (session.user && token.sub) (session.user as { id?: string }).id = token.sub;
         return session;
+      },
+    },
+    logger: {
+      error(code, metadata) {
+        // An ended session is expected, not an error worth a stack in the log.
+        const cause = (metadata as { error?: unknown } | undefined)?.error ?? metadata;
+        if (code === 'JWT_SESSION_ERROR' && (cause as Error | undefined)?.name === 'SessionRevokedError') return;
+        console.error(`[next-auth][error][${code}]`, metadata);
       },
     },
   };

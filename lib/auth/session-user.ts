@@ -1,8 +1,8 @@
 import 'server-only';
 import { getToken } from 'next-auth/jwt';
 import type { NextRequest } from 'next/server';
-import { getDb } from '../../db';
 import { authSecret } from '../env';
+import { currentSessionUser } from './session-policy';
 
 export interface SessionUser {
   id: number;
@@ -10,11 +10,9 @@ export interface SessionUser {
   name: string;
 }
 
-// Reads the JWT from the request's cookie, then checks the user still exists.
+// Reads the JWT from the request's cookie, then checks the user still exists and the session was not revoked.
 export async function sessionUserFromRequest(req: NextRequest): Promise<SessionUser | null> {
   const token = await getToken({ req, secret: authSecret() });
-  const id = Number(token?.sub);
-  if (!Number.isInteger(id) || id <= 0) return null;
-  const user = await getDb().models.User.findByPk(id);
+  const user = await currentSessionUser(token);
   return user ? { id: user.id, email: user.email, name: user.name } : null;
 }

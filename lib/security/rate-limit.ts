@@ -1,3 +1,5 @@
+import { AppError } from '../api/errors';
+
 export interface RateLimitResult {
   allowed: boolean;
   retryAfterSeconds: number;
@@ -58,6 +60,19 @@ export function namedLimiter(name: string, opts: { limit: number; windowMs: numb
 export const signInLimiter = () => namedLimiter('sign-in', { limit: 10, windowMs: 60_000 });
 export const signUpLimiter = () => namedLimiter('sign-up', { limit: 20, windowMs: 60 * 60_000 });
 export const inviteLimiter = () => namedLimiter('invite', { limit: 50, windowMs: 60 * 60_000 });
+// Per address (so one inbox is not flooded) and per IP (so addresses cannot be cycled); both apply whether or not the address exists.
+export const resetByEmailLimiter = () => namedLimiter('reset-email', { limit: 5, windowMs: 60 * 60_000 });
+export const resetByIpLimiter = () => namedLimiter('reset-ip', { limit: 30, windowMs: 60 * 60_000 });
+
+/** Checks every (limiter, key) pair and counts a hit on each only when all allow; throws a 429 with the longest wait otherwise. */
+export function enforceLimits(pairs: ReadonlyArray<readonly [RateLimiter, string]>, message: (waitS: number) => string): void {
+  const waits = pairs.map(([limiter, key]) => limiter.check(key)).filter((v) => !v.allowed).map((v) => v.retryAfterSeconds);
+  if (waits.length) {
+    const wait = Math.max(...waits);
+    throw new AppError('RATE_LIMITED', message(wait), { headers: { 'Retry-After': String(wait) } });
+  }
+  for (const [limiter, key] of pairs) limiter.hit(key);
+}
 
 export function clientIp(req: Request): string {
   const forwarded = req.headers.get('x-forwarded-for');

@@ -213,6 +213,22 @@ const TABLE: Row[] = [
     prepare: async () => ({ body: { target: 'NH3(g)', steps: [{ id: 'a', equation: 'N2(g) + 3 H2(g) -> 2 NH3(g)', temperature: '700 K' }], stepwell: { format: 'stepwell.route/1', name: 'Imported ammonia' } } }),
   },
   { route: 'routes/[routeId]/alternatives', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: await routeParams(w) }) },
+  // Security (sessions, password reset). Sign-out-everywhere bumps the caller's epoch; callRoute mints each call's cookie with the current one.
+  { route: 'me/sign-out-everywhere', method: 'POST', expect: signedIn(200) },
+  {
+    route: 'password-reset', method: 'POST', expect: { anonymous: 202, reviewer: 202, designer: 202, lead: 202, foreign: 202 },
+    prepare: async () => ({ body: { email: `reset-${unique()}@example.test` } }),
+  },
+  {
+    route: 'password-reset/[token]', method: 'POST', expect: { anonymous: 200, reviewer: 200, designer: 200, lead: 200, foreign: 200 },
+    prepare: async (w) => {
+      const { newResetToken } = await import('@/lib/services/password-reset/reset-token');
+      const { token, tokenHash } = newResetToken();
+      const userId = await addMember(w.foreignTeamId, 'reviewer');
+      await getDb().models.PasswordResetToken.create({ userId, tokenHash, expiresAt: new Date(Date.now() + 600_000) });
+      return { params: { token }, body: { password: 'a-fresh-password-1' } };
+    },
+  },
 ];
 
 let dir = '';

@@ -11,6 +11,7 @@ import { apiFetch } from '@/lib/queries/api-fetch';
 import { meKeys, useProfile } from '@/lib/queries/me';
 import { ENERGY_UNITS, PRESSURE_UNITS, PreferencesInput, TEMPERATURE_UNITS } from '@/lib/schemas/preferences';
 import { NotificationMutesForm } from './notification-mutes-form';
+import { SignOutEverywhere } from './sign-out-everywhere';
 
 const LABELS: Record<string, string> = { kJ: 'kJ/mol', kcal: 'kcal/mol', K: 'kelvin (K)', degC: 'degrees Celsius (°C)', bar: 'bar', atm: 'atm', kPa: 'kPa' };
 
@@ -21,6 +22,7 @@ export function SettingsForm() {
     <div className="flex flex-col gap-6">
       <UnitsForm initial={profile.preferences} />
       <NotificationMutesForm initial={profile.notificationMutes} />
+      <SignOutEverywhere />
     </div>
   );
 }

@@ -10,7 +10,12 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
     <>
       <h1 className="text-lg font-semibold">Sign in</h1>
       <SignInForm next={next?.startsWith('/') && !next.startsWith('//') ? next : '/routes'} />
-      <p className="mt-4 text-sm text-ink-soft">
+      <p className="mt-3 text-sm">
+        <Link href="/forgot-password" className="text-pine-700 underline">
+          Forgot your password?
+        </Link>
+      </p>
+      <p className="mt-2 text-sm text-ink-soft">
         New here?{' '}
         <Link href="/sign-up" className="text-pine-700 underline">
           Start a team

@@ -1,5 +1,6 @@
 import { encode } from 'next-auth/jwt';
 import { NextRequest } from 'next/server';
+import { getDb } from '@/db';
 import { TEST_SECRET } from './test-db';
 
 type Handler = (req: NextRequest, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
@@ -14,8 +15,10 @@ export interface CallOptions {
   userId?: number | null;
 }
 
+// Like a real sign-in, the token carries the user's current session epoch and the sign-in time.
 export async function sessionCookie(userId: number): Promise<string> {
-  const token = await encode({ token: { sub: String(userId) }, secret: TEST_SECRET });
+  const user = await getDb().models.User.findByPk(userId);
+  const token = await encode({ token: { sub: String(userId), epoch: user?.sessionEpoch ?? 0, authAt: Math.floor(Date.now() / 1000) }, secret: TEST_SECRET });
   return `next-auth.session-token=${token}`;
 }
 
