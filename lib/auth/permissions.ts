@@ -13,6 +13,7 @@ export const PERMISSIONS = {
   'route.review': ['reviewer', 'lead'],
   'route.delete': ['designer', 'lead'],
   'species.edit': ['designer', 'lead'],
+  'fit.edit': ['designer', 'lead'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;

@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { getDb } from '@/db';
 import { newInvitationToken } from '@/lib/services/invitations/token';
 import { addMember, makeRoleSet, makeRoute, SAMPLE_LINKS, SAMPLE_STEPS } from './support/fixtures';
+import { makeDataSet, makeFit } from './support/fit-fixtures';
 import { callRoute, type CallOptions } from './support/http';
 import { HTTP_METHODS, importRoute, listRouteFiles } from './support/route-files';
 import { setupTestDb, teardownTestDb } from './support/test-db';
@@ -213,6 +214,31 @@ const TABLE: Row[] = [
     prepare: async () => ({ body: { target: 'NH3(g)', steps: [{ id: 'a', equation: 'N2(g) + 3 H2(g) -> 2 NH3(g)', temperature: '700 K' }], stepwell: { format: 'stepwell.route/1', name: 'Imported ammonia' } } }),
   },
   { route: 'routes/[routeId]/alternatives', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: await routeParams(w) }) },
+  // Data fits: a foreign caller's active team is their own, so the main team's data sets and fits are 404 there.
+  { route: 'fits/data-sets', method: 'GET', expect: signedIn(200) },
+  { route: 'fits/data-sets', method: 'POST', expect: editorsOwnTeam(201), prepare: async () => ({ body: { name: 'Typed set', source: 'grid', rows: [{ T: '300', value: '2' }, { T: '400', value: '5' }, { T: '500', value: '9' }] } }) },
+  { route: 'fits/data-sets/[dataSetId]', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: { dataSetId: String((await makeDataSet(w.teamId, w.leadId)).id) } }) },
+  {
+    route: 'fits/data-sets/[dataSetId]', method: 'PUT', expect: editorsOfResource(200),
+    prepare: async (w) => ({ params: { dataSetId: String((await makeDataSet(w.teamId, w.leadId)).id) }, body: { name: 'Renamed', rows: [{ T: '300', value: '2' }, { T: '400', value: '5' }, { T: '500', value: '9' }] } }),
+  },
+  { route: 'fits/data-sets/[dataSetId]', method: 'DELETE', expect: editorsOfResource(200), prepare: async (w) => ({ params: { dataSetId: String((await makeDataSet(w.teamId, w.leadId)).id) } }) },
+  { route: 'fits/data-sets/[dataSetId]/analysis', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: { dataSetId: String((await makeDataSet(w.teamId, w.leadId)).id) } }) },
+  {
+    route: 'fits/data-sets/[dataSetId]/exclusions', method: 'PUT', expect: editorsOfResource(200),
+    prepare: async (w) => ({ params: { dataSetId: String((await makeDataSet(w.teamId, w.leadId)).id) }, body: { exclusions: [{ index: 0, reason: 'Thermostat drifted.' }] } }),
+  },
+  { route: 'fits', method: 'GET', expect: signedIn(200) },
+  { route: 'fits', method: 'POST', expect: editorsOfResource(201), prepare: async (w) => ({ body: { dataSetId: (await makeDataSet(w.teamId, w.leadId)).id, name: 'Saved' } }) },
+  { route: 'fits/[fitId]', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: { fitId: String((await makeFit(w.teamId, w.leadId)).id) } }) },
+  {
+    route: 'fits/[fitId]/species', method: 'POST', expect: editorsOfResource(201),
+    prepare: async (w) => {
+      // Each success adds NO2(g) to the main team; clear it so the next caller meets the same state.
+      await getDb().models.TeamSpecies.destroy({ where: { teamId: w.teamId } });
+      return { params: { fitId: String((await makeFit(w.teamId, w.leadId)).id) }, body: { species: 'NO2(g)', name: 'Nitrogen dioxide (fitted)' } };
+    },
+  },
   // Security (sessions, password reset). Sign-out-everywhere bumps the caller's epoch; callRoute mints each call's cookie with the current one.
   { route: 'me/sign-out-everywhere', method: 'POST', expect: signedIn(200) },
   {
