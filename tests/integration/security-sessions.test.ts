@@ -109,6 +109,6 @@ describe('sign out everywhere', () => {
     const jwt = authOptions().callbacks!.jwt!;
     const token = await jwt({ token: {}, user: { id: String(lead.leadId), email: lead.leadEmail }, account: null } as Parameters<typeof jwt>[0]);
     expect(token).toMatchObject({ sub: String(lead.leadId), epoch: 4, authAt: expect.any(Number) });
-    await expect(jwt({ token: { sub: String(lead.leadId), epoch: 3 } } as Parameters<typeof jwt>[0])).rejects.toThrow(/session has ended/);
+    await expect(jwt({ token: { sub: String(lead.leadId), epoch: 3 } } as unknown as Parameters<typeof jwt>[0])).rejects.toThrow(/session has ended/);
   });
 });
