@@ -19,7 +19,7 @@ export interface AnalysedPoint {
   sigma_lnK: number | null;
   excluded: boolean;
   reason: string | null;
-  /** ln K of the fitted line at this T, minus the point's */
+  /** the point's ln K minus the fitted line's at this T */
   residual: number;
   /** residual over σ (the point's own when weighted, else the scatter s); null for an exact fit */
   standardised: number | null;
