@@ -71,3 +71,7 @@ export const SpeciesImportCommit = z.strictObject({
   otherwise: z.enum(DUPLICATE_CHOICES).nullable().default(null),
 });
 export type SpeciesImportCommit = z.infer<typeof SpeciesImportCommit>;
+
+/** "What would change": the species as it would be saved, and the team species it would replace (none for a new one). */
+export const SpeciesImpactRequest = z.strictObject({ species: TeamSpeciesInput, teamSpeciesId: z.number().int().positive().nullable().default(null) });
+export type SpeciesImpactRequest = z.infer<typeof SpeciesImpactRequest>;

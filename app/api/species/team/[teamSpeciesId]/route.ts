@@ -1,0 +1,16 @@
+// GET/PUT /api/species/team/[teamSpeciesId]: one team species as entered; save an edit (the answer lists routes whose ΔG changed)
+import { withRoute } from '@/lib/api/with-route';
+import { TeamSpeciesUpdate } from '@/lib/schemas/species';
+import { getTeamSpecies } from '@/lib/services/species/get-team-species';
+import { updateTeamSpecies } from '@/lib/services/species/update-team-species';
+
+export const runtime = 'nodejs';
+export const dynamic = 'force-dynamic';
+
+export const GET = withRoute({ access: 'team', permission: 'team.read' }, async ({ team, params }) =>
+  getTeamSpecies({ teamId: team.id, id: Number(params.teamSpeciesId) || 0 }),
+);
+
+export const PUT = withRoute({ access: 'team', permission: 'species.edit', body: TeamSpeciesUpdate }, async ({ team, user, params, body }) =>
+  updateTeamSpecies({ teamId: team.id, userId: user.id, id: Number(params.teamSpeciesId) || 0, version: body.version, input: body.species }),
+);
