@@ -4,6 +4,7 @@ import { newInvitationToken } from '@/lib/services/invitations/token';
 import { addMember, makeRoleSet, makeRoute, SAMPLE_LINKS, SAMPLE_STEPS } from './support/fixtures';
 import { makeDataSet, makeFit } from './support/fit-fixtures';
 import { callRoute, type CallOptions } from './support/http';
+import { CSV_HEADER, csvRow, speciesInput, uploadCsv } from './support/species-fixtures';
 import { HTTP_METHODS, importRoute, listRouteFiles } from './support/route-files';
 import { setupTestDb, teardownTestDb } from './support/test-db';
 
@@ -35,6 +36,11 @@ async function pendingInvitation(teamId: number, invitedById: number) {
     teamId, email: `invitee-${unique()}@example.test`, role: 'reviewer', tokenHash, invitedById, expiresAt: new Date(Date.now() + 86_400_000),
   });
   return { token, id: row.id };
+}
+
+async function makeTeamSpecies(w: World) {
+  const { createTeamSpecies } = await import('@/lib/services/species/create-team-species');
+  return createTeamSpecies({ teamId: w.teamId, userId: w.leadId, input: speciesInput() });
 }
 
 // One row per handler and method. A handler without a row fails the coverage test below.
@@ -214,6 +220,24 @@ const TABLE: Row[] = [
     prepare: async () => ({ body: { target: 'NH3(g)', steps: [{ id: 'a', equation: 'N2(g) + 3 H2(g) -> 2 NH3(g)', temperature: '700 K' }], stepwell: { format: 'stepwell.route/1', name: 'Imported ammonia' } } }),
   },
   { route: 'routes/[routeId]/alternatives', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: await routeParams(w) }) },
+  // Species library, team species and CSV imports: each call makes its own species or file, so callers never collide on a key.
+  { route: 'species', method: 'GET', expect: signedIn(200), prepare: async () => ({ path: '/api/species?q=water&phase=l&page=1' }) },
+  { route: 'species', method: 'POST', expect: editorsOwnTeam(201), prepare: async () => ({ body: speciesInput() }) },
+  { route: 'species/[key]', method: 'GET', expect: signedIn(200), prepare: async () => ({ params: { key: 'H2O(l)' } }) },
+  { route: 'species/impact', method: 'POST', expect: editorsOwnTeam(200), prepare: async () => ({ body: { species: speciesInput() } }) },
+  { route: 'species/team/[teamSpeciesId]', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: { teamSpeciesId: String((await makeTeamSpecies(w)).id) } }) },
+  {
+    route: 'species/team/[teamSpeciesId]', method: 'PUT', expect: editorsOfResource(200),
+    prepare: async (w) => {
+      const made = await makeTeamSpecies(w);
+      return { params: { teamSpeciesId: String(made.id) }, body: { version: made.version, species: { ...speciesInput(), notes: 'Edited.' } } };
+    },
+  },
+  { route: 'species/imports', method: 'GET', expect: signedIn(200) },
+  { route: 'species/imports', method: 'POST', expect: editorsOwnTeam(201), prepare: async () => ({ rawBody: `${CSV_HEADER}\n${csvRow()}\n`, headers: { 'content-type': 'text/csv' } }) },
+  { route: 'species/imports/[importId]', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: { importId: String((await uploadCsv(w.teamId, w.leadId, `${CSV_HEADER}\n${csvRow()}\n`)).id) } }) },
+  { route: 'species/imports/[importId]/commit', method: 'POST', expect: editorsOfResource(200), prepare: async (w) => ({ params: { importId: String((await uploadCsv(w.teamId, w.leadId, `${CSV_HEADER}\n${csvRow()}\n`)).id) }, body: {} }) },
+  { route: 'species/imports/[importId]/file', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: { importId: String((await uploadCsv(w.teamId, w.leadId, `${CSV_HEADER}\n${csvRow()}\n`)).id) } }) },
   // Data fits: a foreign caller's active team is their own, so the main team's data sets and fits are 404 there.
   { route: 'fits/data-sets', method: 'GET', expect: signedIn(200) },
   { route: 'fits/data-sets', method: 'POST', expect: editorsOwnTeam(201), prepare: async () => ({ body: { name: 'Typed set', source: 'grid', rows: [{ T: '300', value: '2' }, { T: '400', value: '5' }, { T: '500', value: '9' }] } }) },
