@@ -40,6 +40,15 @@ export const DataSetInput = z
   });
 export type DataSetInput = z.infer<typeof DataSetInput>;
 
+// The /fits editor: every source's fields at once; the page sends `text` or `rows` as the source needs.
+export const DataSetForm = z.strictObject({
+  ...DataSetFields,
+  source: z.enum(DATA_SOURCES),
+  text: z.string().max(MAX_DATA_TEXT_BYTES, { message: 'The table is over 256 KB; split it or trim unused columns.' }),
+  rows: z.array(DataRowInput).max(MAX_DATA_POINTS),
+});
+export type DataSetForm = z.input<typeof DataSetForm>;
+
 export const DataSetUpdate = z.strictObject({ ...DataSetFields, rows: z.array(DataRowInput).max(MAX_DATA_POINTS) });
 export type DataSetUpdate = z.infer<typeof DataSetUpdate>;
 
