@@ -279,6 +279,21 @@ const TABLE: Row[] = [
       return { params: { token }, body: { password: 'a-fresh-password-1' } };
     },
   },
+  // Team export/import (lead only). Import needs an empty team: each call gets a new one whose lead is the caller's role stand-in.
+  { route: 'teams/[teamId]/export', method: 'GET', expect: leadOnly(200), prepare: async (w) => ({ params: { teamId: String(w.teamId) } }) },
+  {
+    route: 'teams/[teamId]/import', method: 'POST', expect: leadOnly(201),
+    prepare: async (w, caller) => {
+      const { makeTeamWithLead } = await import('./support/fixtures');
+      const fresh = await makeTeamWithLead('import-target');
+      // The caller joins the empty team in the same role it has in the main team; the foreign caller stays outside it.
+      const roles = { reviewer: 'reviewer', designer: 'designer', lead: 'lead' } as const;
+      const userId = { reviewer: w.reviewerId, designer: w.designerId, lead: w.leadId }[caller as 'reviewer'];
+      if (caller in roles) await getDb().models.Membership.create({ teamId: fresh.teamId, userId, role: roles[caller as keyof typeof roles] });
+      const file = { format: 'stepwell.team/1', exportedAt: new Date().toISOString(), team: { id: 1, name: 'Empty' }, people: [], tables: {} };
+      return { params: { teamId: String(fresh.teamId) }, body: file };
+    },
+  },
 ];
 
 let dir = '';

@@ -1,0 +1,164 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { getDb } from '@/db';
+import { POST as evaluateRoute } from '@/app/api/routes/[routeId]/evaluate/route';
+import { GET as exportTeamRoute } from '@/app/api/teams/[teamId]/export/route';
+import { POST as importTeamRoute } from '@/app/api/teams/[teamId]/import/route';
+import { createComment } from '@/lib/services/comments/create-comment';
+import { recordDecision } from '@/lib/services/decisions/record-decision';
+import { listDrivers } from '@/lib/services/drivers/list-drivers';
+import { createFlag } from '@/lib/services/flags/create-flag';
+import { createTeamSpecies } from '@/lib/services/species/create-team-species';
+import { transitionRoute } from '@/lib/services/workflow/transition-route';
+import { makeRoute, makeTeamWithLead } from './support/fixtures';
+import { callRoute, errorOf } from './support/http';
+import { makeReviewTeam, startMailbox, type ReviewTeam } from './support/review-team';
+import { setupTestDb, teardownTestDb } from './support/test-db';
+
+let dir = '';
+let smtp: { close: () => Promise<void> };
+let team: ReviewTeam;
+let file: { tables: Record<string, Record<string, unknown>[]>; people: { email: string }[]; format: string };
+
+beforeAll(async () => {
+  ({ dir } = await setupTestDb());
+  smtp = await startMailbox();
+  team = await makeReviewTeam();
+  // A team species changes the evaluation, so equal evaluations after import show it came along.
+  await createTeamSpecies({
+    teamId: team.teamId,
+    userId: team.designerId,
+    input: {
+      formula: 'CH3OH', phase: 'g', name: 'Methanol (team value)', dfH: -205, S: 240,
+      provenance: { kind: 'estimated', method: 'Round-trip test value, not a recommended one' },
+    },
+  });
+  const a = await makeRoute(team.teamId, team.designerId);
+  const b = await makeRoute(team.teamId, team.designerId);
+  await listDrivers({ teamId: team.teamId });
+  const asked = await createComment({ teamId: team.teamId, routeId: a.id, userId: team.reviewerId, input: { body: 'Is 1100 K needed, @baptiste.osei?', stepKey: 's1' } });
+  await createComment({ teamId: team.teamId, routeId: a.id, userId: team.designerId, input: { body: 'It keeps methane slip low.', parentId: asked.id } });
+  await createFlag({ teamId: team.teamId, routeId: a.id, userId: team.reviewerId, input: { stepKey: 's1', category: 'safety', reason: 'Hot hydrogen at 1100 K.' } });
+  await transitionRoute({ teamId: team.teamId, userId: team.designerId, role: 'designer', routeId: b.id, input: { to: 'in_review', note: '', reviewerIds: [team.reviewerId], version: b.version } });
+  await recordDecision({ teamId: team.teamId, userId: team.leadId, role: 'lead', input: { routeIds: [a.id, b.id], chosenRouteId: a.id, rationale: 'Fewer uphill steps.', shelveOthers: false } });
+
+  const res = await callRoute(exportTeamRoute, { userId: team.leadId, params: { teamId: String(team.teamId) } });
+  expect(res.status).toBe(200);
+  expect(res.headers.get('content-disposition')).toMatch(/attachment; filename="stepwell-team-\d+-\d{4}-\d{2}-\d{2}\.json"/);
+  file = res.body as typeof file;
+});
+afterAll(async () => {
+  await smtp.close();
+  await teardownTestDb(dir);
+});
+
+async function evaluations(teamId: number, userId: number) {
+  const routes = await getDb().models.Route.findAll({ where: { teamId }, order: [['id', 'ASC']] });
+  const out = [];
+  for (const route of routes) {
+    const res = await callRoute(evaluateRoute, { method: 'POST', userId, params: { routeId: String(route.id) } });
+    expect(res.status).toBe(200);
+    out.push({ name: route.name, status: route.status, evaluation: res.body });
+  }
+  // Species provenance names the team species row, whose id differs between the teams.
+  return JSON.parse(JSON.stringify(out).replace(/team species #\d+/g, 'team species #n')) as unknown;
+}
+
+async function teamCounts(teamId: number) {
+  const { Route, RouteRevision, Comment, StepFlag, Decision, RouteTransition, TeamSpecies } = getDb().models;
+  return {
+    routes: await Route.count({ where: { teamId } }),
+    revisions: await RouteRevision.count({ where: { teamId } }),
+    comments: await Comment.count({ where: { teamId } }),
+    flags: await StepFlag.count({ where: { teamId } }),
+    decisions: await Decision.count({ where: { teamId } }),
+    transitions: await RouteTransition.count({ where: { teamId } }),
+    species: await TeamSpecies.count({ where: { teamId } }),
+  };
+}
+
+describe('team export and import', () => {
+  it('exports every team table with the people it names', () => {
+    expect(file.format).toBe('stepwell.team/1');
+    for (const table of ['routes', 'steps', 'step_links', 'route_revisions', 'route_transitions', 'route_reviewers', 'comments', 'step_flags', 'decisions', 'driver_reactions', 'team_species']) {
+      expect(file.tables[table]?.length, table).toBeGreaterThan(0);
+    }
+    expect(file.people.map((p) => p.email).sort()).toEqual([team.email.designer, team.email.lead, team.email.reviewer].sort());
+    expect(JSON.stringify(file)).not.toMatch(/password_hash|session_epoch/);
+  });
+
+  it('imports into an empty team: same routes, evaluations, review and decisions', async () => {
+    const target = await makeTeamWithLead('restored');
+    await listDrivers({ teamId: target.teamId }); // a new team's default drivers do not make it "not empty"
+    const res = await callRoute(importTeamRoute, { method: 'POST', userId: target.leadId, params: { teamId: String(target.teamId) }, body: file });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    expect(res.body).toMatchObject({ counts: { routes: 2 }, unmatchedPeople: [] });
+
+    expect(await teamCounts(target.teamId)).toEqual(await teamCounts(team.teamId));
+    const evaluated = await evaluations(target.teamId, target.leadId);
+    expect(JSON.stringify(evaluated)).toContain('team species #n');
+    expect(evaluated).toEqual(await evaluations(team.teamId, team.leadId));
+
+    const { Route, Decision, Comment, DriverReaction } = getDb().models;
+    const newRoutes = (await Route.findAll({ where: { teamId: target.teamId }, order: [['id', 'ASC']] })).map((r) => r.id);
+    const decision = await Decision.findOne({ where: { teamId: target.teamId } });
+    expect(decision!.routeIds).toEqual(newRoutes);
+    expect(decision!.chosenRouteId).toBe(newRoutes[0]);
+    const reply = await Comment.findOne({ where: { teamId: target.teamId, body: 'It keeps methane slip low.' } });
+    const root = await Comment.findByPk(reply!.parentId!);
+    expect(root!.body).toContain('Is 1100 K needed');
+    expect(root!.mentions).toEqual([{ userId: team.designerId, handle: 'baptiste.osei' }]);
+    expect(await DriverReaction.count({ where: { teamId: target.teamId } })).toBe(await DriverReaction.count({ where: { teamId: team.teamId } }));
+    // The source team is untouched.
+    expect((await Route.findAll({ where: { teamId: team.teamId } })).every((r) => !newRoutes.includes(r.id))).toBe(true);
+  });
+
+  it('refuses a team that already has routes with 409, and changes nothing', async () => {
+    const busy = await makeTeamWithLead('busy');
+    await makeRoute(busy.teamId, busy.leadId);
+    const before = await teamCounts(busy.teamId);
+    const res = await callRoute(importTeamRoute, { method: 'POST', userId: busy.leadId, params: { teamId: String(busy.teamId) }, body: file });
+    expect(res.status).toBe(409);
+    expect(errorOf(res.body).code).toBe('CONFLICT');
+    expect(await teamCounts(busy.teamId)).toEqual(before);
+  });
+
+  it('answers malformed files with 400 and creates nothing', async () => {
+    const target = await makeTeamWithLead('malformed');
+    const empty = await teamCounts(target.teamId);
+    const clone = () => JSON.parse(JSON.stringify(file)) as typeof file;
+    const brokenStep = clone();
+    brokenStep.tables.steps![0]!.route_id = 987654;
+    const unknownColumn = clone();
+    unknownColumn.tables.routes![0]!.secret_column = 1;
+    const unknownTable = clone();
+    unknownTable.tables.users = [{ id: 1 }];
+    const missingName = clone();
+    delete missingName.tables.routes![1]!.name;
+    const cases: Array<[string, unknown]> = [
+      ['wrong format', { ...clone(), format: 'something-else/1' }],
+      ['not an object', [1, 2, 3]],
+      ['step of a route not in the file', brokenStep],
+      ['unknown column', unknownColumn],
+      ['unknown table', unknownTable],
+      ['required column missing', missingName],
+    ];
+    for (const [label, body] of cases) {
+      const res = await callRoute(importTeamRoute, { method: 'POST', userId: target.leadId, params: { teamId: String(target.teamId) }, body });
+      expect(res.status, label).toBe(400);
+      expect(errorOf(res.body), label).toMatchObject({ code: 'VALIDATION', message: expect.any(String) });
+      expect(await teamCounts(target.teamId), label).toEqual(empty);
+    }
+    const raw = await callRoute(importTeamRoute, { method: 'POST', userId: target.leadId, params: { teamId: String(target.teamId) }, rawBody: '{"format":', headers: { 'content-type': 'application/json' } });
+    expect(raw.status).toBe(400);
+  });
+
+  it('maps people without an account here to the importing lead or to nobody', async () => {
+    const target = await makeTeamWithLead('strangers');
+    const renamed = JSON.parse(JSON.stringify(file).replaceAll(team.email.designer, 'someone.new@elsewhere.example')) as typeof file;
+    const res = await callRoute(importTeamRoute, { method: 'POST', userId: target.leadId, params: { teamId: String(target.teamId) }, body: renamed });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    expect(res.body).toMatchObject({ unmatchedPeople: ['someone.new@elsewhere.example'] });
+    const routes = await getDb().models.Route.findAll({ where: { teamId: target.teamId } });
+    expect(routes.every((r) => r.createdById === target.leadId)).toBe(true);
+  });
+});
