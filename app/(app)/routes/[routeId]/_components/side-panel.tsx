@@ -10,6 +10,7 @@ import type { StepInput } from '@/lib/schemas/route';
 import type { RouteEvaluateResponse, RouteStepResult } from '@/lib/thermo/route';
 import { useRouteEditorStore } from '@/stores/route-editor-store';
 import { RouteSettingsForm } from './route-settings-form';
+import { FitPicker } from '@/app/(app)/fits/_components/fit-picker';
 import { StepForm } from './step-form';
 import { StepLinks } from './step-links';
 import { StepResult } from './step-result';
@@ -99,6 +100,9 @@ export function SidePanel({
         </div>
       </div>
       <StepForm key={step.id} step={step} units={formUnits} canEdit={canEdit} onChange={handleStepChange} />
+      <fieldset disabled={!canEdit}>
+        <FitPicker value={step.fitId ?? null} onChange={(fitId) => handleStepChange({ fitId }, 'fitId')} />
+      </fieldset>
       <StepResult result={results.get(step.id)} energyUnit={units.energyUnit} temperatureUnit={units.temperatureUnit} />
       <StepLinks step={step} steps={others} links={links} stepLabels={stepLabels} canEdit={canEdit} onAddLink={addLink} onRemoveLink={removeLink} />
     </aside>
