@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import localFont from 'next/font/local';
+import { connection } from 'next/server';
 import type { ReactNode } from 'react';
 import { Providers } from './providers';
 import './globals.css';
@@ -13,7 +14,9 @@ export const metadata: Metadata = {
   description: 'Free-energy screening of multi-step synthesis routes, step by step, at your own conditions.',
 };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  // Rendered per request, never prerendered: the CSP nonce from proxy.ts exists only at request time.
+  await connection();
   return (
     <html lang="en" className={`${body.variable} ${greek.variable}`}>
       <body className="min-h-screen bg-paper font-sans text-ink antialiased">
