@@ -1,0 +1,57 @@
+'use client';
+
+import type { ColumnDef } from '@tanstack/react-table';
+import Link from 'next/link';
+import type { SpeciesRowDto } from '@/lib/services/species/species-dto';
+
+export const PHASE_WORDS: Record<string, string> = { g: 'gas', l: 'liquid', s: 'solid', aq: 'aqueous' };
+
+export function formatNumber(x: number | null | undefined, digits = 2): string {
+  if (x === null || x === undefined) return '—';
+  return x.toLocaleString('en-GB', { minimumFractionDigits: digits, maximumFractionDigits: digits }).replace('-', '−');
+}
+
+export const speciesHref = (key: string) => `/species/${encodeURIComponent(key)}`;
+
+/** Built-in or the team's, always in words as well as colour. */
+export function OriginBadge({ row }: { row: Pick<SpeciesRowDto, 'origin' | 'overridesBuiltin' | 'shadowedByTeam'> }) {
+  if (row.origin === 'team') {
+    return (
+      <span className="flex flex-col items-start gap-0.5">
+        <span className="rounded bg-brass-100 px-1.5 py-0.5 text-xs font-medium text-brass-700">Team</span>
+        {row.overridesBuiltin ? <span className="text-xs font-medium text-marginal">overrides built-in</span> : null}
+      </span>
+    );
+  }
+  return (
+    <span className="flex flex-col items-start gap-0.5">
+      <span className="rounded bg-paper-deep px-1.5 py-0.5 text-xs text-ink-soft">Built-in</span>
+      {row.shadowedByTeam ? <span className="text-xs text-ink-faint">replaced by your team’s</span> : null}
+    </span>
+  );
+}
+
+// Paged and ordered by formula on the server, so no column sorts here.
+export function speciesColumns(): ColumnDef<SpeciesRowDto>[] {
+  return [
+    {
+      id: 'formula',
+      header: 'Formula',
+      enableSorting: false,
+      cell: ({ row }) => (
+        <Link href={speciesHref(row.original.key)} className="font-medium text-pine-700 underline-offset-2 hover:underline" aria-label={`${row.original.key}: values, plot and routes`}>
+          {row.original.key}
+        </Link>
+      ),
+    },
+    { id: 'name', header: 'Name', enableSorting: false, cell: ({ row }) => row.original.name },
+    { id: 'phase', header: 'Phase', enableSorting: false, cell: ({ row }) => row.original.form ?? PHASE_WORDS[row.original.phase] ?? row.original.phase },
+    { id: 'dfH', header: 'ΔfH° kJ/mol', enableSorting: false, cell: ({ row }) => formatNumber(row.original.dfH_kJ) },
+    { id: 'dfG', header: 'ΔfG° kJ/mol', enableSorting: false, cell: ({ row }) => formatNumber(row.original.dfG_kJ) },
+    { id: 'S', header: 'S° J/(mol K)', enableSorting: false, cell: ({ row }) => formatNumber(row.original.S_J_per_K) },
+    { id: 'source', header: 'Source', enableSorting: false, cell: ({ row }) => <span className="line-clamp-2 max-w-64 text-ink-soft">{row.original.source}</span> },
+    { id: 'origin', header: 'Origin', enableSorting: false, cell: ({ row }) => <OriginBadge row={row.original} /> },
+  ];
+}
+
+export const SPECIES_NUMERIC_COLUMNS = ['dfH', 'dfG', 'S'];
