@@ -1,6 +1,16 @@
 import { ClassBadge } from '@/components/ladder/class-badge';
 import { formatEnergy, formatNumber, formatTemperature, type EnergyUnit, type TemperatureUnit } from '@/components/ladder/energy-format';
+import type { EvaluateResponse } from '@/lib/thermo';
 import type { RouteStepResult } from '@/lib/thermo/route';
+
+/** Where the step's ΔH° and ΔS° came from: a saved fit, the team's own species, or the built-in library. */
+export function dataSourceText(engine: EvaluateResponse): string {
+  if (engine.override) return engine.override.source;
+  const team = engine.species.filter((s) => s.origin === 'team');
+  if (team.length === 0) return 'the species library';
+  const names = team.map((s) => `${s.key}${s.override ? ' (overrides the library)' : ''}`).join(', ');
+  return `team species ${names}; the rest from the library`;
+}
 
 function Fact({ term, value }: { term: string; value: string }) {
   return (
@@ -34,6 +44,18 @@ export function StepResult({ result, energyUnit, temperatureUnit }: { result: Ro
           <Fact term="Extent for the target" value={result.extent_mol === null ? 'not on the path' : `${formatNumber(result.extent_mol)} mol`} />
           <Fact term="Share of route ΔG" value={formatEnergy(result.deltaG_kJ, energyUnit)} />
         </dl>
+      ) : null}
+      {engine ? (
+        <p className="text-ink-soft" data-testid="step-data-source">
+          ΔH° and ΔS° from {dataSourceText(engine)}.
+        </p>
+      ) : null}
+      {engine?.warnings.length ? (
+        <ul className="list-disc pl-4 text-marginal" aria-label="Engine notes on this step">
+          {engine.warnings.map((w, i) => (
+            <li key={`${w.code}-${i}`}>{w.message}</li>
+          ))}
+        </ul>
       ) : null}
     </section>
   );
