@@ -54,8 +54,9 @@ const PARAM_MAKERS: Record<string, ParamMaker> = {
   fitId: async (w) => String((await makeFit(w.teamId, w.leadId)).id),
   teamSpeciesId: async (w) => {
     const { createTeamSpecies } = await import('@/lib/services/species/create-team-species');
-    return String((await createTeamSpecies({ teamId: w.teamId, userId: w.leadId, input: SPECIES_INPUT })).id);
+    return String((await createTeamSpecies({ teamId: w.teamId, userId: w.leadId, input: speciesInput() })).id);
   },
+  key: async () => 'H2O(g)',
   // These handlers take the team from the session and parse the body before the lookup, so a missing id still fuzzes the body.
   importId: async () => '987654321',
   decisionId: async (w) => {
@@ -87,10 +88,10 @@ export async function makeParams(route: string, w: FuzzWorld): Promise<Params> {
 
 type SeedBody = (w: FuzzWorld, params: Params) => Promise<unknown> | unknown;
 
-// A fuzz input only: made-up values, not reference data.
-const SPECIES_INPUT = {
-  formula: 'C9H8O4', phase: 's' as const, name: `Fuzz solid ${unique()}`, dfH: -500, S: 200, provenance: { kind: 'estimated' as const, method: 'Fuzz input, not a measurement' },
-};
+// A fuzz input only: made-up values, not reference data. The formula varies so a team can hold several.
+const speciesInput = () => ({
+  formula: `C${10 + (seq += 1)}H8O4`, phase: 's' as const, name: `Fuzz solid ${unique()}`, dfH: -500, S: 200, provenance: { kind: 'estimated' as const, method: 'Fuzz input, not a measurement' },
+});
 
 const steps = SAMPLE_STEPS.map((s) => ({ ...s }));
 const draft = { name: 'Fuzz draft', target: 'CH3OH(g)', targetAmount: '1 mol', marginalThreshold_kJ: -17, steps, links: SAMPLE_LINKS };
@@ -132,9 +133,9 @@ export const SEED_BODIES: Record<string, SeedBody> = {
   'PUT fits/data-sets/[dataSetId]/exclusions': () => ({ exclusions: [{ index: 0, reason: 'Thermostat drifted.' }] }),
   'POST fits': async (w) => ({ dataSetId: (await makeDataSet(w.teamId, w.leadId)).id, name: 'Saved' }),
   'POST fits/[fitId]/species': () => ({ species: 'NO2(g)', name: 'Nitrogen dioxide (fitted)' }),
-  'POST species': () => ({ ...SPECIES_INPUT, name: `Fuzz solid ${unique()}` }),
-  'PUT species/team/[teamSpeciesId]': () => ({ version: 1, species: SPECIES_INPUT }),
-  'POST species/impact': () => ({ species: SPECIES_INPUT }),
+  'POST species': () => speciesInput(),
+  'PUT species/team/[teamSpeciesId]': () => ({ version: 1, species: speciesInput() }),
+  'POST species/impact': () => ({ species: speciesInput() }),
   'POST species/imports/[importId]/commit': () => ({ choices: { 'C9H8O4(s)': 'skip' }, otherwise: 'override' }),
   // Another team's export, with one route: the caller's team holds no data yet, so the import may succeed once.
   'POST teams/[teamId]/import': async () => {
