@@ -1,5 +1,5 @@
 import 'server-only';
-import { Op } from 'sequelize';
+import { Op, Transaction } from 'sequelize';
 import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
 import { TEAM_EXPORT_FORMAT, type TeamExportFile } from '../../schemas/team-transfer';
@@ -14,10 +14,11 @@ function toCell(value: unknown): Cell {
   return JSON.stringify(value);
 }
 
-// Reads every team table inside one transaction, so the file is one consistent moment of the team.
+// Reads every team table inside one read transaction, so the file is one consistent moment of the team. DEFERRED (not the
+// app's usual IMMEDIATE) takes no write lock, so saves go on while a large team is exported.
 export async function exportTeam({ teamId }: { teamId: number }): Promise<TeamExportFile> {
   const { sequelize, models } = getDb();
-  return sequelize.transaction(async (transaction) => {
+  return sequelize.transaction({ type: Transaction.TYPES.DEFERRED }, async (transaction) => {
     const team = await models.Team.findByPk(teamId, { transaction });
     if (!team) throw new AppError('NOT_FOUND', 'No such team.');
     const tables = await transferTables(sequelize, transaction);
