@@ -74,4 +74,25 @@ export type SpeciesImportCommit = z.infer<typeof SpeciesImportCommit>;
 
 /** "What would change": the species as it would be saved, and the team species it would replace (none for a new one). */
 export const SpeciesImpactRequest = z.strictObject({ species: TeamSpeciesInput, teamSpeciesId: z.number().int().positive().nullable().default(null) });
-export type SpeciesImpactRequest = z.infer<typeof SpeciesImpactRequest>;
+export type SpeciesImpactRequest = z.input<typeof SpeciesImpactRequest>;
+
+/** The form's shape: one provenance text whose meaning follows the kind; `toTeamSpeciesInput` makes the API body. */
+export const TeamSpeciesForm = TeamSpeciesInput.omit({ provenance: true }).extend({
+  provenanceKind: z.enum(['citation', 'measured', 'estimated'], { message: 'Say where the values come from.' }),
+  provenanceText: z.string().trim().max(500),
+  fitId: z.number().int().positive().nullable().default(null),
+}).superRefine((v, ctx) => {
+  if (v.provenanceText.length >= 3) return;
+  const message = { citation: 'Give the citation the values come from.', measured: 'Name the data set or notebook page of the measurement.', estimated: 'Name the estimation method.' }[v.provenanceKind];
+  ctx.addIssue({ code: 'custom', path: ['provenanceText'], message });
+});
+export type TeamSpeciesForm = z.input<typeof TeamSpeciesForm>;
+
+export function toTeamSpeciesInput(form: z.output<typeof TeamSpeciesForm>): TeamSpeciesInput {
+  const { provenanceKind, provenanceText, fitId, ...rest } = form;
+  const provenance: SpeciesProvenanceInput =
+    provenanceKind === 'citation' ? { kind: 'citation', citation: provenanceText }
+      : provenanceKind === 'measured' ? { kind: 'measured', reference: provenanceText, fitId }
+        : { kind: 'estimated', method: provenanceText };
+  return { ...rest, provenance };
+}
