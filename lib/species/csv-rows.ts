@@ -5,10 +5,10 @@ import { TeamSpeciesInput, type TeamSpeciesValues } from '../schemas/species';
 import { buildSpecies, type BuiltSpecies } from './build-species';
 import type { ConsistencyResult } from './consistency';
 import { readHeader, type Column, type ColumnField } from './csv-columns';
+import { MAX_IMPORT_ROWS } from './import-limits';
 import { readEnergyUnit, readEntropyUnit, toJPerMolK, toKJPerMol, type EnergyUnit, type EntropyUnit } from './units';
 
-export const MAX_IMPORT_BYTES = 2 * 1024 * 1024;
-export const MAX_IMPORT_ROWS = 5000;
+export { MAX_IMPORT_BYTES, MAX_IMPORT_ROWS } from './import-limits';
 
 export interface CheckedRow {
   /** data row number: 1 is the first row after the header (blank lines are not counted) */
