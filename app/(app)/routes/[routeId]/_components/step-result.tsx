@@ -8,7 +8,7 @@ export function dataSourceText(engine: EvaluateResponse): string {
   if (engine.override) return engine.override.source;
   const team = engine.species.filter((s) => s.origin === 'team');
   if (team.length === 0) return 'the species library';
-  const names = team.map((s) => `${s.key}${s.override ? ' (overrides the library)' : ''}`).join(', ');
+  const names = team.map((s) => `${s.key}${s.override ? ', overriding the library,' : ''} (${s.source})`).join('; ');
   return `team species ${names}; the rest from the library`;
 }
 
