@@ -9,7 +9,7 @@ import { resetTokenStatus } from '@/lib/services/password-reset/reset-password';
 import { authenticateUser } from '@/lib/services/users/authenticate-user';
 import { mailTo, startMailbox } from './support/review-team';
 import { makeTeamWithLead } from './support/fixtures';
-import { callRoute, errorOf } from './support/http';
+import { callRoute, errorOf, sessionCookie } from './support/http';
 import { setupTestDb, teardownTestDb } from './support/test-db';
 
 let dir = '';
@@ -49,7 +49,8 @@ function tokenOf(mail: { text: string }): string {
 describe('password reset', () => {
   it('mails a single-use link; the new password works, the old does not, and old sessions end', async () => {
     const lead = await makeTeamWithLead('reset');
-    const before = await callRoute(me, { userId: lead.leadId });
+    const oldCookie = await sessionCookie(lead.leadId);
+    const before = await callRoute(me, { headers: { cookie: oldCookie } });
     expect(before.status).toBe(200);
 
     const res = await ask(lead.leadEmail);
@@ -74,8 +75,10 @@ describe('password reset', () => {
     expect(await authenticateUser({ email: lead.leadEmail, password: 'a-strong-password-1' })).toBeNull();
 
     // The session cookie made before the reset no longer works.
-    const after = await callRoute(me, { userId: lead.leadId });
+    const after = await callRoute(me, { headers: { cookie: oldCookie } });
     expect(after.status).toBe(401);
+    // A sign-in after the reset works.
+    expect((await callRoute(me, { userId: lead.leadId })).status).toBe(200);
 
     const again = await callRoute(resetWithToken, { method: 'POST', params: { token }, body: { password: 'yet-another-password' } });
     expect(again.status).toBe(410);
