@@ -52,6 +52,8 @@ export function TeamSpeciesFormView({ existing }: { existing?: TeamSpeciesDto })
   const [formError, setFormError] = useState<string | null>(null);
   const [impact, setImpact] = useState<{ list: RouteImpact[]; done: boolean } | null>(null);
   const [saved, setSaved] = useState<{ key: string; warnings: string[] } | null>(null);
+  // The version this form last saw; a save moves it on, so a second save in a row is not refused as stale.
+  const [version, setVersion] = useState(existing?.version ?? 0);
   const { register, handleSubmit, setError, watch, formState } = useForm<FormValues>({
     resolver: zodResolver(FormSchema),
     defaultValues: existing ? toFormValues(existing) : BLANK,
@@ -67,7 +69,8 @@ export function TeamSpeciesFormView({ existing }: { existing?: TeamSpeciesDto })
     try {
       const input = toTeamSpeciesInput(FormSchema.parse(values));
       if (existing) {
-        const answer = await updateTeamSpecies(existing.id, existing.version, input);
+        const answer = await updateTeamSpecies(existing.id, version, input);
+        setVersion(answer.species.version);
         setImpact({ list: answer.impact, done: true });
         setSaved({ key: answer.species.key, warnings: answer.warnings });
       } else {

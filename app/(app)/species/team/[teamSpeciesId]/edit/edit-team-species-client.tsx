@@ -10,7 +10,8 @@ import { EditorsOnly } from '../../../_components/editors-only';
 import { TeamSpeciesFormView } from '../../../_components/team-species-form';
 
 export function EditTeamSpeciesClient({ id }: { id: number }) {
-  const species = useQuery(teamSpeciesQuery(id));
+  // Read once: refetching after a save would reset the form and hide what the save changed.
+  const species = useQuery({ ...teamSpeciesQuery(id), staleTime: Infinity, refetchOnWindowFocus: false });
   if (species.isPending) return <p className="py-6 text-sm text-ink-soft" role="status">Loading the species…</p>;
   if (species.isError) {
     return (
@@ -23,8 +24,7 @@ export function EditTeamSpeciesClient({ id }: { id: number }) {
     <>
       <PageHeader title={`Edit ${species.data.key}`} lead="Saving changes the values every evaluation of your team uses from now on. Check first which routes would change." />
       <EditorsOnly>
-        {/* Keyed by version: after a save elsewhere the form starts from the new values. */}
-        <TeamSpeciesFormView key={species.data.version} existing={species.data} />
+        <TeamSpeciesFormView existing={species.data} />
       </EditorsOnly>
     </>
   );
