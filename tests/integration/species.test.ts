@@ -113,6 +113,10 @@ describe('team species', () => {
     expect(d.builtinSeries).not.toBeNull();
     expect(d.series.range_K).toEqual([198.15, 398.15]); // no Cp° given: our convention, 298.15 ± 100 K
     expect(d.routes).toEqual([expect.objectContaining({ routeId: route.id, stepKeys: ['s2'] })]);
+    // A route saved since is seen at once (the usage index follows the team's routes).
+    const later = await makeRoute(w.teamId, w.leadId);
+    const again = (await callRoute(speciesDetail.GET, { userId: w.reviewerId, params: { key: 'CH3OH(g)' } })).body as typeof d;
+    expect(again.routes.map((r) => r.routeId).sort()).toEqual([route.id, later.id].sort());
     const foreign = (await callRoute(speciesDetail.GET, { userId: w.foreignId, params: { key: 'CH3OH(g)' } })).body as { inUse: string; routes: unknown[] };
     expect(foreign).toMatchObject({ inUse: 'library', routes: [] });
     expect((await callRoute(speciesDetail.GET, { userId: w.reviewerId, params: { key: 'Xx9(g)' } })).status).toBe(404);

@@ -1,5 +1,5 @@
 import 'server-only';
-import type { Transaction } from 'sequelize';
+import { col, fn, type Transaction } from 'sequelize';
 import { getDb } from '../../../db';
 import { isThermoError } from '../../thermo/errors';
 import { resolveReaction } from '../../thermo/resolve-reaction';
@@ -13,8 +13,39 @@ export interface SpeciesUse {
   stepKeys: string[];
 }
 
+// Reading every step of a large team is the slow part, so the whole index is kept per lookup (lookups are
+// replaced, never changed) and per state of the team's routes (every save or delete moves the stamp).
+const indexes = new WeakMap<SpeciesLookup, Map<number, { stamp: string; index: Map<string, SpeciesUse[]> }>>();
+
+async function routesStamp(teamId: number): Promise<string> {
+  const row = (await getDb().models.Route.findOne({
+    attributes: [[fn('COUNT', col('id')), 'n'], [fn('MAX', col('updated_at')), 'at'], [fn('MAX', col('id')), 'last']],
+    where: { teamId, deletedAt: null },
+    raw: true,
+  })) as unknown as { n: number; at: string | null; last: number | null } | null;
+  return row ? `${row.n}|${row.at}|${row.last}` : '0';
+}
+
 /** The team's routes (not deleted) whose steps use each species key, read through the team's lookup. */
 export async function speciesUses({ teamId, lookup, keys, transaction }: { teamId: number; lookup: SpeciesLookup; keys?: ReadonlySet<string>; transaction?: Transaction }): Promise<Map<string, SpeciesUse[]>> {
+  // Inside a transaction the rows may be uncommitted: read them fresh and keep nothing.
+  if (transaction) return pick(await buildIndex(teamId, lookup, transaction), keys);
+  const stamp = await routesStamp(teamId);
+  const perTeam = indexes.get(lookup) ?? new Map<number, { stamp: string; index: Map<string, SpeciesUse[]> }>();
+  indexes.set(lookup, perTeam);
+  const hit = perTeam.get(teamId);
+  if (hit && hit.stamp === stamp) return pick(hit.index, keys);
+  const index = await buildIndex(teamId, lookup);
+  perTeam.set(teamId, { stamp, index });
+  return pick(index, keys);
+}
+
+function pick(index: Map<string, SpeciesUse[]>, keys?: ReadonlySet<string>): Map<string, SpeciesUse[]> {
+  if (!keys) return index;
+  return new Map([...keys].filter((k) => index.has(k)).map((k) => [k, index.get(k)!]));
+}
+
+async function buildIndex(teamId: number, lookup: SpeciesLookup, transaction?: Transaction): Promise<Map<string, SpeciesUse[]>> {
   const { Route, Step } = getDb().models;
   const routes = await Route.findAll({
     where: { teamId, deletedAt: null },
@@ -37,7 +68,6 @@ export async function speciesUses({ teamId, lookup, keys, transaction }: { teamI
         throw error;
       }
       for (const key of speciesKeys) {
-        if (keys && !keys.has(key)) continue;
         byKey.set(key, [...(byKey.get(key) ?? []), step.stepKey]);
       }
     }
