@@ -15,13 +15,22 @@ export async function createRoute(session: Session, name: string): Promise<{ id:
 
 export type SaveOutcome = { kind: 'saved'; version: number } | { kind: 'stale'; code: string } | { kind: 'other'; status: number; text: string };
 
+/** How long a save may take before the spec calls it hung: a user would have given up long before. */
+export const SAVE_DEADLINE_MS = 15_000;
+
 /** One whole-document save against `version`: saved (with the new version), stale (409) or anything else. */
 export async function saveRoute(session: Session, routeId: number, version: number, marker: number): Promise<SaveOutcome> {
-  const res = await session.fetch(`/api/routes/${routeId}`, {
-    method: 'PUT',
-    body: { version, name: `Contended route, save ${marker}`, target: 'CH3OH(g)', targetAmount: '1 mol', marginalThreshold_kJ: -17, steps: SAVE_STEPS(marker), links: LINKS },
-  });
-  const text = await res.text();
+  let timer: NodeJS.Timeout | undefined;
+  const deadline = new Promise<null>((resolve) => (timer = setTimeout(() => resolve(null), SAVE_DEADLINE_MS)));
+  const put = session
+    .fetch(`/api/routes/${routeId}`, {
+      method: 'PUT',
+      body: { version, name: `Contended route, save ${marker}`, target: 'CH3OH(g)', targetAmount: '1 mol', marginalThreshold_kJ: -17, steps: SAVE_STEPS(marker), links: LINKS },
+    })
+    .then(async (res) => ({ res, text: await res.text() }));
+  const answered = await Promise.race([put, deadline]).finally(() => clearTimeout(timer));
+  if (!answered) return { kind: 'other', status: 0, text: `no answer within ${SAVE_DEADLINE_MS} ms` };
+  const { res, text } = answered;
   if (res.status === 200) return { kind: 'saved', version: (JSON.parse(text) as { route: { version: number } }).route.version };
   if (res.status === 409) return { kind: 'stale', code: (JSON.parse(text) as { error: { code: string } }).error.code };
   return { kind: 'other', status: res.status, text };
