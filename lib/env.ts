@@ -12,6 +12,8 @@ const EnvSchema = z.object({
   MAIL_FROM: z.string().min(3).default('Stepwell <no-reply@stepwell.local>'),
   MAIL_DIR: z.string().min(1).default('./var/mail'),
   SESSION_MAX_AGE_S: z.coerce.number().int().positive().default(60 * 60 * 12),
+  /** '1' shows /dev/mail in a production build: only the e2e server, which runs the fake SMTP server, sets it */
+  SHOW_DEV_MAILBOX: z.enum(['0', '1']).default('0'),
 });
 
 export type Env = z.infer<typeof EnvSchema>;

@@ -26,11 +26,34 @@ export async function readJsonBody(req: Request, limit = DEFAULT_MAX_BODY_BYTES)
   }
   const text = Buffer.concat(chunks).toString('utf8');
   if (text.trim() === '') return undefined;
+  let parsed: unknown;
   try {
-    return JSON.parse(text) as unknown;
+    parsed = JSON.parse(text) as unknown;
   } catch {
     throw new AppError('BAD_REQUEST', 'The request body is not valid JSON.');
   }
+  // No text we keep may hold NUL: SQLite's bulk inserts write values into the statement, where NUL ends it.
+  if (hasNulCharacter(parsed)) throw new AppError('BAD_REQUEST', 'Text in the request may not contain the NUL character (\\u0000).');
+  return parsed;
+}
+
+/** Whether any string (key or value) in parsed JSON holds U+0000; iterative, so deep nesting cannot overflow the stack. */
+export function hasNulCharacter(value: unknown): boolean {
+  const stack: unknown[] = [value];
+  while (stack.length) {
+    const v = stack.pop();
+    if (typeof v === 'string') {
+      if (v.includes('\u0000')) return true;
+    } else if (Array.isArray(v)) {
+      for (const item of v) stack.push(item);
+    } else if (v !== null && typeof v === 'object') {
+      for (const [k, child] of Object.entries(v)) {
+        if (k.includes('\u0000')) return true;
+        stack.push(child);
+      }
+    }
+  }
+  return false;
 }
 
 function tooLarge(limit: number): AppError {

@@ -1,14 +1,16 @@
 import path from 'node:path';
 import { notFound } from 'next/navigation';
 import { env } from '@/lib/env';
+import { devMailboxAllowed } from '@/lib/mail/dev-mailbox';
 import { readMailbox } from '@/lib/mail/mailbox';
 
 export const dynamic = 'force-dynamic';
 export const metadata = { title: 'Captured mail (development)' };
 
-// Development only: what the local fake SMTP server received. Production answers 404.
+// Development only: what the local fake SMTP server received. Production answers 404 unless the e2e
+// server (which runs the fake SMTP server itself) opts in.
 export default function DevMailPage() {
-  if (env().NODE_ENV === 'production') notFound();
+  if (!devMailboxAllowed(env())) notFound();
   const messages = readMailbox(path.resolve(/*turbopackIgnore: true*/ process.cwd(), env().MAIL_DIR));
   return (
     <main className="mx-auto max-w-4xl px-4 py-8">

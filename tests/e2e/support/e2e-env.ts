@@ -12,6 +12,7 @@ export function e2eEnv(): Record<string, string> {
     NODE_ENV: 'production',
     DATABASE_PATH: path.join(E2E_DIR, 'stepwell.sqlite'),
     MAIL_DIR: E2E_MAIL_DIR,
+    SHOW_DEV_MAILBOX: '1',
     SMTP_URL: `smtp://127.0.0.1:${E2E_SMTP_PORT}`,
     NEXTAUTH_SECRET: 'e2e-only-secret-not-for-production-0123',
     NEXTAUTH_URL: E2E_BASE_URL,

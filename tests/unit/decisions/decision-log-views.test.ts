@@ -94,7 +94,7 @@ describe('one decision', () => {
     expect(html).toContain('Superseded by decision #5');
     expect(html).toContain(RATIONALE);
     expect(html).toMatch(/Shelved by it<\/dt><dd><ul[^>]*><li><span[^>]*>Methanol via steam reforming <span[^>]*>deleted/);
-    expect(html).toContain('They say nothing of rates, heat release and runaway, or toxicity');
+    expect(html).toContain('It says nothing about rates, selectivity, toxicity or hazards.');
     expect(html).toContain('What-if: every step +50 K from its saved temperature.');
   });
 });
