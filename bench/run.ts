@@ -4,9 +4,10 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { E2E_BASE_URL } from '../tests/e2e/support/e2e-env';
 import { runEngineBench } from './engine.bench';
+import { runLargeBench } from './large.bench';
 import { runRouteEndpointBench } from './route-endpoint.bench';
-
-type Figures = Record<string, number>;
+import { splitFigures, type Figures } from './support/figures';
+import { runThroughputBench } from './throughput.bench';
 
 async function waitForHealth(url: string, timeoutMs = 240_000): Promise<void> {
   const until = Date.now() + timeoutMs;
@@ -54,11 +55,16 @@ async function main() {
     await section('route endpoint (HTTP)', results, () => runRouteEndpointBench(E2E_BASE_URL));
     await section('compare endpoint (HTTP)', results, () => optional('compare.bench.ts', 'runCompareBench', E2E_BASE_URL));
     await section('editor drag (Chromium)', results, () => optional('editor-drag.bench.ts', 'runEditorDragBench', E2E_BASE_URL));
+    await section('evaluate throughput (autocannon)', results, () => runThroughputBench(E2E_BASE_URL));
+    await section('large team (HTTP)', results, () => runLargeBench(E2E_BASE_URL));
   });
-  const out = { machine: `${process.platform} ${process.arch}, node ${process.version}`, ranAt: new Date().toISOString(), results };
+  const split = splitFigures(results);
+  const out = { machine: `${process.platform} ${process.arch}, node ${process.version}`, ranAt: new Date().toISOString(), ...split };
   fs.writeFileSync(path.resolve(__dirname, 'results.json'), `${JSON.stringify(out, null, 2)}\n`);
   console.log('\nfigure | value');
-  for (const [name, figures] of Object.entries(results)) for (const [k, v] of Object.entries(figures)) console.log(`${name} · ${k} | ${v}`);
+  for (const [name, figures] of Object.entries(split.results)) for (const [k, v] of Object.entries(figures)) console.log(`${name} · ${k} | ${v}`);
+  console.log('\ncontext (counts, one-off timings, raw rates; not in the table)');
+  for (const [name, figures] of Object.entries(split.context)) for (const [k, v] of Object.entries(figures)) console.log(`${name} · ${k} | ${v}`);
   const failed = Object.values(results).some((f) => f.failed);
   process.exit(failed ? 1 : 0);
 }
