@@ -73,6 +73,30 @@ test('a lead compares two routes on one scale, tries a what-if, exports CSV and 
   await expect(page.getByRole('table')).toContainText('No uphill step and no coupling needed');
 });
 
+test('the lead ticks the two demo routes on the list, compares them at +50 K, records a decision and finds it in the log', async ({ page }) => {
+  await signIn(page, email('lead'), DEMO_PASSWORD);
+  const demo = ['Methanol via steam reforming (Line 2 proposal)', 'Methanol via partial oxidation (alternative)'];
+  for (const name of demo) await page.getByRole('checkbox', { name: `Select ${name} to compare` }).check();
+  await page.getByRole('button', { name: 'Compare selected (2)' }).click();
+  await expect(page).toHaveURL(/\/routes\/compare\?ids=/);
+  for (const name of demo) await expect(page.getByRole('figure', { name: `Ladder of ${name}` })).toBeVisible();
+  await expect(page.getByRole('table')).toContainText('Overall ΔG');
+
+  await page.getByLabel('Temperature offset (K)').fill('50');
+  await page.getByRole('button', { name: 'Recompute' }).click();
+  await expect(page.getByText(/What-if in force: every temperature \+50 K/)).toBeVisible();
+
+  const rationale = `Demo check ${Date.now()}: partial oxidation runs downhill at every step, even 50 K hotter.`;
+  const decision = page.getByRole('form', { name: 'Record the decision' });
+  await decision.getByLabel(demo[1]!).check();
+  await decision.getByLabel('Rationale').fill(rationale);
+  await decision.getByRole('button', { name: 'Record decision' }).click();
+  await expect(page.getByText(/Decision #\d+ recorded/)).toBeVisible();
+  await page.getByRole('link', { name: 'decision log' }).click();
+  await expect(page).toHaveURL(/\/decisions$/);
+  await expect(page.getByRole('row').filter({ hasText: rationale })).toContainText(demo[1]!);
+});
+
 test('bad comparisons get a clear message, and a reviewer sees no decision form', async ({ page }) => {
   await signIn(page, email('reviewer'), DEMO_PASSWORD);
   await page.goto('/routes/compare?ids=1');

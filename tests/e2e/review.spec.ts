@@ -92,6 +92,19 @@ test('review round: designer asks, reviewer comments and flags, designer clears,
   await expect(page.getByTestId('unread-count')).toBeVisible();
   await expect.poll(() => readMailbox(E2E_MAIL_DIR).some((m) => m.to.includes(user('designer').email) && m.subject.includes('mentioned you')), { timeout: 15_000 }).toBe(true);
 
+  // They find the mail in the dev mailbox and follow its link straight to the step, fix it and reply.
+  await page.goto('/dev/mail');
+  const mail = page.getByRole('listitem').filter({ hasText: 'mentioned you' }).filter({ hasText: `/routes/${routeId}?step=s1` }).first();
+  const link = (await mail.innerText()).match(/https?:\/\/\S+\/routes\/\d+\?step=s1/)![0];
+  await page.goto(link);
+  await expect(page.getByRole('complementary', { name: 'Step 1 details' })).toBeVisible();
+  await page.getByRole('textbox', { name: /Temperature/ }).fill('1150');
+  await expect(page.getByText('Saved', { exact: true })).toBeVisible({ timeout: 10_000 });
+  await review(page).getByRole('button', { name: 'Reply' }).first().click();
+  await review(page).getByPlaceholder('Reply').fill('Raised to 1150 K; the relief and burner review is booked.');
+  await review(page).getByRole('button', { name: 'Reply', exact: true }).click();
+  await expect(review(page).getByTestId('comment')).toHaveCount(2);
+
   // The designer clears the flag with a comment, and sends the route back.
   await review(page).getByRole('tab', { name: /Flags/ }).click();
   await review(page).getByRole('button', { name: 'Clear flag…' }).click();
@@ -104,6 +117,14 @@ test('review round: designer asks, reviewer comments and flags, designer clears,
   await again.getByLabel(new RegExp(user('reviewer').name)).check();
   await again.getByRole('button', { name: 'Send for review' }).click();
   await expect(page.getByTestId('status-badge')).toHaveText(/In review/);
+
+  // The reviewer resolves the thread; the earlier comment now says it was written on an earlier version.
+  await reviewer.reload();
+  await stepNode(reviewer, 's1').locator('p.font-mono').click();
+  const thread = review(reviewer).getByRole('article', { name: 'Thread on Step 1' }).filter({ hasText: 'Watch the' });
+  await expect(thread).toContainText('written on an earlier version');
+  await thread.getByRole('button', { name: 'Resolve' }).click();
+  await expect(review(reviewer).getByRole('article', { name: 'Thread on Step 1' }).filter({ hasText: 'Watch the' })).toHaveCount(0);
 
   // Only the lead approves.
   const lead = await pageAs(browser, 'lead');
