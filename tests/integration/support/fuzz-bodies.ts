@@ -79,6 +79,17 @@ function applyMutation(seed: unknown, path: Path | undefined, m: Mutation): unkn
   });
 }
 
+// Every number of a valid body set to each of these, deterministically, in every run: the random runs rarely land
+// exactly on a yield or version, and tiny, huge and negative-zero values are where arithmetic goes non-finite.
+const EDGE_NUMBERS = [1e-306, 5e-324, 1e308, -1e308, -0];
+
+export function edgeExamples(seed: unknown): FuzzRequest[] {
+  if (seed === undefined) return [];
+  return pathsOf(seed)
+    .filter((path) => typeof path.reduce<unknown>((v, k) => (v as Record<string | number, unknown>)[k], seed) === 'number')
+    .flatMap((path) => EDGE_NUMBERS.map((value) => json('edge-number', mutateAt(seed, path, (parent, key) => (parent[key] = value)))));
+}
+
 /** One to three mutations of a valid body, at random places in it. */
 export function nearValid(seed: unknown): fc.Arbitrary<FuzzRequest> {
   const paths = pathsOf(seed);

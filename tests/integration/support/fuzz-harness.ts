@@ -4,7 +4,7 @@ import { encode } from 'next-auth/jwt';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { getDb } from '@/db';
 import { addMember, makeTeamWithLead } from './fixtures';
-import { fuzzRequests, type FuzzRequest } from './fuzz-bodies';
+import { edgeExamples, fuzzRequests, type FuzzRequest } from './fuzz-bodies';
 import { makeParams, missingParamMakers, SEED_BODIES, type FuzzWorld } from './fuzz-targets';
 import { callRoute } from './http';
 import { importRoute, listRouteFiles, type HTTP_METHODS } from './route-files';
@@ -96,7 +96,7 @@ async function fuzzOne(target: Target): Promise<Map<number, number>> {
       statuses.set(res.status, (statuses.get(res.status) ?? 0) + 1);
       checkAnswer(res, req);
     }),
-    { numRuns: RUNS },
+    { numRuns: RUNS, examples: edgeExamples(seed).map((req) => [req] as [FuzzRequest]) },
   );
   return statuses;
 }
