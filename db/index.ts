@@ -4,6 +4,7 @@ import { Sequelize, Transaction } from 'sequelize';
 import sqlite3 from 'sqlite3';
 import { databaseFile } from '../lib/env';
 import { initModels, type Models } from './models';
+import { queueTransactions } from './write-queue';
 
 interface Db {
   sequelize: Sequelize;
@@ -39,6 +40,7 @@ function createDb(file: string): Db {
     // Each transaction gets its own connection; BEGIN IMMEDIATE avoids lock upgrades that fail with SQLITE_BUSY.
     transactionType: Transaction.TYPES.IMMEDIATE,
   });
+  queueTransactions(sequelize);
   return { sequelize, models: initModels(sequelize), file };
 }
 

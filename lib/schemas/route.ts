@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { DEFAULT_MARGINAL_THRESHOLD_KJ, MAX_ROUTE_LINKS, MAX_ROUTE_STEPS } from '../thermo/route/route-limits';
+import { DEFAULT_MARGINAL_THRESHOLD_KJ, MAX_ROUTE_LINKS, MAX_ROUTE_STEPS, MIN_YIELD_FRACTION } from '../thermo/route/route-limits';
 import { PositiveFinite, QuantityString, SpeciesName, speciesMap } from './quantity';
 
 export { ROUTE_STATUSES } from './workflow';
@@ -22,7 +22,7 @@ export const StepInput = z.strictObject({
   electrons: PositiveFinite.max(1000).optional(),
   /** a saved fit of the team whose ΔH° and ΔS° this step uses instead of the library */
   fitId: z.number().int().positive().nullable().optional(),
-  yieldPct: z.number().gt(0, { message: 'Yield must be above 0 %.' }).max(100, { message: 'Yield is at most 100 %.' }).default(100),
+  yieldPct: z.number().min(MIN_YIELD_FRACTION * 100, { message: 'Yield is at least 0.0001 %.' }).max(100, { message: 'Yield is at most 100 %.' }).default(100),
   notes: z.string().max(4000).default(''),
   position: z.strictObject({ x: z.number().finite(), y: z.number().finite() }).default({ x: 0, y: 0 }),
 });

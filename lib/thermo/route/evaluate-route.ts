@@ -14,7 +14,7 @@ import { couplingRemedies, driverCacheKey, type CouplingContext } from './remedy
 import { driversKey, remedyKey, remedyMemo } from './remedy-memo';
 import { temperatureRemedy } from './remedy-temperature';
 import { MAX_ROUTE_LINKS, MAX_ROUTE_STEPS, RouteTooLargeError, routeError } from './route-errors';
-import { DEFAULT_MARGINAL_THRESHOLD_KJ } from './route-limits';
+import { DEFAULT_MARGINAL_THRESHOLD_KJ, MAX_TARGET_AMOUNT_MOL, MIN_YIELD_FRACTION } from './route-limits';
 import { buildRouteGraph } from './route-graph';
 import type { DriverReaction, Remedy, RouteEvaluateResponse, RouteStepResult, RouteWarning, StepErrorInfo } from './route-types';
 import { classify, stepNotes } from './step-notes';
@@ -70,10 +70,11 @@ function readInputs(request: RouteEvaluateRequest): { amount: number; threshold:
   }
   const amount = parseAmount(request.targetAmount ?? '1 mol', 'targetAmount');
   if (!(amount > 0)) throw routeError('targetAmount must be above 0 mol', 'targetAmount', 'e.g. "1 mol"');
+  if (amount > MAX_TARGET_AMOUNT_MOL) throw routeError(`targetAmount must be at most ${MAX_TARGET_AMOUNT_MOL} mol`, 'targetAmount', 'e.g. "1 mol"');
   const yields = steps.map((s, i) => {
     const y = s.yield ?? 1;
-    if (!Number.isFinite(y) || y <= 0 || y > 1) {
-      throw routeError(`steps[${i}].yield must be a fraction with 0 < yield ≤ 1`, `steps.${i}.yield`, 'e.g. 0.9 for 90 %');
+    if (!Number.isFinite(y) || y < MIN_YIELD_FRACTION || y > 1) {
+      throw routeError(`steps[${i}].yield must be a fraction with ${MIN_YIELD_FRACTION} ≤ yield ≤ 1`, `steps.${i}.yield`, 'e.g. 0.9 for 90 %');
     }
     return y;
   });

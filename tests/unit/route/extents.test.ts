@@ -125,3 +125,12 @@ describe('a bad step does not break the rest', () => {
     expect(byId(r, 's3').extent_mol).toBe(1);
   });
 });
+
+describe('limits that keep the extents finite', () => {
+  it('refuses a yield below 0.0001 % and a target over 1e9 mol with route errors, not an engine fault', () => {
+    const step = { id: 's1', equation: 'H2(g) + 1/2 O2(g) -> H2O(l)' };
+    expect(() => evaluateRoute({ target: 'H2O(l)', steps: [{ ...step, yield: 1e-308 }] })).toThrow(/yield/);
+    expect(() => evaluateRoute({ target: 'H2O(l)', targetAmount: '1e300 mol', steps: [step] })).toThrow(/at most/);
+    expect(evaluateRoute({ target: 'H2O(l)', steps: [{ ...step, yield: 1e-6 }] }).steps[0]!.extent_mol).toBeCloseTo(1e6, 0);
+  });
+});
