@@ -5,6 +5,7 @@ import path from 'node:path';
 import { E2E_BASE_URL } from '../tests/e2e/support/e2e-env';
 import { runEngineBench } from './engine.bench';
 import { runLargeBench } from './large.bench';
+import { runFirstLoadJsBench } from './first-load-js.bench';
 import { runRouteEndpointBench } from './route-endpoint.bench';
 import { splitFigures, type Figures } from './support/figures';
 import { runThroughputBench } from './throughput.bench';
@@ -56,6 +57,7 @@ async function main() {
     await section('compare endpoint (HTTP)', results, () => optional('compare.bench.ts', 'runCompareBench', E2E_BASE_URL));
     await section('editor drag (Chromium)', results, () => optional('editor-drag.bench.ts', 'runEditorDragBench', E2E_BASE_URL));
     await section('evaluate throughput (autocannon)', results, () => runThroughputBench(E2E_BASE_URL));
+    await section('first-load JS (build output)', results, () => runFirstLoadJsBench(E2E_BASE_URL));
     await section('large team (HTTP)', results, () => runLargeBench(E2E_BASE_URL));
   });
   const split = splitFigures(results);

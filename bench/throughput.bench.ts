@@ -1,5 +1,5 @@
-// Throughput of the authenticated evaluate endpoint against GET /api/me, the lightest authenticated handler
-// (session, user, team lookup, no engine), on the same server, one after the other, with autocannon on loopback.
+// Throughput of the authenticated evaluate endpoint against GET /api/ping, a signed-in no-op (session and
+// user only), on the same server, one after the other, with autocannon on loopback.
 import { createRequire } from 'node:module';
 import { DEMO_PASSWORD, DEMO_USERS } from '../db/seeders/demo-team';
 import { signInSession } from './support/http-session';
@@ -27,7 +27,7 @@ export async function runThroughputBench(baseUrl: string): Promise<Record<string
   const designer = DEMO_USERS.find((u) => u.role === 'designer')!;
   const session = await signInSession(baseUrl, designer.email, DEMO_PASSWORD);
   const headers = { cookie: session.cookie, 'content-type': 'application/json' };
-  const noop = await cannon({ url: `${baseUrl}/api/me`, headers });
+  const noop = await cannon({ url: `${baseUrl}/api/ping`, headers });
   const evaluate = await cannon({
     url: `${baseUrl}/api/evaluate`, method: 'POST', headers,
     body: JSON.stringify({ equation: 'N2(g) + 3 H2(g) <=> 2 NH3(g)', temperature: '700 K', pressures: { 'N2(g)': '50 bar', 'H2(g)': '150 bar', 'NH3(g)': '10 bar' } }),

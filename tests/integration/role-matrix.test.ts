@@ -127,6 +127,7 @@ const TABLE: Row[] = [
     prepare: async () => ({ body: { name: 'New Person', email: `new-${unique()}@example.test`, password: 'long-enough-pass', teamName: 'New team' } }),
   },
   { route: 'me', method: 'GET', expect: signedIn(200) },
+  { route: 'ping', method: 'GET', expect: signedIn(200) },
   { route: 'me/preferences', method: 'PATCH', expect: signedIn(200), prepare: async () => ({ body: { energyUnit: 'kcal', temperatureUnit: 'degC', pressureUnit: 'atm' } }) },
   { route: 'me/active-team', method: 'PUT', expect: signedIn(200, 404), prepare: async (w) => ({ body: { teamId: w.teamId } }) },
   { route: 'teams/[teamId]/members', method: 'GET', expect: signedIn(200, 404), prepare: async (w) => ({ params: { teamId: String(w.teamId) } }) },
