@@ -141,6 +141,28 @@ describe('routes: list, duplicate, archive', () => {
   });
 });
 
+describe('routes: the saved evaluation is reused only while nothing it depends on changes', () => {
+  it('a new version, a team species or a new driver gives a fresh evaluation', async () => {
+    const route = await newRoute('Reuse');
+    await callRoute(saveRoute, { method: 'PUT', userId: w.designerId, params: { routeId: String(route.id) }, body: saveBody(route) });
+    const params = { routeId: String(route.id) };
+    type Answer = { version: number; evaluation: { steps: { id: string; result: { deltaG0_kJ: number; species: { key: string; origin: string }[] } | null }[] } };
+    const first = (await callRoute(evaluate, { method: 'POST', userId: w.designerId, params })).body as Answer;
+    const again = (await callRoute(evaluate, { method: 'POST', userId: w.designerId, params })).body as Answer;
+    expect(again).toEqual(first);
+    // The team's own methanol (invented value, test only) must show in the next evaluation.
+    const { createTeamSpecies } = await import('@/lib/services/species/create-team-species');
+    await createTeamSpecies({
+      teamId: w.teamId, userId: w.designerId,
+      input: { formula: 'CH3OH', phase: 'g', name: 'methanol (team test value)', dfH: -190, dfG: null, S: 240, provenance: { kind: 'estimated', method: 'test only' } },
+    });
+    const afterSpecies = (await callRoute(evaluate, { method: 'POST', userId: w.designerId, params })).body as Answer;
+    const s2 = (a: Answer) => a.evaluation.steps.find((s) => s.id === 's2')!.result!;
+    expect(s2(afterSpecies).species.find((x) => x.key === 'CH3OH(g)')?.origin).toBe('team');
+    expect(s2(afterSpecies).deltaG0_kJ).not.toBeCloseTo(s2(first).deltaG0_kJ, 3);
+  });
+});
+
 describe('routes: evaluation and palette', () => {
   it('evaluates the saved route, or a draft without saving it', async () => {
     const route = await newRoute('Evaluate me');
