@@ -13,7 +13,7 @@ const common = [
 const nextConfig = {
   reactStrictMode: true,
   poweredByHeader: false,
-  serverExternalPackages: ['sequelize', 'sqlite3', 'umzug', 'nodemailer', 'bcryptjs'],
+  serverExternalPackages: ['sequelize', 'sqlite3', 'pg', 'pg-hstore', 'umzug', 'nodemailer', 'bcryptjs'],
   async headers() {
     return [
       { source: '/:path*', headers: common },

@@ -1,15 +1,16 @@
 import fs from 'node:fs';
 import path from 'node:path';
+import pg from 'pg';
 import { Sequelize, Transaction } from 'sequelize';
 import sqlite3 from 'sqlite3';
-import { databaseFile } from '../lib/env';
+import { databaseTarget, type DatabaseTarget } from './database-target';
 import { initModels, type Models } from './models';
 import { queueTransactions } from './write-queue';
 
 interface Db {
   sequelize: Sequelize;
   models: Models;
-  file: string;
+  target: DatabaseTarget;
 }
 
 const globalForDb = globalThis as unknown as { stepwellDb?: Db };
@@ -30,7 +31,7 @@ class ConfiguredDatabase extends sqlite3.Database {
 
 const dialectModule = { ...sqlite3, Database: ConfiguredDatabase };
 
-function createDb(file: string): Db {
+function createSqlite(file: string): Sequelize {
   fs.mkdirSync(path.dirname(file), { recursive: true });
   const sequelize = new Sequelize({
     dialect: 'sqlite',
@@ -38,20 +39,44 @@ function createDb(file: string): Db {
     storage: file,
     logging: false,
     // Each transaction gets its own connection; BEGIN IMMEDIATE avoids lock upgrades that fail with SQLITE_BUSY.
+    // SQLite transactions are serializable whatever is asked.
     transactionType: Transaction.TYPES.IMMEDIATE,
   });
   queueTransactions(sequelize);
-  return { sequelize, models: initModels(sequelize), file };
+  return sequelize;
+}
+
+// READ COMMITTED, chosen explicitly: every optimistic write is one conditional UPDATE (… WHERE version = ?),
+// which PostgreSQL re-checks against the committed row after waiting on its lock, so a stale writer updates
+// nothing and gets its 409, as on SQLite.
+function createPostgres(url: string): Sequelize {
+  return new Sequelize(url, {
+    dialect: 'postgres',
+    dialectModule: pg,
+    logging: false,
+    isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED,
+    pool: { max: 10, min: 0, idle: 10_000, acquire: 10_000 },
+    dialectOptions: { connectionTimeoutMillis: 5000 },
+  });
+}
+
+function createDb(target: DatabaseTarget): Db {
+  const sequelize = target.dialect === 'sqlite' ? createSqlite(target.file) : createPostgres(target.url);
+  return { sequelize, models: initModels(sequelize), target };
 }
 
 // One instance per process, kept on globalThis so hot reloads in dev don't open new handles.
 export function getDb(): Db {
-  const file = databaseFile();
+  const target = databaseTarget();
   const cached = globalForDb.stepwellDb;
-  if (cached && cached.file === file) return cached;
-  const db = createDb(file);
+  if (cached && cached.target.key === target.key) return cached;
+  const db = createDb(target);
   globalForDb.stepwellDb = db;
   return db;
+}
+
+export function isPostgres(): boolean {
+  return getDb().target.dialect === 'postgres';
 }
 
 export async function closeDb(): Promise<void> {
