@@ -1,10 +1,8 @@
 // Growth: every foreign key and every list query has an index, read from the migrated schema itself.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { getDb } from '@/db';
+import { columnNames, foreignKeyColumns, indexColumns, tableNames } from './support/schema';
 import { setupTestDb, teardownTestDb } from './support/test-db';
 
-type Rows = Array<Record<string, unknown>>;
-const q = (sql: string) => getDb().sequelize.query(sql, { type: 'SELECT' }) as Promise<Rows>;
 
 // The leading columns each list query filters and orders on (lib/services/**/list-*, read-*).
 const LIST_QUERIES: Array<[table: string, columns: string[]]> = [
@@ -34,17 +32,9 @@ const tables: string[] = [];
 
 beforeAll(async () => {
   ({ dir } = await setupTestDb());
-  for (const { name } of await q("SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%'")) {
-    const table = String(name);
+  for (const table of await tableNames()) {
     tables.push(table);
-    const list: string[][] = [];
-    for (const index of await q(`PRAGMA index_list("${table}")`)) {
-      list.push((await q(`PRAGMA index_info("${String(index.name)}")`)).sort((a, b) => Number(a.seqno) - Number(b.seqno)).map((c) => String(c.name)));
-    }
-    // The primary key is an index too (an INTEGER PRIMARY KEY is the rowid and has no index_list row).
-    const pk = (await q(`PRAGMA table_info("${table}")`)).filter((c) => Number(c.pk) > 0).sort((a, b) => Number(a.pk) - Number(b.pk)).map((c) => String(c.name));
-    if (pk.length) list.push(pk);
-    indexes.set(table, list);
+    indexes.set(table, await indexColumns(table));
   }
 });
 afterAll(async () => teardownTestDb(dir));
@@ -55,7 +45,7 @@ describe('indexes', () => {
   it('index every foreign key column (as the leading column of some index)', async () => {
     const missing: string[] = [];
     for (const table of tables) {
-      for (const fk of await q(`PRAGMA foreign_key_list("${table}")`)) if (!hasLeading(table, [String(fk.from)])) missing.push(`${table}.${String(fk.from)}`);
+      for (const column of await foreignKeyColumns(table)) if (!hasLeading(table, [column])) missing.push(`${table}.${column}`);
     }
     expect(tables.length).toBeGreaterThan(15);
     expect(missing, 'foreign keys without an index: add one in a new migration').toEqual([]);
@@ -69,7 +59,7 @@ describe('indexes', () => {
   it('lead with team_id in some index on every team-scoped table, so each team reads only its own rows', async () => {
     const missing: string[] = [];
     for (const table of tables) {
-      const columns = (await q(`PRAGMA table_info("${table}")`)).map((c) => String(c.name));
+      const columns = await columnNames(table);
       if (columns.includes('team_id') && !hasLeading(table, ['team_id'])) missing.push(table);
     }
     expect(missing).toEqual([]);

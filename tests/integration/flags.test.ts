@@ -8,6 +8,7 @@ import type { FlagDto, FlagListDto } from '@/lib/schemas/flag';
 import { makeRoute } from './support/fixtures';
 import { callRoute, errorOf } from './support/http';
 import { makeOwnedRoute, type ReviewTeam, withReviewWorld } from './support/review-team';
+import { failUpdatesOf } from './support/fault-trigger';
 
 let team: ReviewTeam;
 withReviewWorld((t) => (team = t));
@@ -76,15 +77,15 @@ describe('flags', () => {
   it('write neither the comment nor the clearing when the flag update fails after the comment was inserted', async () => {
     const route = await makeOwnedRoute(team);
     const f = (await flag(route.id, team.reviewerId, { stepKey: 's1', category: 'safety', reason: 'Runaway risk unknown.' })).body as FlagDto;
-    const { sequelize, models } = getDb();
+    const { models } = getDb();
     const before = await models.Comment.count({ where: { routeId: route.id } });
     // A database failure on the flag's update, which runs after the comment insert.
-    await sequelize.query("CREATE TRIGGER test_fail_flag_clear BEFORE UPDATE OF cleared_at ON step_flags BEGIN SELECT RAISE(ABORT, 'simulated failure'); END");
+    const undo = await failUpdatesOf('step_flags', 'cleared_at');
     try {
       const res = await clear(route.id, f.id, team.leadId, { comment: 'Checked the relief sizing.' });
       expect(res.status).toBe(500);
     } finally {
-      await sequelize.query('DROP TRIGGER test_fail_flag_clear');
+      await undo();
     }
     expect(await models.Comment.count({ where: { routeId: route.id } })).toBe(before);
     expect((await models.StepFlag.findByPk(f.id))?.clearedAt).toBeNull();

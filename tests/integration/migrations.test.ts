@@ -5,16 +5,14 @@ import { migrateDownAll, migrateUp } from '@/db/migrate';
 import { MIGRATIONS } from '@/db/migrations';
 import { runSeeders } from '@/db/seeders';
 import { DEMO_USERS } from '@/db/seeders/demo-team';
-import { setupTestDb, teardownTestDb } from './support/test-db';
+import { tableNames } from './support/schema';
+import { onPostgres, setupTestDb, teardownTestDb } from './support/test-db';
 
 let dir = '';
 beforeAll(async () => ({ dir } = await setupTestDb()));
 afterAll(async () => teardownTestDb(dir));
 
-async function tables(): Promise<string[]> {
-  const [rows] = await getDb().sequelize.query("SELECT name FROM sqlite_master WHERE type = 'table' ORDER BY name");
-  return (rows as { name: string }[]).map((r) => r.name);
-}
+const tables = tableNames;
 
 describe('migrations', () => {
   it('apply from empty and a second run applies nothing', async () => {
@@ -33,13 +31,21 @@ describe('migrations', () => {
     expect(await migrateUp(getDb().sequelize)).toEqual(MIGRATIONS.map((m) => m.name));
   });
 
-  it('use WAL, foreign keys and a busy timeout', async () => {
+  it.skipIf(onPostgres)('use WAL, foreign keys and a busy timeout (SQLite)', async () => {
     const { sequelize } = getDb();
     const pragma = async (name: string) =>
       Object.values((await sequelize.query<Record<string, unknown>>(`PRAGMA ${name}`, { type: QueryTypes.SELECT }))[0] ?? {})[0];
     expect(await pragma('journal_mode')).toBe('wal');
     expect(await pragma('foreign_keys')).toBe(1);
     expect(Number(await pragma('busy_timeout'))).toBeGreaterThanOrEqual(1000);
+  });
+
+  it.runIf(onPostgres)('run on PostgreSQL at READ COMMITTED, as chosen in db/index.ts (PostgreSQL)', async () => {
+    const [row] = await getDb().sequelize.transaction(async (transaction) =>
+      getDb().sequelize.query<{ transaction_isolation: string }>('SHOW transaction_isolation', { type: QueryTypes.SELECT, transaction }),
+    );
+    expect(row?.transaction_isolation).toBe('read committed');
+    expect(getDb().target.dialect).toBe('postgres');
   });
 
   it('seed the demo team once, with one user per role', async () => {

@@ -32,7 +32,7 @@ export async function importTeam({ teamId, importerId, file }: { teamId: number;
       for (const table of contentTables(tables)) {
         const where = table.scope === 'team' ? 'team_id = ?' : 'route_id IN (SELECT id FROM routes WHERE team_id = ?)';
         const [counted] = await sequelize.query<{ n: number }>(`SELECT COUNT(*) AS n FROM ${table.name} WHERE ${where}`, { type: QueryTypes.SELECT, replacements: [teamId], transaction });
-        if ((counted?.n ?? 0) > 0) throw new AppError('CONFLICT', 'Import goes into an empty team only: this team already has routes or data. Create a new team and import there.');
+        if (Number(counted?.n ?? 0) > 0) throw new AppError('CONFLICT', 'Import goes into an empty team only: this team already has routes or data. Create a new team and import there.');
       }
 
       const emails = file.people.map((p) => p.email.trim().toLowerCase());

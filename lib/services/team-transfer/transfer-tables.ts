@@ -42,14 +42,17 @@ export interface TransferTable {
   scope: 'team' | 'route';
 }
 
+// Read from the live schema through Sequelize's query interface, so the same code serves SQLite and PostgreSQL.
 export async function transferTables(sequelize: Sequelize, transaction?: Transaction): Promise<TransferTable[]> {
+  const qi = sequelize.getQueryInterface();
+  const existing = new Set((await qi.showAllTables({ transaction })).map((t) => (typeof t === 'string' ? t : (t as { tableName: string }).tableName)));
   const tables: TransferTable[] = [];
   for (const name of ORDER) {
-    const info = await sequelize.query<{ name: string; notnull: number }>(`PRAGMA table_info(${name})`, { type: QueryTypes.SELECT, transaction });
-    if (info.length === 0) continue;
-    const fks = await sequelize.query<{ from: string; table: string }>(`PRAGMA foreign_key_list(${name})`, { type: QueryTypes.SELECT, transaction });
-    const refs: Record<string, string> = { ...Object.fromEntries(fks.map((fk) => [fk.from, fk.table])), ...(SOFT_REFERENCES[name] ?? {}) };
-    const columns = info.map((c) => ({ name: c.name, notNull: c.notnull === 1, ref: refs[c.name] ?? null }));
+    if (!existing.has(name)) continue;
+    const info = await qi.describeTable(name, { transaction } as Parameters<typeof qi.describeTable>[1]);
+    const fks = (await qi.getForeignKeyReferencesForTable(name, { transaction })) as Array<{ columnName: string; referencedTableName: string }>;
+    const refs: Record<string, string> = { ...Object.fromEntries(fks.map((fk) => [fk.columnName, fk.referencedTableName])), ...(SOFT_REFERENCES[name] ?? {}) };
+    const columns = Object.entries(info).map(([column, c]) => ({ name: column, notNull: !c.allowNull, ref: refs[column] ?? null }));
     const hasTeam = columns.some((c) => c.name === 'team_id');
     if (!hasTeam && !columns.some((c) => c.name === 'route_id' && c.ref === 'routes')) continue;
     tables.push({ name, columns, scope: hasTeam ? 'team' : 'route' });
