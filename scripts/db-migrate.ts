@@ -1,8 +1,8 @@
 import { loadEnvFiles } from './load-env';
-import { migrateAndSeed } from './db-tasks';
+import { migrateAndSeed, reportStartupError } from './db-tasks';
 
 loadEnvFiles();
 migrateAndSeed({ seed: false }).catch((error) => {
-  console.error(error);
+  reportStartupError(error);
   process.exit(1);
 });

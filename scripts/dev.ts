@@ -1,5 +1,5 @@
 import { spawn } from 'node:child_process';
-import { migrateAndSeed } from './db-tasks';
+import { migrateAndSeed, reportStartupError } from './db-tasks';
 import { ensureDevSecret } from './ensure-secret';
 import { loadEnvFiles } from './load-env';
 
@@ -23,6 +23,6 @@ async function main() {
 }
 
 main().catch((error) => {
-  console.error(error);
+  reportStartupError(error);
   process.exit(1);
 });

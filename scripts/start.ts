@@ -1,5 +1,5 @@
 import { spawn } from 'node:child_process';
-import { migrateAndSeed } from './db-tasks';
+import { migrateAndSeed, reportStartupError } from './db-tasks';
 import { loadEnvFiles } from './load-env';
 
 // npm start: migrate (no demo seed), then next start.
@@ -21,6 +21,6 @@ async function main() {
 }
 
 main().catch((error) => {
-  console.error(error);
+  reportStartupError(error);
   process.exit(1);
 });

@@ -2,6 +2,7 @@ import { NextResponse } from 'next/server';
 import type { z } from 'zod';
 import { ThermoError } from '../thermo/errors';
 import { isRouteTooLargeError } from '../thermo/route/route-errors';
+import { isDatabaseUnavailable } from './database-unavailable';
 import { AppError, errorBody } from './errors';
 
 export function zodFields(error: z.ZodError): Record<string, string> {
@@ -22,6 +23,11 @@ export function toErrorResponse(error: unknown): Response {
   if (error instanceof ThermoError) {
     const fields = error.field ? { [error.field]: error.message } : undefined;
     return NextResponse.json(errorBody(error.code, error.message, fields), { status: 400 });
+  }
+  if (isDatabaseUnavailable(error)) {
+    console.error('[stepwell] database unavailable:', error instanceof Error ? error.message : error);
+    const message = 'The database could not be reached just now. Try again in a moment.';
+    return NextResponse.json(errorBody('UNAVAILABLE', message), { status: 503, headers: { 'Retry-After': '2' } });
   }
   console.error('[stepwell] unhandled error in route handler:', error);
   return NextResponse.json(errorBody('INTERNAL', 'Something went wrong on our side. Try again.'), { status: 500 });

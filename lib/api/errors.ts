@@ -11,6 +11,7 @@ export const ERROR_STATUS = {
   UNPROCESSABLE: 422,
   RATE_LIMITED: 429,
   INTERNAL: 500,
+  UNAVAILABLE: 503,
 } as const;
 
 export type ErrorCode = keyof typeof ERROR_STATUS;
