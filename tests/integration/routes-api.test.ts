@@ -115,6 +115,17 @@ describe('routes: list, duplicate, archive', () => {
     expect((await callRoute(listRoutes, { userId: w.reviewerId, path: '/api/routes?q=%25' })).status).toBe(200);
   });
 
+  it('searches without regard to case, and reads % and _ as themselves, on either database', async () => {
+    await newRoute('Glycerol 50% feed');
+    await newRoute('Glycerol 50 feed');
+    await newRoute('Glycerol_b feed');
+    const names = async (q: string) =>
+      ((await callRoute(listRoutes, { userId: w.reviewerId, path: `/api/routes?q=${encodeURIComponent(q)}&sort=name&dir=asc` })).body as { items: { name: string }[] }).items.map((i) => i.name);
+    expect(await names('GLYCEROL')).toEqual(['Glycerol 50 feed', 'Glycerol 50% feed', 'Glycerol_b feed']);
+    expect(await names('50%')).toEqual(['Glycerol 50% feed']);
+    expect(await names('l_b')).toEqual(['Glycerol_b feed']);
+  });
+
   it('duplicates as an alternative that remembers its origin, and archives out of the default list', async () => {
     const route = await newRoute('Original');
     await callRoute(saveRoute, { method: 'PUT', userId: w.designerId, params: { routeId: String(route.id) }, body: saveBody(route) });

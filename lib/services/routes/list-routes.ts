@@ -1,5 +1,5 @@
 import 'server-only';
-import { Op, type Order, type WhereOptions } from 'sequelize';
+import { literal, Op, type Order, type WhereOptions } from 'sequelize';
 import { getDb } from '../../../db';
 import type { Route } from '../../../db/models/route';
 import type { ListRoutesQuery } from '../../schemas/route';
@@ -22,8 +22,11 @@ export async function listRoutes({ teamId, query }: { teamId: number; query: Lis
   const { Route, User } = getDb().models;
   const where: WhereOptions<Route> = { teamId, deletedAt: null, archivedAt: query.archived === '1' ? { [Op.ne]: null } : null };
   if (query.q) {
-    const pattern = `%${escapeLike(query.q)}%`;
-    Object.assign(where, { [Op.or]: [{ name: { [Op.like]: pattern } }, { target: { [Op.like]: pattern } }] });
+    // lower() on both sides and an explicit ESCAPE: SQLite's LIKE ignores ASCII case and has no default escape,
+    // PostgreSQL's LIKE is case-sensitive; this reads the same on both.
+    const pattern = getDb().sequelize.escape(`%${escapeLike(query.q.toLowerCase())}%`);
+    const contains = (column: string) => literal(`lower("Route"."${column}") LIKE ${pattern} ESCAPE '\\'`);
+    Object.assign(where, { [Op.or]: [contains('name'), contains('target')] });
   }
   const order: Order = [[SORT_COLUMNS[query.sort], query.dir.toUpperCase()], ['id', 'DESC']];
   const { rows, count } = await Route.findAndCountAll({
