@@ -7,6 +7,7 @@ import * as decisions from './20261202-0005-decisions';
 import * as fits from './20261202-0007-fits';
 import * as teamSpecies from './20261202-0006-team-species';
 import * as passwordResetSessions from './20261203-0008-password-reset-sessions';
+import * as rateLimitWindows from './20261204-0009-rate-limit-windows';
 
 export interface MigrationModule {
   up(params: { context: QueryInterface }): Promise<void>;
@@ -23,4 +24,5 @@ export const MIGRATIONS: ReadonlyArray<{ name: string; module: MigrationModule }
   { name: '20261202-0006-team-species', module: teamSpecies },
   { name: '20261203-0008-password-reset-sessions', module: passwordResetSessions },
   { name: '20261202-0007-fits', module: fits },
+  { name: '20261204-0009-rate-limit-windows', module: rateLimitWindows },
 ];

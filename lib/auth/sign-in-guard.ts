@@ -1,8 +1,7 @@
 import 'server-only';
-import { NextResponse, type NextRequest } from 'next/server';
-import { errorBody } from '../api/errors';
+import type { NextRequest } from 'next/server';
 import { toErrorResponse } from '../api/error-response';
-import { clientIp, signInLimiter } from '../security/rate-limit';
+import { clientIp, enforceLimits, signInLimiter } from '../security/rate-limit';
 
 // Wraps next-auth's credentials callback: ten failures a minute for one e-mail and IP get a 429 with the wait.
 export async function guardCredentialSignIn(req: NextRequest, next: () => Promise<Response>): Promise<Response> {
@@ -12,16 +11,10 @@ export async function guardCredentialSignIn(req: NextRequest, next: () => Promis
     const email = String(form.get('email') ?? '').trim().toLowerCase();
     const key = `${email}|${clientIp(req)}`;
     const limiter = signInLimiter();
-    const verdict = limiter.check(key);
-    if (!verdict.allowed) {
-      return NextResponse.json(
-        errorBody('RATE_LIMITED', `Too many failed sign-ins. Wait ${verdict.retryAfterSeconds} s and try again.`),
-        { status: 429, headers: { 'Retry-After': String(verdict.retryAfterSeconds) } },
-      );
-    }
+    // Counted before the attempt runs, so parallel guesses cannot all pass one check; a success clears the count.
+    await enforceLimits([[limiter, key]], (wait) => `Too many failed sign-ins. Wait ${wait} s and try again.`);
     const response = await next();
-    if (await isFailedSignIn(response)) limiter.hit(key);
-    else limiter.reset(key);
+    if (!(await isFailedSignIn(response))) await limiter.reset(key);
     return response;
   } catch (error) {
     return toErrorResponse(error);

@@ -1,60 +1,54 @@
 import { AppError } from '../api/errors';
+import { rateLimitStore, type RateLimitStore, type RateWindow } from './rate-limit-store';
 
 export interface RateLimitResult {
   allowed: boolean;
   retryAfterSeconds: number;
+  /** the window the hit landed in, for refund() */
+  window: RateWindow;
 }
 
 export interface RateLimiter {
-  check(key: string): RateLimitResult;
-  hit(key: string): void;
-  reset(key: string): void;
+  readonly name: string;
+  /** Counts one attempt on key; allowed while its window holds at most `limit` attempts. */
+  take(key: string): Promise<RateLimitResult>;
+  /** Takes back an attempt counted by take() (only while its window is open). */
+  refund(key: string, window: RateWindow): Promise<void>;
+  reset(key: string): Promise<void>;
 }
 
-// Fixed window per key, in memory: fine for one instance; several instances need a shared store.
-export function createRateLimiter({ limit, windowMs }: { limit: number; windowMs: number }): RateLimiter {
-  const windows = new Map<string, { start: number; count: number }>();
-
-  function current(key: string, now: number) {
-    const entry = windows.get(key);
-    if (!entry || now - entry.start >= windowMs) return undefined;
-    return entry;
-  }
-
+// Fixed window per key. The store (memory for one instance, the database for several) is asked on every call,
+// so it follows STATE_STORE and the database of the moment; clock is injectable for tests.
+export function createRateLimiter({
+  name,
+  limit,
+  windowMs,
+  store = rateLimitStore,
+  clock = Date.now,
+}: {
+  name: string;
+  limit: number;
+  windowMs: number;
+  store?: () => RateLimitStore;
+  clock?: () => number;
+}): RateLimiter {
+  // Limiters share one store, so each keeps its own part of the key space.
+  const storeKey = (key: string) => `${name}:${key}`;
   return {
-    check(key) {
-      const now = Date.now();
-      const entry = current(key, now);
-      if (!entry || entry.count < limit) return { allowed: true, retryAfterSeconds: 0 };
-      return { allowed: false, retryAfterSeconds: Math.max(1, Math.ceil((entry.start + windowMs - now) / 1000)) };
+    name,
+    async take(key) {
+      const now = clock();
+      const window = await store().hit(storeKey(key), windowMs, now);
+      if (window.count <= limit) return { allowed: true, retryAfterSeconds: 0, window };
+      return { allowed: false, retryAfterSeconds: Math.max(1, Math.ceil((window.windowStart + windowMs - now) / 1000)), window };
     },
-    hit(key) {
-      const now = Date.now();
-      const entry = current(key, now);
-      if (entry) entry.count += 1;
-      else windows.set(key, { start: now, count: 1 });
-      if (windows.size > 10_000) pruneExpired(windows, now, windowMs);
-    },
-    reset(key) {
-      windows.delete(key);
-    },
+    refund: (key, window) => store().refund(storeKey(key), window),
+    reset: (key) => store().reset(storeKey(key)),
   };
 }
 
-function pruneExpired(windows: Map<string, { start: number }>, now: number, windowMs: number) {
-  for (const [key, entry] of windows) if (now - entry.start >= windowMs) windows.delete(key);
-}
-
-const globalLimiters = globalThis as unknown as { stepwellLimiters?: Map<string, RateLimiter> };
-
 export function namedLimiter(name: string, opts: { limit: number; windowMs: number }): RateLimiter {
-  globalLimiters.stepwellLimiters ??= new Map();
-  let limiter = globalLimiters.stepwellLimiters.get(name);
-  if (!limiter) {
-    limiter = createRateLimiter(opts);
-    globalLimiters.stepwellLimiters.set(name, limiter);
-  }
-  return limiter;
+  return createRateLimiter({ name, ...opts });
 }
 
 export const signInLimiter = () => namedLimiter('sign-in', { limit: 10, windowMs: 60_000 });
@@ -64,14 +58,20 @@ export const inviteLimiter = () => namedLimiter('invite', { limit: 50, windowMs:
 export const resetByEmailLimiter = () => namedLimiter('reset-email', { limit: 5, windowMs: 60 * 60_000 });
 export const resetByIpLimiter = () => namedLimiter('reset-ip', { limit: 30, windowMs: 60 * 60_000 });
 
-/** Checks every (limiter, key) pair and counts a hit on each only when all allow; throws a 429 with the longest wait otherwise. */
-export function enforceLimits(pairs: ReadonlyArray<readonly [RateLimiter, string]>, message: (waitS: number) => string): void {
-  const waits = pairs.map(([limiter, key]) => limiter.check(key)).filter((v) => !v.allowed).map((v) => v.retryAfterSeconds);
-  if (waits.length) {
-    const wait = Math.max(...waits);
-    throw new AppError('RATE_LIMITED', message(wait), { headers: { 'Retry-After': String(wait) } });
-  }
-  for (const [limiter, key] of pairs) limiter.hit(key);
+/**
+ * Counts a hit on every (limiter, key) pair and lets the request through only when all allow; otherwise
+ * refunds every hit (a denied request counts nowhere) and throws a 429 with the longest wait.
+ * Hit first, check after: each hit is atomic, so concurrent requests on any instance can never pass more than
+ * the limit (checking first and counting after would let them all pass one check). The cost is that a
+ * concurrent request may be denied while another's refund is still in flight, never that one slips through.
+ */
+export async function enforceLimits(pairs: ReadonlyArray<readonly [RateLimiter, string]>, message: (waitS: number) => string): Promise<void> {
+  const taken = await Promise.all(pairs.map(async ([limiter, key]) => ({ limiter, key, result: await limiter.take(key) })));
+  const waits = taken.filter((t) => !t.result.allowed).map((t) => t.result.retryAfterSeconds);
+  if (!waits.length) return;
+  await Promise.all(taken.map((t) => t.limiter.refund(t.key, t.result.window)));
+  const wait = Math.max(...waits);
+  throw new AppError('RATE_LIMITED', message(wait), { headers: { 'Retry-After': String(wait) } });
 }
 
 export function clientIp(req: Request): string {

@@ -7,7 +7,7 @@ import { startPasswordResetRequest } from '@/lib/services/password-reset/request
 export const runtime = 'nodejs';
 
 export const POST = withRoute({ access: 'public', body: RequestPasswordResetInput }, async ({ req, body }) => {
-  enforceLimits(
+  await enforceLimits(
     [
       [resetByEmailLimiter(), body.email],
       [resetByIpLimiter(), clientIp(req)],
