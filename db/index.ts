@@ -75,10 +75,6 @@ export function getDb(): Db {
   return db;
 }
 
-export function isPostgres(): boolean {
-  return getDb().target.dialect === 'postgres';
-}
-
 export async function closeDb(): Promise<void> {
   const cached = globalForDb.stepwellDb;
   if (!cached) return;

@@ -9,7 +9,7 @@ const EnvSchema = z.object({
   DATABASE_URL: z.string().optional(),
   /** where rate-limit windows live: `memory` (one instance) or `database` (several); the default follows the database */
   STATE_STORE: z.enum(['memory', 'database']).optional(),
-  /** folder for uploaded files; default: `files` beside the SQLite file, or ./var/files with PostgreSQL */
+  /** folder for uploaded files (lib/storage); default: the SQLite file's folder, or ./var/files with PostgreSQL */
   STORAGE_DIR: z.string().min(1).optional(),
   NEXTAUTH_SECRET: z.string().min(16).optional(),
   NEXTAUTH_URL: z.string().url().optional(),

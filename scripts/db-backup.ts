@@ -1,11 +1,13 @@
 import path from 'node:path';
 import { databaseFile } from '../lib/env';
 import { backupDatabase } from './backup/sqlite-backup';
+import { exitUnlessSqlite } from './backup/sqlite-only';
 import { loadEnvFiles } from './load-env';
 
 // npm run db:backup [FILE]: a consistent copy of the live database (safe while the server runs).
 async function main() {
   loadEnvFiles();
+  exitUnlessSqlite('db:backup');
   const source = databaseFile();
   const stamp = new Date().toISOString().replace(/[:.]/g, '-');
   const target = path.resolve(process.argv[2] ?? path.join(path.dirname(source), 'backups', `stepwell-${stamp}.sqlite`));

@@ -1,11 +1,13 @@
 import path from 'node:path';
 import { databaseFile } from '../lib/env';
 import { restoreDatabase } from './backup/sqlite-backup';
+import { exitUnlessSqlite } from './backup/sqlite-only';
 import { loadEnvFiles } from './load-env';
 
 // npm run db:restore FILE [--force]: checks FILE, keeps the current database aside, then restores FILE over it.
 async function main() {
   loadEnvFiles();
+  exitUnlessSqlite('db:restore');
   const args = process.argv.slice(2);
   const force = args.includes('--force');
   const file = args.find((a) => !a.startsWith('--'));

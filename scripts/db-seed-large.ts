@@ -1,5 +1,6 @@
 // npm run db:seed:large: the demo team grown to 5,000 routes (100,000 steps) and 10,000 team species, in its own
 // database file (STEPWELL_LARGE_DB, default var/large/stepwell.sqlite), for the growth benchmarks. Starts afresh each time.
+// Always SQLite, whatever DATABASE_URL says: the bulk copies below use SQLite's printf, datetime and json_object.
 import fs from 'node:fs';
 import path from 'node:path';
 import { performance } from 'node:perf_hooks';
@@ -19,6 +20,7 @@ async function main() {
   if (process.env.DATABASE_PATH && path.resolve(process.env.DATABASE_PATH) === file) throw new Error('STEPWELL_LARGE_DB must not be the working database');
   for (const suffix of ['', '-wal', '-shm']) fs.rmSync(file + suffix, { force: true });
   process.env.DATABASE_PATH = file;
+  delete process.env.DATABASE_URL;
   const started = performance.now();
   // Imported after DATABASE_PATH is set, so the one Sequelize instance opens the large file.
   const { migrateAndSeed } = await import('./db-tasks');

@@ -32,7 +32,7 @@ const commit = (importId: number, body: unknown = {}, userId = w.designerId) =>
   callRoute(commitRoute.POST, { method: 'POST', userId, params: { importId: String(importId) }, body });
 const teamCount = () => getDb().models.TeamSpecies.count({ where: { teamId: w.teamId } });
 const storedFiles = () => {
-  const root = path.join(dir, 'species-imports');
+  const root = path.join(process.env.STORAGE_DIR!, 'species-imports');
   return fs.existsSync(root) ? fs.readdirSync(root, { recursive: true }).filter((f) => String(f).endsWith('.csv')).length : 0;
 };
 

@@ -6,7 +6,7 @@ import type { SpeciesImportCommit } from '../../schemas/species';
 import { recordEvent } from '../audit/record-event';
 import { invalidateAfter } from './create-team-species';
 import { checkImportText } from './import-preview';
-import { importFileStore, sha256 } from './import-storage';
+import { importFiles, sha256 } from './import-storage';
 import { columnsOf } from './team-species-record';
 
 const MAX_LISTED = 20;
@@ -19,7 +19,7 @@ export async function commitSpeciesImport({ teamId, userId, importId, input }: {
       const imp = await models.SpeciesImport.findOne({ where: { id: importId, teamId }, transaction });
       if (!imp) throw new AppError('NOT_FOUND', 'No such import.');
       if (imp.status === 'committed') throw new AppError('CONFLICT', 'This file has already been imported.');
-      const bytes = await importFileStore().get(imp.storageKey);
+      const bytes = await importFiles.get(imp.storageKey);
       if (sha256(bytes) !== imp.checksum) throw new AppError('INTERNAL', 'The stored file does not match its checksum; upload it again.');
       // Checked again here: the team's species may have changed since the preview.
       const { rows } = await checkImportText({ teamId, text: bytes.toString('utf8').replace(/^\uFEFF/, ''), transaction });

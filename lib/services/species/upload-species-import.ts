@@ -3,15 +3,14 @@ import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
 import { recordEvent } from '../audit/record-event';
 import { checkImportText, toPreviewDto } from './import-preview';
-import { importFileStore, sha256 } from './import-storage';
+import { importFiles, sha256 } from './import-storage';
 
 const SAFE_NAME = /[^\w .()-]+/g;
 
 /** Checks an uploaded CSV, keeps the original file with its checksum and importer, and answers the preview. Bad files store nothing. */
 export async function uploadSpeciesImport({ teamId, userId, fileName, bytes, text }: { teamId: number; userId: number; fileName: string; bytes: Buffer; text: string }) {
   const { rows } = await checkImportText({ teamId, text });
-  const store = importFileStore();
-  const storageKey = await store.put(teamId, bytes);
+  const storageKey = await importFiles.put(teamId, bytes);
   const { sequelize, models } = getDb();
   try {
     const row = await sequelize.transaction(async (transaction) => {
@@ -28,7 +27,7 @@ export async function uploadSpeciesImport({ teamId, userId, fileName, bytes, tex
     await row.reload({ include: [{ association: 'importedBy', attributes: ['name'] }] });
     return toPreviewDto(row, rows.map((r) => r.dto));
   } catch (error) {
-    await store.remove(storageKey);
+    await importFiles.remove(storageKey);
     throw error;
   }
 }
@@ -44,7 +43,7 @@ export async function findImport({ teamId, importId }: { teamId: number; importI
 /** The original bytes, checked against the checksum taken at upload. */
 export async function readImportFile({ teamId, importId }: { teamId: number; importId: number }) {
   const row = await findImport({ teamId, importId });
-  const bytes = await importFileStore().get(row.storageKey).catch(() => {
+  const bytes = await importFiles.get(row.storageKey).catch(() => {
     throw new AppError('GONE', 'The stored file is no longer there.');
   });
   if (sha256(bytes) !== row.checksum) throw new AppError('INTERNAL', 'The stored file does not match its checksum; it has been changed since upload.');
