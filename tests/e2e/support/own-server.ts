@@ -51,11 +51,12 @@ async function waitForHealth(url: string, child: ChildProcess, timeoutMs: number
   throw new Error(`the server at ${url} did not come up within ${timeoutMs} ms`);
 }
 
-export async function startOwnServer({ port, dbFile, timeoutMs = 60_000 }: { port: number; dbFile: string; timeoutMs?: number }): Promise<OwnServer> {
+/** `env` adds to or overrides the server's environment (DATABASE_URL for PostgreSQL, say). */
+export async function startOwnServer({ port, dbFile, timeoutMs = 60_000, env = {} }: { port: number; dbFile: string; timeoutMs?: number; env?: Record<string, string> }): Promise<OwnServer> {
   if (!fs.existsSync(path.join(ROOT, '.next/BUILD_ID'))) throw new Error('no production build (.next/BUILD_ID); run `npm run build` first');
   const url = `http://127.0.0.1:${port}`;
   const child = spawn(process.execPath, ['node_modules/next/dist/bin/next', 'start', '-p', String(port), '-H', '127.0.0.1'], {
-    cwd: ROOT, env: { ...process.env, ...ownServerEnv(port, dbFile) }, stdio: ['ignore', 'ignore', 'pipe'],
+    cwd: ROOT, env: { ...process.env, ...ownServerEnv(port, dbFile), ...env }, stdio: ['ignore', 'ignore', 'pipe'],
   });
   child.stderr?.on('data', (chunk: Buffer) => process.env.OWN_SERVER_LOG && process.stderr.write(chunk));
   const exited = () => new Promise<void>((resolve) => (child.exitCode !== null || child.signalCode !== null ? resolve() : child.once('exit', () => resolve())));
