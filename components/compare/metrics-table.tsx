@@ -1,10 +1,11 @@
 'use client';
 
-import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
+import { createColumnHelper, getCoreRowModel, useReactTable } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import type { ComparedRoute, Comparison, MetricKey } from '@/lib/compare/compare-types';
 import { METRIC_ROWS, type MetricRow } from '@/lib/compare/metric-rows';
 import { metricSortValue, metricText, type MetricUnits } from './metric-format';
+import { MetricGrid, MetricLabel, MetricValue } from './metric-grid';
 
 type SortState = { key: MetricKey; dir: 'asc' | 'desc' } | null;
 
@@ -39,10 +40,7 @@ export function MetricsTable({ comparison, units, visible, caption }: { comparis
           const next: SortState = !active ? { key: r.key, dir: 'asc' } : sort.dir === 'asc' ? { key: r.key, dir: 'desc' } : null;
           return (
             <div className="flex items-start justify-between gap-2">
-              <span>
-                <span className="font-medium">{r.label}</span>
-                {r.basis ? <span className="block text-xs text-ink-faint">{r.basis}</span> : null}
-              </span>
+              <MetricLabel row={r} />
               <button
                 type="button"
                 className="shrink-0 rounded border border-paper-edge px-1 text-xs text-ink-soft hover:bg-paper-deep print:hidden"
@@ -62,12 +60,7 @@ export function MetricsTable({ comparison, units, visible, caption }: { comparis
           cell: ({ row }) => {
             const key = row.original.key;
             const isBest = row.original.best !== 'none' && (comparison.best[key] ?? []).includes(route.id);
-            return (
-              <span className={isBest ? 'font-semibold text-downhill' : ''}>
-                {metricText(key, route.metrics, units)}
-                {isBest ? <span className="ml-1 rounded bg-downhill-bg px-1 text-[11px]">best</span> : null}
-              </span>
-            );
+            return <MetricValue text={metricText(key, route.metrics, units)} isBest={isBest} />;
           },
         }),
       ),
@@ -77,37 +70,5 @@ export function MetricsTable({ comparison, units, visible, caption }: { comparis
 
   const table = useReactTable({ data: rows, columns, getCoreRowModel: getCoreRowModel(), getRowId: (r) => r.key });
 
-  return (
-    <table className="w-full border-collapse text-left text-sm">
-      <caption className="sr-only">{caption}</caption>
-      <thead>
-        {table.getHeaderGroups().map((group) => (
-          <tr key={group.id} className="border-b border-paper-edge">
-            {group.headers.map((header) => (
-              <th key={header.id} scope="col" className="px-2 py-1.5 align-bottom font-semibold">
-                {flexRender(header.column.columnDef.header, header.getContext())}
-              </th>
-            ))}
-          </tr>
-        ))}
-      </thead>
-      <tbody>
-        {table.getRowModel().rows.map((row) => (
-          <tr key={row.id} className="border-b border-paper-deep align-top" data-metric={row.id}>
-            {row.getVisibleCells().map((cell, i) =>
-              i === 0 ? (
-                <th key={cell.id} scope="row" className="w-64 px-2 py-1.5 text-left font-normal">
-                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                </th>
-              ) : (
-                <td key={cell.id} className="px-2 py-1.5 tabular-nums">
-                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                </td>
-              ),
-            )}
-          </tr>
-        ))}
-      </tbody>
-    </table>
-  );
+  return <MetricGrid table={table} caption={caption} compact />;
 }

@@ -6,11 +6,12 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
+import { NewPasswordField } from '@/components/ui/new-password-field';
 import { TextField } from '@/components/ui/text-field';
 import { signInWithPassword } from '@/lib/auth/client-sign-in';
 import { applyServerErrors } from '@/lib/forms/apply-server-errors';
 import { apiFetch } from '@/lib/queries/api-fetch';
-import { PASSWORD_MIN, SignUpInput } from '@/lib/schemas/auth';
+import { SignUpInput } from '@/lib/schemas/auth';
 
 export function SignUpForm() {
   const router = useRouter();
@@ -35,14 +36,7 @@ export function SignUpForm() {
       {formError ? <Notice tone="error">{formError}</Notice> : null}
       <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...register('name')} />
       <TextField label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...register('email')} />
-      <TextField
-        label="Password"
-        type="password"
-        autoComplete="new-password"
-        hint={`At least ${PASSWORD_MIN} characters.`}
-        error={errors.password?.message}
-        {...register('password')}
-      />
+      <NewPasswordField label="Password" error={errors.password?.message} {...register('password')} />
       <TextField label="Team name" placeholder="e.g. Process Development" error={errors.teamName?.message} {...register('teamName')} />
       <Button type="submit" disabled={formState.isSubmitting}>
         {formState.isSubmitting ? 'Creating…' : 'Create account and team'}

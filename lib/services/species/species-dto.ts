@@ -1,6 +1,6 @@
 import 'server-only';
 import type { TeamSpecies } from '../../../db/models/team-species';
-import type { SpeciesProvenanceInput } from '../../schemas/species';
+import type { BuiltSpecies } from '../../species/build-species';
 import { builtinLookup } from '../../thermo/species-library';
 import type { SpeciesRecord } from '../../thermo/species-types';
 import { provenanceOf } from './team-species-record';
@@ -24,33 +24,15 @@ export interface SpeciesRowDto {
   teamSpeciesId: number | null;
 }
 
-export interface TeamSpeciesDto {
+/** A team species as the API answers it: the built values (without the element counts) and the row's bookkeeping. */
+export type TeamSpeciesDto = Omit<BuiltSpecies, 'elements'> & {
   id: number;
-  key: string;
-  formula: string;
-  phase: 'g' | 'l' | 's' | 'aq';
-  form: string | null;
-  name: string;
-  aliases: string[];
-  charge: number;
-  dfH_kJ: number;
-  dfG_kJ: number;
-  dfGDerived: boolean;
-  S_J_per_K: number;
-  Cp_J_per_K: number | null;
-  cpTmin_K: number | null;
-  cpTmax_K: number | null;
-  sigmaDfH_kJ: number | null;
-  sigmaDfG_kJ: number | null;
-  sigmaS_J_per_K: number | null;
-  provenance: SpeciesProvenanceInput;
   importId: number | null;
-  notes: string;
   version: number;
   overridesBuiltin: boolean;
   updatedAt: string;
   updatedBy: string | null;
-}
+};
 
 export function toTeamSpeciesDto(row: TeamSpecies): TeamSpeciesDto {
   const updatedBy = row.get('updatedBy') as { name: string } | null | undefined;

@@ -1,8 +1,9 @@
 'use client';
 
-import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
+import { createColumnHelper, getCoreRowModel, useReactTable } from '@tanstack/react-table';
 import { useMemo } from 'react';
 import { metricText, type MetricUnits } from '@/components/compare/metric-format';
+import { MetricGrid, MetricLabel, MetricValue } from '@/components/compare/metric-grid';
 import { formatTemperatureChange, type TemperatureUnit } from '@/components/ladder/energy-format';
 import type { ComparisonSnapshot } from '@/lib/compare/compare-types';
 import { METRIC_ROWS, type MetricRow } from '@/lib/compare/metric-rows';
@@ -25,12 +26,7 @@ export function SnapshotMetrics({ snapshot, units, chosenRouteId }: { snapshot: 
       helper.display({
         id: 'metric',
         header: () => 'Metric',
-        cell: ({ row }) => (
-          <span>
-            <span className="font-medium">{row.original.label}</span>
-            {row.original.basis ? <span className="block text-xs text-ink-faint">{row.original.basis}</span> : null}
-          </span>
-        ),
+        cell: ({ row }) => <MetricLabel row={row.original} />,
       }),
       ...snapshot.routes.map((route) =>
         helper.display({
@@ -44,12 +40,7 @@ export function SnapshotMetrics({ snapshot, units, chosenRouteId }: { snapshot: 
           cell: ({ row }) => {
             const { key, best } = row.original;
             const isBest = best !== 'none' && (snapshot.best[key] ?? []).includes(route.id);
-            return (
-              <span className={isBest ? 'font-semibold text-downhill' : ''}>
-                {metricText(key, route.metrics, units)}
-                {isBest ? <span className="ml-1 rounded bg-downhill-bg px-1 text-[11px]">best</span> : null}
-              </span>
-            );
+            return <MetricValue text={metricText(key, route.metrics, units)} isBest={isBest} />;
           },
         }),
       ),
@@ -60,37 +51,7 @@ export function SnapshotMetrics({ snapshot, units, chosenRouteId }: { snapshot: 
 
   return (
     <div className="overflow-x-auto rounded-lg border border-paper-edge bg-white">
-      <table className="w-full border-collapse text-left text-sm">
-        <caption className="sr-only">Metrics of the compared routes when the decision was made</caption>
-        <thead className="bg-paper-deep text-xs uppercase tracking-wide text-ink-faint">
-          {table.getHeaderGroups().map((group) => (
-            <tr key={group.id}>
-              {group.headers.map((header) => (
-                <th key={header.id} scope="col" className="px-3 py-2 align-bottom font-semibold">
-                  {flexRender(header.column.columnDef.header, header.getContext())}
-                </th>
-              ))}
-            </tr>
-          ))}
-        </thead>
-        <tbody>
-          {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className="border-t border-paper-edge align-top">
-              {row.getVisibleCells().map((cell, i) =>
-                i === 0 ? (
-                  <th key={cell.id} scope="row" className="w-64 px-3 py-2 text-left font-normal">
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </th>
-                ) : (
-                  <td key={cell.id} className="px-3 py-2 tabular-nums">
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ),
-              )}
-            </tr>
-          ))}
-        </tbody>
-      </table>
+      <MetricGrid table={table} caption="Metrics of the compared routes when the decision was made" headClassName="bg-paper-deep text-xs uppercase tracking-wide text-ink-faint" />
       <p className="border-t border-paper-edge px-3 py-2 text-xs text-ink-faint">
         “best” marks the best value of a row as the comparison ranked it; rows without a ranking (temperature span, last edit, edited by) mark none.
       </p>

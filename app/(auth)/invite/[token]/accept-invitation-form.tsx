@@ -8,11 +8,12 @@ import { useForm } from 'react-hook-form';
 import { type z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
+import { NewPasswordField } from '@/components/ui/new-password-field';
 import { TextField } from '@/components/ui/text-field';
 import { signInWithPassword } from '@/lib/auth/client-sign-in';
 import { applyServerErrors } from '@/lib/forms/apply-server-errors';
 import { apiFetch } from '@/lib/queries/api-fetch';
-import { AcceptInvitationInput, PASSWORD_MIN } from '@/lib/schemas/auth';
+import { AcceptInvitationInput } from '@/lib/schemas/auth';
 
 type Mode = 'signed-in' | 'wrong-account' | 'needs-sign-in' | 'new-account';
 
@@ -85,14 +86,7 @@ export function AcceptInvitationForm({ token, email, mode, signedInAs }: { token
     <form onSubmit={handleSubmit(acceptNew)} className="mt-4 flex flex-col gap-3" noValidate>
       {formError ? <Notice tone="error">{formError}</Notice> : null}
       <TextField label="Your name" autoComplete="name" error={formState.errors.name?.message} {...register('name')} />
-      <TextField
-        label="Choose a password"
-        type="password"
-        autoComplete="new-password"
-        hint={`At least ${PASSWORD_MIN} characters.`}
-        error={formState.errors.password?.message}
-        {...register('password')}
-      />
+      <NewPasswordField label="Choose a password" error={formState.errors.password?.message} {...register('password')} />
       <Button type="submit" disabled={formState.isSubmitting}>
         {formState.isSubmitting ? 'Joining…' : 'Create account and join'}
       </Button>

@@ -6,10 +6,9 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
-import { TextField } from '@/components/ui/text-field';
+import { NewPasswordField } from '@/components/ui/new-password-field';
 import { applyServerErrors } from '@/lib/forms/apply-server-errors';
 import { apiFetch } from '@/lib/queries/api-fetch';
-import { PASSWORD_MIN } from '@/lib/schemas/auth';
 import { ResetPasswordInput } from '@/lib/schemas/password-reset';
 
 export function ResetPasswordForm({ token }: { token: string }) {
@@ -40,14 +39,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
   return (
     <form onSubmit={handleSubmit(onSubmit)} className="mt-4 flex flex-col gap-3" noValidate>
       {formError ? <Notice tone="error">{formError}</Notice> : null}
-      <TextField
-        label="New password"
-        type="password"
-        autoComplete="new-password"
-        hint={`At least ${PASSWORD_MIN} characters.`}
-        error={formState.errors.password?.message}
-        {...register('password')}
-      />
+      <NewPasswordField label="New password" error={formState.errors.password?.message} {...register('password')} />
       <Button type="submit" disabled={formState.isSubmitting}>
         {formState.isSubmitting ? 'Saving…' : 'Set new password'}
       </Button>
