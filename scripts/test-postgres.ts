@@ -1,21 +1,13 @@
 import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
-import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
+import { freePort } from './support/free-port';
 
 // npm run test:postgres: the integration suite again on a throwaway PostgreSQL cluster, then the two-instance
 // test (needs the build npm test made). Starts the cluster on a free loopback port, always stops it, prints totals.
 const CLUSTER_SCRIPT = 'scripts/postgres/throwaway-cluster.sh';
 const env = { ...process.env, NEXT_TELEMETRY_DISABLED: '1' };
-
-async function freePort(): Promise<number> {
-  const server = net.createServer();
-  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
-  const { port } = server.address() as net.AddressInfo;
-  await new Promise<void>((resolve) => server.close(() => resolve()));
-  return port;
-}
 
 function vitest(label: string, config: string, args: string[], json: string, url: string): boolean {
   console.log(`\n=== ${label} ===`);

@@ -1,15 +1,7 @@
 // Start-up against an unreachable PostgreSQL: a clear message naming host and port, password hidden, non-zero exit.
 import { spawnSync } from 'node:child_process';
-import net from 'node:net';
 import { describe, expect, it } from 'vitest';
-
-async function closedPort(): Promise<number> {
-  const server = net.createServer();
-  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
-  const { port } = server.address() as net.AddressInfo;
-  await new Promise<void>((resolve) => server.close(() => resolve()));
-  return port;
-}
+import { freePort as closedPort } from '../../scripts/support/free-port';
 
 describe('starting against an unreachable database', () => {
   it('npm run db:migrate (as npm start does first) names host and port, hides the password, exits non-zero', async () => {

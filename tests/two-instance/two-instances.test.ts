@@ -4,7 +4,6 @@
 import { spawnSync } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 import fs from 'node:fs';
-import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import pg from 'pg';
@@ -13,19 +12,12 @@ import { signInSession, type Session } from '../../bench/support/http-session';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../db/seeders/demo-team';
 import { startOwnServer, type OwnServer } from '../e2e/support/own-server';
 import { createRoute, currentVersion, revisionVersions, saveRoute } from '../e2e/support/route-saves';
+import { freePort } from '../../scripts/support/free-port';
 
 const ROOT = path.resolve(__dirname, '../..');
 const BASE_URL = process.env.TEST_POSTGRES_URL;
 const ROUNDS = 20;
 const TIME_BUDGET_MS = 90_000;
-
-async function freePort(): Promise<number> {
-  const server = net.createServer();
-  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
-  const { port } = server.address() as net.AddressInfo;
-  await new Promise<void>((resolve) => server.close(() => resolve()));
-  return port;
-}
 
 async function admin(sql: string): Promise<void> {
   const client = new pg.Client({ connectionString: BASE_URL });
