@@ -50,10 +50,13 @@ async function main(): Promise<number> {
   }
   const url = start.stdout.trim().split('\n').pop()!;
   const stop = () => spawnSync('bash', [CLUSTER_SCRIPT, 'stop', dir], { stdio: 'inherit' });
-  process.once('SIGINT', () => {
-    stop();
-    process.exit(130);
-  });
+  // pg_ctl detaches the server, so a killed run must stop it here or it outlives CI.
+  for (const [signal, code] of [['SIGINT', 130], ['SIGTERM', 143], ['SIGHUP', 129]] as const) {
+    process.once(signal, () => {
+      stop();
+      process.exit(code);
+    });
+  }
   console.log(`[test:postgres] throwaway cluster on 127.0.0.1:${port}`);
   const runs: Array<{ ok: boolean; json: string }> = [];
   try {
