@@ -38,11 +38,15 @@ export function folderStore(root: string): FileStore {
 
 /** A view of a store with every key under one prefix, so each kind of file keeps its own part of the store. */
 export function withPrefix(store: FileStore, prefix: string): FileStore {
-  const full = (key: string) => path.posix.join(prefix, key);
+  // Checked here, not only at the root: "../x" would otherwise leave this part for another part of the same store.
+  const full = (key: string) => {
+    if (key.startsWith('/') || key.split(/[\\/]/).includes('..')) throw new Error(`storage key outside the store: ${key}`);
+    return path.posix.join(prefix, key);
+  };
   return {
-    put: (key, bytes) => store.put(full(key), bytes),
-    get: (key) => store.get(full(key)),
-    remove: (key) => store.remove(full(key)),
+    put: async (key, bytes) => store.put(full(key), bytes),
+    get: async (key) => store.get(full(key)),
+    remove: async (key) => store.remove(full(key)),
   };
 }
 

@@ -44,6 +44,12 @@ describe('withPrefix', () => {
     await imports.put('team-1/x.csv', Buffer.from('csv'));
     expect((await store.get('species-imports/team-1/x.csv')).toString()).toBe('csv');
     await expect(withPrefix(store, 'species-imports').put('../../out.csv', Buffer.from('no'))).rejects.toThrow(/outside the store/);
+    // A key that stays inside the store but leaves its part (e.g. for the database file beside it) is refused too.
+    await store.put('beside.csv', Buffer.from('other part'));
+    await expect(imports.get('../beside.csv')).rejects.toThrow(/outside the store/);
+    await expect(imports.get('team-1/../../beside.csv')).rejects.toThrow(/outside the store/);
+    await expect(imports.remove('/beside.csv')).rejects.toThrow(/outside the store/);
+    expect(fs.existsSync(path.join(root, 'beside.csv'))).toBe(true);
   });
 });
 
