@@ -46,9 +46,10 @@ function createSqlite(file: string): Sequelize {
   return sequelize;
 }
 
-// READ COMMITTED, chosen explicitly: every optimistic write is one conditional UPDATE (… WHERE version = ?),
-// which PostgreSQL re-checks against the committed row after waiting on its lock, so a stale writer updates
-// nothing and gets its 409, as on SQLite.
+// READ COMMITTED, chosen explicitly. A route save is one conditional UPDATE (… WHERE version = ?), which PostgreSQL
+// re-checks against the committed row after waiting on its lock, so a stale writer updates nothing and gets its 409.
+// Every other write that depends on a read takes the row with SELECT … FOR UPDATE first (lib/services/row-lock.ts),
+// so two writers run one after the other, as SQLite's IMMEDIATE transactions do.
 function createPostgres(url: string): Sequelize {
   return new Sequelize(url, {
     dialect: 'postgres',

@@ -1,4 +1,5 @@
 import { NextResponse } from 'next/server';
+import { UniqueConstraintError } from 'sequelize';
 import type { z } from 'zod';
 import { ThermoError } from '../thermo/errors';
 import { isRouteTooLargeError } from '../thermo/route/route-errors';
@@ -23,6 +24,10 @@ export function toErrorResponse(error: unknown): Response {
   if (error instanceof ThermoError) {
     const fields = error.field ? { [error.field]: error.message } : undefined;
     return NextResponse.json(errorBody(error.code, error.message, fields), { status: 400 });
+  }
+  // Two requests creating the same thing at once: the unique index refused the later one, nothing was written.
+  if (error instanceof UniqueConstraintError) {
+    return NextResponse.json(errorBody('CONFLICT', 'Someone else saved the same record at the same moment. Reload and try again.'), { status: 409 });
   }
   if (isDatabaseUnavailable(error)) {
     console.error('[stepwell] database unavailable:', error instanceof Error ? error.message : error);

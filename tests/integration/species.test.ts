@@ -7,7 +7,8 @@ import * as speciesRoute from '@/app/api/species/route';
 import * as teamSpeciesRoute from '@/app/api/species/team/[teamSpeciesId]/route';
 import { getDb } from '@/db';
 import { builtinLookup } from '@/lib/thermo/species-library';
-import { makeRoleSet, makeRoute } from './support/fixtures';
+import { saveRoute } from '@/lib/services/routes/save-route';
+import { makeRoleSet, makeRoute, SAMPLE_STEPS } from './support/fixtures';
 import { callRoute, errorOf } from './support/http';
 import { speciesInput } from './support/species-fixtures';
 import { setupTestDb, teardownTestDb } from './support/test-db';
@@ -117,6 +118,13 @@ describe('team species', () => {
     const later = await makeRoute(w.teamId, w.leadId);
     const again = (await callRoute(speciesDetail.GET, { userId: w.reviewerId, params: { key: 'CH3OH(g)' } })).body as typeof d;
     expect(again.routes.map((r) => r.routeId).sort()).toEqual([route.id, later.id].sort());
+    // So is an edit moments later that takes methanol out: same route count and ids, maybe the same second.
+    await saveRoute({
+      teamId: w.teamId, userId: w.leadId, routeId: later.id,
+      input: { version: later.version, name: later.name, target: 'CO(g)', targetAmount: '1 mol', marginalThreshold_kJ: -17, steps: [SAMPLE_STEPS[0]!], links: [] },
+    });
+    const edited = (await callRoute(speciesDetail.GET, { userId: w.reviewerId, params: { key: 'CH3OH(g)' } })).body as typeof d;
+    expect(edited.routes.map((r) => r.routeId)).toEqual([route.id]);
     const foreign = (await callRoute(speciesDetail.GET, { userId: w.foreignId, params: { key: 'CH3OH(g)' } })).body as { inUse: string; routes: unknown[] };
     expect(foreign).toMatchObject({ inUse: 'library', routes: [] });
     expect((await callRoute(speciesDetail.GET, { userId: w.reviewerId, params: { key: 'Xx9(g)' } })).status).toBe(404);

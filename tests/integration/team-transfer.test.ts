@@ -152,6 +152,53 @@ describe('team export and import', () => {
     expect(raw.status).toBe(400);
   });
 
+  it('loads a file written by the other database: booleans as 0/1 or true/false, SQLite date text', async () => {
+    // SQLite exports BOOLEAN columns as 0/1 and dates as its own text; PostgreSQL exports true/false and ISO strings.
+    for (const [label, derived, createdAt] of [
+      ['as SQLite writes it', 1, '2026-11-30 09:15:00.000 +00:00'],
+      ['as PostgreSQL writes it', true, '2026-11-30T09:15:00.000Z'],
+    ] as const) {
+      const target = await makeTeamWithLead('other-database');
+      const moved = JSON.parse(JSON.stringify(file)) as typeof file;
+      for (const row of moved.tables.team_species!) Object.assign(row, { dfg_derived: derived, created_at: createdAt });
+      const res = await callRoute(importTeamRoute, { method: 'POST', userId: target.leadId, params: { teamId: String(target.teamId) }, body: moved });
+      expect(res.status, `${label}: ${JSON.stringify(res.body)}`).toBe(201);
+      const species = await getDb().models.TeamSpecies.findOne({ where: { teamId: target.teamId } });
+      expect(species!.dfgDerived, label).toBe(true);
+      expect(species!.createdAt.toISOString(), label).toBe('2026-11-30T09:15:00.000Z');
+    }
+    const target = await makeTeamWithLead('not-a-boolean');
+    const bad = JSON.parse(JSON.stringify(file)) as typeof file;
+    bad.tables.team_species![0]!.dfg_derived = 'yes';
+    const res = await callRoute(importTeamRoute, { method: 'POST', userId: target.leadId, params: { teamId: String(target.teamId) }, body: bad });
+    expect(res.status).toBe(400);
+    expect(errorOf(res.body).fields).toEqual({ 'tables.team_species[0].dfg_derived': 'Expected true or false.' });
+    bad.tables.team_species![0]!.dfg_derived = 0;
+    bad.tables.team_species![0]!.created_at = 'last Tuesday';
+    const undated = await callRoute(importTeamRoute, { method: 'POST', userId: target.leadId, params: { teamId: String(target.teamId) }, body: bad });
+    expect(undated.status).toBe(400);
+    expect(errorOf(undated.body).fields).toEqual({ 'tables.team_species[0].created_at': 'Expected a date and time.' });
+  });
+
+  it('refuses a species-import file key that could name a file outside the import folder', async () => {
+    const importRow = (key: string) => ({
+      id: 1, team_id: team.teamId, file_name: 'species.csv', checksum: 'a'.repeat(64), byte_size: 10, row_count: 1, storage_key: key,
+      status: 'committed', imported_by_id: null, created_count: 1, overridden_count: 0, skipped_count: 0, committed_at: null, created_at: '2026-11-30T09:15:00.000Z',
+    });
+    for (const key of ['../stepwell.sqlite', '/etc/passwd', 'team-1/../../x.csv', 'team-1/notes.csv']) {
+      const target = await makeTeamWithLead('bad-key');
+      const body = { ...file, tables: { ...file.tables, species_imports: [importRow(key)] } };
+      const res = await callRoute(importTeamRoute, { method: 'POST', userId: target.leadId, params: { teamId: String(target.teamId) }, body });
+      expect(res.status, key).toBe(400);
+      expect(errorOf(res.body).fields, key).toEqual({ 'tables.species_imports[0].storage_key': 'A stored file key is team-<n>/<uuid>.csv.' });
+      expect(await getDb().models.SpeciesImport.count({ where: { teamId: target.teamId } }), key).toBe(0);
+    }
+    const target = await makeTeamWithLead('good-key');
+    const body = { ...file, tables: { ...file.tables, species_imports: [importRow('team-7/0f8e2c1a-5b4d-4c3e-9a2b-1d0e9f8a7b6c.csv')] } };
+    const res = await callRoute(importTeamRoute, { method: 'POST', userId: target.leadId, params: { teamId: String(target.teamId) }, body });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+  });
+
   it('maps people without an account here to the importing lead or to nobody', async () => {
     const target = await makeTeamWithLead('strangers');
     const renamed = JSON.parse(JSON.stringify(file).replaceAll(team.email.designer, 'someone.new@elsewhere.example')) as typeof file;

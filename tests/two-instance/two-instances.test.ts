@@ -19,11 +19,11 @@ const BASE_URL = process.env.TEST_POSTGRES_URL;
 const ROUNDS = 20;
 const TIME_BUDGET_MS = 90_000;
 
-async function admin(sql: string): Promise<void> {
-  const client = new pg.Client({ connectionString: BASE_URL });
+async function admin(sql: string, values: unknown[] = [], connectionString = BASE_URL): Promise<Record<string, unknown>[]> {
+  const client = new pg.Client({ connectionString });
   await client.connect();
   try {
-    await client.query(sql);
+    return (await client.query(sql, values)).rows as Record<string, unknown>[];
   } finally {
     await client.end();
   }
@@ -53,6 +53,7 @@ const workDir = fs.mkdtempSync(path.join(os.tmpdir(), 'stepwell-two-'));
 const servers: OwnServer[] = [];
 let a: Session;
 let b: Session;
+let databaseUrl = '';
 
 describe('two app instances on one PostgreSQL database', () => {
   beforeAll(async () => {
@@ -60,7 +61,8 @@ describe('two app instances on one PostgreSQL database', () => {
     const url = new URL(BASE_URL!);
     url.pathname = `/${database}`;
     await admin(`CREATE DATABASE ${database}`);
-    const env = { DATABASE_URL: url.toString(), STORAGE_DIR: path.join(workDir, 'files'), STATE_STORE: 'database' };
+    databaseUrl = url.toString();
+    const env = { DATABASE_URL: databaseUrl, STORAGE_DIR: path.join(workDir, 'files'), STATE_STORE: 'database' };
     // Migrate and seed once, as a site would before starting its instances.
     const seeded = spawnSync(process.execPath, ['--import', 'tsx', 'scripts/db-seed.ts'], { cwd: ROOT, env: { ...process.env, ...env }, encoding: 'utf8' });
     if (seeded.status !== 0) throw new Error(`seeding failed: ${seeded.stdout}${seeded.stderr}`);
@@ -125,5 +127,20 @@ describe('two app instances on one PostgreSQL database', () => {
     // The created revision plus exactly one per acknowledged save, read through either instance.
     expect(await revisionVersions(b, route.id)).toEqual([1, ...acknowledged]);
     expect(await revisionVersions(a, route.id)).toEqual([1, ...acknowledged]);
+  });
+
+  it('a review request sent to both instances from one version: one moves the route, the other gets 409', async () => {
+    const reviewer = DEMO_USERS.find((u) => u.role === 'reviewer')!;
+    const [row] = await admin('SELECT id FROM users WHERE email = $1', [reviewer.email], databaseUrl);
+    const reviewerId = Number(row!.id);
+    for (let round = 1; round <= 5; round += 1) {
+      const route = await createRoute(a, `Two-instance review request ${round}`);
+      const body = { to: 'in_review', version: route.version, note: '', reviewerIds: [reviewerId] };
+      const answers = await Promise.all([a, b].map((s) => s.fetch(`/api/routes/${route.id}/transitions`, { method: 'POST', body })));
+      expect(answers.map((r) => r.status).sort(), `round ${round}`).toEqual([200, 409]);
+      expect(await currentVersion(b, route.id)).toBe(route.version + 1);
+      const [moves] = await admin('SELECT COUNT(*) AS n FROM route_transitions WHERE route_id = $1', [route.id], databaseUrl);
+      expect(Number(moves!.n), `round ${round}`).toBe(1);
+    }
   });
 });

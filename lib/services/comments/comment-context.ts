@@ -4,6 +4,7 @@ import { getDb } from '../../../db';
 import type { Comment } from '../../../db/models/comment';
 import type { Route } from '../../../db/models/route';
 import { AppError } from '../../api/errors';
+import { forUpdate } from '../row-lock';
 import { findRouteRow } from '../routes/get-route';
 import { stepFingerprint } from './step-fingerprint';
 
@@ -19,10 +20,11 @@ export async function loadRouteContext({ teamId, routeId, transaction }: { teamI
   return { route, fingerprints: new Map(steps.map((s) => [s.stepKey, stepFingerprint(s)])) };
 }
 
-/** A comment of this route and team, or 404 (another team's id looks exactly like a missing one). */
+/** A comment of this route and team, or 404 (another team's id looks exactly like a missing one). Inside a transaction the row is held for the write that follows. */
 export async function findComment({ teamId, routeId, commentId, transaction }: { teamId: number; routeId: number; commentId: number; transaction?: Transaction }): Promise<Comment> {
+  const options = transaction ? forUpdate(transaction) : {};
   const comment = Number.isInteger(commentId) && commentId > 0
-    ? await getDb().models.Comment.findOne({ where: { id: commentId, routeId, teamId }, transaction })
+    ? await getDb().models.Comment.findOne({ where: { id: commentId, routeId, teamId }, ...options })
     : null;
   if (!comment) throw new AppError('NOT_FOUND', 'No such comment.');
   return comment;

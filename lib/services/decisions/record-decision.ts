@@ -7,6 +7,7 @@ import { snapshotOf } from '../../compare/build-comparison';
 import type { DecisionInput } from '../../schemas/decision';
 import { recordEvent } from '../audit/record-event';
 import { compareRoutes } from '../compare/compare-routes';
+import { forUpdate } from '../row-lock';
 import { notifyTransition } from '../workflow/notify-transition';
 import type { TransitionOutcome } from '../workflow/transition-dto';
 import { getDecision } from './list-decisions';
@@ -22,7 +23,11 @@ export async function recordDecision({ teamId, userId, role, input }: { teamId: 
   const compared = new Map(comparison.routes.map((r) => [r.id, r]));
   const { sequelize, models } = getDb();
   const { decisionId, outcomes } = await sequelize.transaction(async (transaction) => {
-    const rows = await models.Route.findAll({ where: { id: { [Op.in]: input.routeIds }, teamId, deletedAt: null, archivedAt: null }, transaction });
+    const rows = await models.Route.findAll({
+      where: { id: { [Op.in]: input.routeIds }, teamId, deletedAt: null, archivedAt: null },
+      order: [['id', 'ASC']], // one lock order for every writer, so two decisions cannot deadlock
+      ...forUpdate(transaction),
+    });
     const changed = input.routeIds.filter((id) => rows.find((r) => r.id === id)?.version !== compared.get(id)!.version);
     if (changed.length) {
       throw new AppError('CONFLICT', `${changed.map((id) => `“${compared.get(id)!.name}”`).join(', ')} changed while the decision was being recorded. Compare again and decide.`);

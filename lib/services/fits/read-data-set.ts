@@ -2,13 +2,16 @@ import 'server-only';
 import { fn, col, Op, type Transaction } from 'sequelize';
 import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
+import { forUpdate } from '../row-lock';
 import { toDataSetDto, type DataSetDto } from './fit-dto';
 
 const withUpdatedBy = () => [{ model: getDb().models.User, as: 'updatedBy', attributes: ['name'] }];
 
-/** The team's data set row, or 404 (a foreign team's id looks exactly like a missing one). */
+/** The team's data set row, or 404 (a foreign team's id looks exactly like a missing one). Inside a transaction the row is held for the write that follows. */
 export async function findDataSetRow({ teamId, dataSetId, transaction }: { teamId: number; dataSetId: number; transaction?: Transaction }) {
-  const row = await getDb().models.FitDataSet.findOne({ where: { id: dataSetId, teamId }, include: withUpdatedBy(), transaction });
+  const { FitDataSet } = getDb().models;
+  const options = transaction ? forUpdate(transaction, FitDataSet) : {};
+  const row = await FitDataSet.findOne({ where: { id: dataSetId, teamId }, include: withUpdatedBy(), ...options });
   if (!row) throw new AppError('NOT_FOUND', 'No such data set.');
   return row;
 }

@@ -4,6 +4,7 @@ import { AppError } from '../../api/errors';
 import type { CommentDto } from '../../schemas/comment';
 import type { ClearFlagInput, FlagDto } from '../../schemas/flag';
 import { recordEvent } from '../audit/record-event';
+import { forUpdate } from '../row-lock';
 import { userNames } from '../comments/comment-context';
 import { commentDto, insertComment } from '../comments/create-comment';
 import { deliverNotificationMails } from '../notifications/record-notifications';
@@ -13,7 +14,7 @@ import { flagUserIds, toFlagDto } from './flag-dto';
 export async function clearFlag({ teamId, routeId, flagId, userId, input }: { teamId: number; routeId: number; flagId: number; userId: number; input: ClearFlagInput }): Promise<{ flag: FlagDto; comment: CommentDto }> {
   const { sequelize, models } = getDb();
   const { flag, inserted } = await sequelize.transaction(async (transaction) => {
-    const flag = Number.isInteger(flagId) && flagId > 0 ? await models.StepFlag.findOne({ where: { id: flagId, routeId, teamId }, transaction }) : null;
+    const flag = Number.isInteger(flagId) && flagId > 0 ? await models.StepFlag.findOne({ where: { id: flagId, routeId, teamId }, ...forUpdate(transaction) }) : null;
     if (!flag) throw new AppError('NOT_FOUND', 'No such flag.');
     if (flag.clearedAt) throw new AppError('CONFLICT', 'This flag is already cleared.');
     const inserted = await insertComment({ teamId, routeId, userId, input: { body: input.comment, stepKey: flag.stepKey }, allowMissingStep: true, transaction });

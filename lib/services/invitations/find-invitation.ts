@@ -2,6 +2,7 @@ import 'server-only';
 import type { Transaction } from 'sequelize';
 import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
+import { forUpdate } from '../row-lock';
 import { invitationStatus, type InvitationStatus } from './invitation-dto';
 import { hashInvitationToken } from './token';
 
@@ -13,8 +14,10 @@ export interface InvitationView {
   hasAccount: boolean;
 }
 
+// Read inside a transaction only to accept it, so the row is held: one link, one acceptance.
 export async function findInvitationRow({ token, transaction }: { token: string; transaction?: Transaction }) {
-  const row = await getDb().models.Invitation.findOne({ where: { tokenHash: hashInvitationToken(token) }, transaction });
+  const options = transaction ? forUpdate(transaction) : {};
+  const row = await getDb().models.Invitation.findOne({ where: { tokenHash: hashInvitationToken(token) }, ...options });
   if (!row) throw new AppError('NOT_FOUND', 'This invitation link is not valid. Ask your team lead for a new one.');
   return row;
 }

@@ -2,6 +2,7 @@ import 'server-only';
 import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
 import { recordEvent } from '../audit/record-event';
+import { forUpdate } from '../row-lock';
 import { UNDELETE_WINDOW_DAYS } from '../../schemas/route';
 import { findRouteRow } from './get-route';
 
@@ -16,7 +17,7 @@ export function restorableUntil(deletedAt: Date): Date {
 export async function deleteRoute({ teamId, userId, routeId }: { teamId: number; userId: number; routeId: number }) {
   const { sequelize } = getDb();
   return sequelize.transaction(async (transaction) => {
-    const route = await findRouteRow({ teamId, routeId, transaction });
+    const route = await findRouteRow({ teamId, routeId, transaction, locked: true });
     const deletedAt = new Date();
     await route.update({ deletedAt, deletedById: userId }, { transaction });
     await recordEvent({ teamId, actorId: userId, action: 'route.deleted', targetType: 'route', targetId: routeId }, transaction);
@@ -27,7 +28,7 @@ export async function deleteRoute({ teamId, userId, routeId }: { teamId: number;
 export async function undeleteRoute({ teamId, userId, routeId, now = new Date() }: { teamId: number; userId: number; routeId: number; now?: Date }) {
   const { sequelize, models } = getDb();
   return sequelize.transaction(async (transaction) => {
-    const route = await models.Route.findOne({ where: { id: routeId, teamId }, transaction });
+    const route = await models.Route.findOne({ where: { id: routeId, teamId }, ...forUpdate(transaction) });
     if (!route) throw new AppError('NOT_FOUND', 'No such route.');
     if (!route.deletedAt) throw new AppError('CONFLICT', 'This route is not deleted.');
     if (now.getTime() > restorableUntil(route.deletedAt).getTime()) {

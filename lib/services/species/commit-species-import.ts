@@ -4,6 +4,7 @@ import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
 import type { SpeciesImportCommit } from '../../schemas/species';
 import { recordEvent } from '../audit/record-event';
+import { forUpdate } from '../row-lock';
 import { invalidateAfter } from './create-team-species';
 import { checkImportText } from './import-preview';
 import { importFiles, sha256 } from './import-storage';
@@ -16,7 +17,7 @@ export async function commitSpeciesImport({ teamId, userId, importId, input }: {
   const { sequelize, models } = getDb();
   try {
     return await sequelize.transaction(async (transaction) => {
-      const imp = await models.SpeciesImport.findOne({ where: { id: importId, teamId }, transaction });
+      const imp = await models.SpeciesImport.findOne({ where: { id: importId, teamId }, ...forUpdate(transaction) });
       if (!imp) throw new AppError('NOT_FOUND', 'No such import.');
       if (imp.status === 'committed') throw new AppError('CONFLICT', 'This file has already been imported.');
       const bytes = await importFiles.get(imp.storageKey);

@@ -7,6 +7,9 @@ import { fileStore, withPrefix } from '../../storage/file-store';
 // Stored keys are relative to that part ("team-3/….csv"), as they were when the folder was the only store.
 const imports = () => withPrefix(fileStore(), 'species-imports');
 
+/** The only form put() gives keys; a key from elsewhere (a team file) is checked against it before it is stored. */
+export const IMPORT_KEY_PATTERN = /^team-\d+\/[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}\.csv$/;
+
 export function sha256(bytes: Buffer): string {
   return createHash('sha256').update(bytes).digest('hex');
 }

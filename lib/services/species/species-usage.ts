@@ -17,13 +17,17 @@ export interface SpeciesUse {
 // replaced, never changed) and per state of the team's routes (every save or delete moves the stamp).
 const indexes = new WeakMap<SpeciesLookup, Map<number, { stamp: string; index: Map<string, SpeciesUse[]> }>>();
 
+// Every write to a route raises its version, so SUM(version) moves even when two saves share one updated_at
+// (PostgreSQL hands MAX(updated_at) back as a Date, which prints to whole seconds).
 async function routesStamp(teamId: number): Promise<string> {
   const row = (await getDb().models.Route.findOne({
-    attributes: [[fn('COUNT', col('id')), 'n'], [fn('MAX', col('updated_at')), 'at'], [fn('MAX', col('id')), 'last']],
+    attributes: [[fn('COUNT', col('id')), 'n'], [fn('SUM', col('version')), 'versions'], [fn('MAX', col('updated_at')), 'at'], [fn('MAX', col('id')), 'last']],
     where: { teamId, deletedAt: null },
     raw: true,
-  })) as unknown as { n: number; at: string | null; last: number | null } | null;
-  return row ? `${row.n}|${row.at}|${row.last}` : '0';
+  })) as unknown as { n: number; versions: number | string | null; at: Date | string | null; last: number | null } | null;
+  if (!row) return '0';
+  const at = row.at instanceof Date ? row.at.toISOString() : row.at;
+  return `${row.n}|${row.versions}|${at}|${row.last}`;
 }
 
 /** The team's routes (not deleted) whose steps use each species key, read through the team's lookup. */

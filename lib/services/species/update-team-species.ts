@@ -3,6 +3,7 @@ import { Op } from 'sequelize';
 import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
 import { recordEvent } from '../audit/record-event';
+import { forUpdate } from '../row-lock';
 import { invalidateAfter, readTeamSpecies } from './create-team-species';
 import { changeImpact } from './preview-species-change';
 import { toTeamSpeciesDto } from './species-dto';
@@ -13,7 +14,7 @@ export async function updateTeamSpecies({ teamId, userId, id, version, input }: 
   const { species, warnings } = readTeamSpecies(input);
   const { sequelize, models } = getDb();
   return sequelize.transaction(async (transaction) => {
-    const row = await models.TeamSpecies.findOne({ where: { id, teamId }, transaction });
+    const row = await models.TeamSpecies.findOne({ where: { id, teamId }, ...forUpdate(transaction) });
     if (!row) throw new AppError('NOT_FOUND', 'No such team species.');
     if (row.version !== version) {
       throw new AppError('CONFLICT', `Someone saved this species since you opened it (version ${row.version}, you had ${version}). Reload to see their values.`, {

@@ -14,11 +14,12 @@ function toCell(value: unknown): Cell {
   return JSON.stringify(value);
 }
 
-// Reads every team table inside one read transaction, so the file is one consistent moment of the team. DEFERRED (not the
-// app's usual IMMEDIATE) takes no write lock, so saves go on while a large team is exported.
+// Reads every team table inside one read transaction, so the file is one consistent moment of the team. On SQLite, DEFERRED
+// (not the app's usual IMMEDIATE) takes no write lock, so saves go on while a large team is exported. On PostgreSQL,
+// READ COMMITTED would give each SELECT its own moment; REPEATABLE READ gives the whole export one snapshot.
 export async function exportTeam({ teamId }: { teamId: number }): Promise<TeamExportFile> {
   const { sequelize, models } = getDb();
-  return sequelize.transaction({ type: Transaction.TYPES.DEFERRED }, async (transaction) => {
+  return sequelize.transaction({ type: Transaction.TYPES.DEFERRED, isolationLevel: Transaction.ISOLATION_LEVELS.REPEATABLE_READ }, async (transaction) => {
     const team = await models.Team.findByPk(teamId, { transaction });
     if (!team) throw new AppError('NOT_FOUND', 'No such team.');
     const tables = await transferTables(sequelize, transaction);

@@ -4,6 +4,7 @@ import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
 import type { TeamExportFile } from '../../schemas/team-transfer';
 import { recordEvent } from '../audit/record-event';
+import { IMPORT_KEY_PATTERN } from '../species/import-storage';
 import { remapJsonCell } from './remap-json';
 import { contentTables, transferTables, type TransferTable } from './transfer-tables';
 
@@ -86,6 +87,19 @@ export async function importTeam({ teamId, importerId, file }: { teamId: number;
   }
 }
 
+function booleanCell(value: Exclude<Cell, null>, where: string): boolean {
+  if (typeof value === 'boolean') return value;
+  if (value === 0 || value === 1) return value === 1;
+  return invalid(where, 'Expected true or false.');
+}
+
+// A Date goes to the driver in the target database's own format.
+function timestampCell(value: Exclude<Cell, null>, where: string): Date {
+  const at = typeof value === 'string' ? new Date(value) : null;
+  if (!at || Number.isNaN(at.getTime())) invalid(where, 'Expected a date and time.');
+  return at;
+}
+
 interface RowContext {
   table: TransferTable;
   row: Record<string, Cell>;
@@ -98,14 +112,14 @@ interface RowContext {
   deferred: Deferred[];
 }
 
-function rowValues({ table, row, at, teamId, importerId, users, ids, known, deferred }: RowContext): Record<string, Cell> {
+function rowValues({ table, row, at, teamId, importerId, users, ids, known, deferred }: RowContext): Record<string, Cell | Date> {
   const columnNames = new Set(table.columns.map((c) => c.name));
   for (const key of Object.keys(row)) if (!columnNames.has(key)) invalid(`${at}.${key}`, `${table.name} has no such column.`);
   const oldId = row.id;
   if (typeof oldId !== 'number' || !Number.isInteger(oldId) || oldId <= 0) invalid(`${at}.id`, 'Each row needs a positive whole-number id.');
   if (ids.get(table.name)?.has(oldId)) invalid(`${at}.id`, `Id ${oldId} appears twice in ${table.name}.`);
 
-  const values: Record<string, Cell> = {};
+  const values: Record<string, Cell | Date> = {};
   for (const column of table.columns) {
     if (column.name === 'id') continue;
     let value: Cell = row[column.name] ?? null;
@@ -125,9 +139,13 @@ function rowValues({ table, row, at, teamId, importerId, users, ids, known, defe
         value = null;
       }
     }
+    if (column.kind === 'boolean' && value !== null) value = booleanCell(value, where);
+    if (table.name === 'species_imports' && column.name === 'storage_key' && !(typeof value === 'string' && IMPORT_KEY_PATTERN.test(value))) {
+      invalid(where, 'A stored file key is team-<n>/<uuid>.csv.');
+    }
     value = remapJsonCell(table.name, column.name, value, where, { routes: ids.get('routes') ?? new Map(), users });
     if (column.notNull && value === null) invalid(where, 'Required.');
-    values[column.name] = value;
+    values[column.name] = column.kind === 'timestamp' && value !== null ? timestampCell(value, where) : value;
   }
   return values;
 }

@@ -33,6 +33,16 @@ export interface Column {
   notNull: boolean;
   /** 'teams', 'users', another transfer table, or null for a plain value */
   ref: string | null;
+  /**
+   * How a cell is read back in, so a file from either database loads into both: SQLite exports booleans as 0/1
+   * (TINYINT(1)) and times as its own text, PostgreSQL true/false and ISO strings.
+   */
+  kind: 'boolean' | 'timestamp' | 'plain';
+}
+
+function kindOf(type: string): Column['kind'] {
+  if (/^(BOOLEAN|TINYINT\(1\))$/i.test(type)) return 'boolean';
+  return /^(DATETIME|TIMESTAMP)/i.test(type) ? 'timestamp' : 'plain';
 }
 
 export interface TransferTable {
@@ -52,7 +62,9 @@ export async function transferTables(sequelize: Sequelize, transaction?: Transac
     const info = await qi.describeTable(name, { transaction } as Parameters<typeof qi.describeTable>[1]);
     const fks = (await qi.getForeignKeyReferencesForTable(name, { transaction })) as Array<{ columnName: string; referencedTableName: string }>;
     const refs: Record<string, string> = { ...Object.fromEntries(fks.map((fk) => [fk.columnName, fk.referencedTableName])), ...(SOFT_REFERENCES[name] ?? {}) };
-    const columns = Object.entries(info).map(([column, c]) => ({ name: column, notNull: !c.allowNull, ref: refs[column] ?? null }));
+    const columns = Object.entries(info).map(([column, c]) => ({
+      name: column, notNull: !c.allowNull, ref: refs[column] ?? null, kind: kindOf(c.type),
+    }));
     const hasTeam = columns.some((c) => c.name === 'team_id');
     if (!hasTeam && !columns.some((c) => c.name === 'route_id' && c.ref === 'routes')) continue;
     tables.push({ name, columns, scope: hasTeam ? 'team' : 'route' });

@@ -1,5 +1,5 @@
 import 'server-only';
-import type { Transaction } from 'sequelize';
+import { UniqueConstraintError, type Transaction } from 'sequelize';
 import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
 import { hashPassword } from '../../auth/password';
@@ -9,13 +9,14 @@ export async function createUser(
   transaction: Transaction,
 ) {
   const { User, UserPreference } = getDb().models;
-  const existing = await User.findOne({ where: { email }, transaction });
-  if (existing) {
-    throw new AppError('VALIDATION', 'That e-mail is already registered.', {
-      fields: { email: 'An account with this e-mail already exists. Sign in instead.' },
-    });
-  }
-  const user = await User.create({ name, email, passwordHash: await hashPassword(password) }, { transaction });
+  const taken = () => new AppError('VALIDATION', 'That e-mail is already registered.', {
+    fields: { email: 'An account with this e-mail already exists. Sign in instead.' },
+  });
+  if (await User.findOne({ where: { email }, transaction })) throw taken();
+  // Two sign-ups with one address at the same moment both pass the check; the unique index stops the second.
+  const user = await User.create({ name, email, passwordHash: await hashPassword(password) }, { transaction }).catch((error: unknown) => {
+    throw error instanceof UniqueConstraintError ? taken() : error;
+  });
   await UserPreference.create({ userId: user.id, activeTeamId: activeTeamId ?? null }, { transaction });
   return user;
 }

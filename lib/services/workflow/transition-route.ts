@@ -60,7 +60,7 @@ export async function transitionRoute({
   input: TransitionInput;
 }): Promise<TransitionOutcome> {
   return getDb().sequelize.transaction(async (transaction) => {
-    const route = await findRouteRow({ teamId, routeId, transaction });
+    const route = await findRouteRow({ teamId, routeId, transaction, locked: true });
     if (route.version !== input.version) {
       throw new AppError('CONFLICT', `This route changed elsewhere (now version ${route.version}; you saw version ${input.version}).`, {
         details: { currentVersion: route.version, status: route.status },

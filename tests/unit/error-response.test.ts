@@ -1,0 +1,30 @@
+// The one place an exception becomes an HTTP answer: a unique-index clash from two simultaneous creates is a 409, never a 500.
+import { UniqueConstraintError } from 'sequelize';
+import { describe, expect, it } from 'vitest';
+import { toErrorResponse } from '@/lib/api/error-response';
+import { AppError } from '@/lib/api/errors';
+
+describe('toErrorResponse', () => {
+  it('answers a unique-index clash with 409 CONFLICT in the standard shape, without the SQL', async () => {
+    const clash = new UniqueConstraintError({ message: 'Validation error: INSERT INTO team_species …', errors: [], fields: { key: 'C21H44(g)' } });
+    const res = toErrorResponse(clash);
+    expect(res.status).toBe(409);
+    const body = (await res.json()) as { error: { code: string; message: string } };
+    expect(body.error.code).toBe('CONFLICT');
+    expect(body.error.message).toMatch(/same moment/);
+    expect(JSON.stringify(body)).not.toMatch(/INSERT|team_species/);
+  });
+
+  it('keeps an AppError’s own status and an unknown error’s 500', async () => {
+    expect(toErrorResponse(new AppError('NOT_FOUND', 'No such route.')).status).toBe(404);
+    const quiet = console.error;
+    console.error = () => {};
+    try {
+      const res = toErrorResponse(new Error('boom'));
+      expect(res.status).toBe(500);
+      expect(JSON.stringify(await res.json())).not.toMatch(/boom/);
+    } finally {
+      console.error = quiet;
+    }
+  });
+});
