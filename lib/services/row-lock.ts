@@ -6,7 +6,6 @@ import type { Model, ModelStatic, Transaction } from 'sequelize';
  * SQLite ignores the lock; its write transactions (BEGIN IMMEDIATE) already run one at a time.
  * `of` names the table to lock when the read joins others (PostgreSQL refuses to lock the nullable side of a join).
  */
-// eslint-disable-next-line @typescript-eslint/no-explicit-any
-export function forUpdate(transaction: Transaction, of?: ModelStatic<Model<any, any>>) {
+export function forUpdate(transaction: Transaction, of?: ModelStatic<Model>) {
   return { transaction, lock: of ? { level: transaction.LOCK.UPDATE, of } : transaction.LOCK.UPDATE };
 }
