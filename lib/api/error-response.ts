@@ -1,5 +1,5 @@
 import { NextResponse } from 'next/server';
-import { UniqueConstraintError } from 'sequelize';
+import { DatabaseError, UniqueConstraintError } from 'sequelize';
 import type { z } from 'zod';
 import { ThermoError } from '../thermo/errors';
 import { isRouteTooLargeError } from '../thermo/route/route-errors';
@@ -15,6 +15,12 @@ export function zodFields(error: z.ZodError): Record<string, string> {
   return fields;
 }
 
+// SQLSTATE 40001 serialization failure, 40P01 deadlock detected: the database chose a loser among concurrent writers.
+function isWriteCollision(error: unknown): boolean {
+  const code = (error as { original?: { code?: unknown } } | null)?.original?.code;
+  return error instanceof DatabaseError && (code === '40001' || code === '40P01');
+}
+
 // The one place an exception becomes an HTTP answer; a 500 never carries a stack.
 export function toErrorResponse(error: unknown): Response {
   if (error instanceof AppError) {
@@ -26,7 +32,8 @@ export function toErrorResponse(error: unknown): Response {
     return NextResponse.json(errorBody(error.code, error.message, fields), { status: 400 });
   }
   // Two requests creating the same thing at once: the unique index refused the later one, nothing was written.
-  if (error instanceof UniqueConstraintError) {
+  // A PostgreSQL deadlock or serialization failure likewise rolled one transaction back whole.
+  if (error instanceof UniqueConstraintError || isWriteCollision(error)) {
     return NextResponse.json(errorBody('CONFLICT', 'Someone else saved the same record at the same moment. Reload and try again.'), { status: 409 });
   }
   if (isDatabaseUnavailable(error)) {
