@@ -1,10 +1,10 @@
 import { NextResponse } from 'next/server';
-import { DatabaseError, UniqueConstraintError } from 'sequelize';
 import type { z } from 'zod';
 import { ThermoError } from '../thermo/errors';
 import { isRouteTooLargeError } from '../thermo/route/route-errors';
 import { isDatabaseUnavailable } from './database-unavailable';
 import { AppError, errorBody } from './errors';
+import { isUniqueClash, isWriteCollision } from './write-collision';
 
 export function zodFields(error: z.ZodError): Record<string, string> {
   const fields: Record<string, string> = {};
@@ -13,12 +13,6 @@ export function zodFields(error: z.ZodError): Record<string, string> {
     fields[key] ??= issue.message;
   }
   return fields;
-}
-
-// SQLSTATE 40001 serialization failure, 40P01 deadlock detected: the database chose a loser among concurrent writers.
-function isWriteCollision(error: unknown): boolean {
-  const code = (error as { original?: { code?: unknown } } | null)?.original?.code;
-  return error instanceof DatabaseError && (code === '40001' || code === '40P01');
 }
 
 // The one place an exception becomes an HTTP answer; a 500 never carries a stack.
@@ -33,7 +27,7 @@ export function toErrorResponse(error: unknown): Response {
   }
   // Two requests creating the same thing at once: the unique index refused the later one, nothing was written.
   // A PostgreSQL deadlock or serialization failure likewise rolled one transaction back whole.
-  if (error instanceof UniqueConstraintError || isWriteCollision(error)) {
+  if (isUniqueClash(error) || isWriteCollision(error)) {
     return NextResponse.json(errorBody('CONFLICT', 'Someone else saved the same record at the same moment. Reload and try again.'), { status: 409 });
   }
   if (isDatabaseUnavailable(error)) {

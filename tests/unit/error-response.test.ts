@@ -6,13 +6,30 @@ import { AppError } from '@/lib/api/errors';
 
 describe('toErrorResponse', () => {
   it('answers a unique-index clash with 409 CONFLICT in the standard shape, without the SQL', async () => {
-    const clash = new UniqueConstraintError({ message: 'Validation error: INSERT INTO team_species …', errors: [], fields: { key: 'C21H44(g)' } });
-    const res = toErrorResponse(clash);
-    expect(res.status).toBe(409);
-    const body = (await res.json()) as { error: { code: string; message: string } };
-    expect(body.error.code).toBe('CONFLICT');
-    expect(body.error.message).toMatch(/same moment/);
-    expect(JSON.stringify(body)).not.toMatch(/INSERT|team_species/);
+    // As each driver reports it: PostgreSQL's SQLSTATE 23505, SQLite's message.
+    const parents = [
+      Object.assign(new Error('duplicate key value violates unique constraint "team_species_team_key"'), { code: '23505', sql: 'INSERT INTO team_species …' }),
+      Object.assign(new Error('SQLITE_CONSTRAINT: UNIQUE constraint failed: team_species.team_id, team_species.key'), { code: 'SQLITE_CONSTRAINT', sql: 'INSERT INTO team_species …' }),
+    ];
+    for (const parent of parents) {
+      const res = toErrorResponse(new UniqueConstraintError({ parent, errors: [], fields: { key: 'C21H44(g)' } } as never));
+      expect(res.status, parent.message).toBe(409);
+      const body = (await res.json()) as { error: { code: string; message: string } };
+      expect(body.error.code).toBe('CONFLICT');
+      expect(body.error.message).toMatch(/same moment/);
+      expect(JSON.stringify(body)).not.toMatch(/INSERT|team_species/);
+    }
+  });
+
+  it('leaves other constraint failures SQLite files under the same class (a trigger abort, a CHECK) as 500', () => {
+    const parent = Object.assign(new Error('SQLITE_CONSTRAINT: simulated failure'), { code: 'SQLITE_CONSTRAINT', sql: 'UPDATE step_flags …' });
+    const quiet = console.error;
+    console.error = () => {};
+    try {
+      expect(toErrorResponse(new UniqueConstraintError({ parent, errors: [] } as never)).status).toBe(500);
+    } finally {
+      console.error = quiet;
+    }
   });
 
   it('answers a PostgreSQL deadlock (40P01) or serialization failure (40001) with 409, other database errors with 500', async () => {

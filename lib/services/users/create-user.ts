@@ -1,7 +1,8 @@
 import 'server-only';
-import { UniqueConstraintError, type Transaction } from 'sequelize';
+import type { Transaction } from 'sequelize';
 import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
+import { isUniqueClash } from '../../api/write-collision';
 import { hashPassword } from '../../auth/password';
 
 export async function createUser(
@@ -15,7 +16,7 @@ export async function createUser(
   if (await User.findOne({ where: { email }, transaction })) throw taken();
   // Two sign-ups with one address at the same moment both pass the check; the unique index stops the second.
   const user = await User.create({ name, email, passwordHash: await hashPassword(password) }, { transaction }).catch((error: unknown) => {
-    throw error instanceof UniqueConstraintError ? taken() : error;
+    throw isUniqueClash(error) ? taken() : error;
   });
   await UserPreference.create({ userId: user.id, activeTeamId: activeTeamId ?? null }, { transaction });
   return user;
