@@ -60,7 +60,7 @@ export async function runEngineBench(): Promise<Record<string, number>> {
 
   const tIndex = performance.now();
   const file = JSON.parse(
-    readFileSync(path.resolve(__dirname, '../db/data/species-library.json'), 'utf8'),
+    readFileSync(path.resolve(__dirname, '../lib/thermo/data/species-library.json'), 'utf8'),
   ) as SpeciesLibraryFile;
   const fresh = lib.layeredLookup(file.species, lib.builtinLookup);
   figures.library_parse_and_index_ms = performance.now() - tIndex;

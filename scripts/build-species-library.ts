@@ -1,4 +1,4 @@
-// Builds db/data/species-library.json from the shared reference data so the committed
+// Builds lib/thermo/data/species-library.json from the shared reference data so the committed
 // file can be regenerated and diffed. Run: npx tsx scripts/build-species-library.ts
 // With --check it only compares and exits 1 if the committed file is stale.
 import { readFileSync, writeFileSync } from 'node:fs';
@@ -15,8 +15,8 @@ import type {
 } from '../lib/thermo/species-types';
 
 const ROOT = path.resolve(__dirname, '..');
-const DATA = path.resolve(ROOT, '../shared/data/thermo');
-const OUT = path.join(ROOT, 'db/data/species-library.json');
+const DATA = path.join(ROOT, 'lib/thermo/data/source/thermo');
+const OUT = path.join(ROOT, 'lib/thermo/data/species-library.json');
 
 interface CsvRow {
   key: string;
@@ -219,7 +219,7 @@ function main(): void {
     meta: {
       standardPressure_bar: 1,
       referenceTemperature_K: 298.15,
-      generatedBy: 'scripts/build-species-library.ts from ../shared/data/thermo/{species-298.csv,nasa9-coefficients.json}',
+      generatedBy: 'scripts/build-species-library.ts from lib/thermo/data/source/thermo/{species-298.csv,nasa9-coefficients.json}',
       sources: SOURCES,
       notes: [
         'Energies in kJ/mol, entropies and heat capacities in J/(mol K), at 298.15 K and 1 bar.',

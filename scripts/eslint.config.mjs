@@ -3,7 +3,7 @@ import reactHooks from 'eslint-plugin-react-hooks';
 import tseslint from 'typescript-eslint';
 
 export default tseslint.config(
-  { ignores: ['node_modules/**', '.next/**', 'var/**', 'test-results/**', 'playwright-report/**', 'next-env.d.ts', 'db/data/**'] },
+  { ignores: ['node_modules/**', '.next/**', 'var/**', 'test-results/**', 'playwright-report/**', 'next-env.d.ts', 'lib/thermo/data/**'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

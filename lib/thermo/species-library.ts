@@ -1,6 +1,6 @@
 // The built-in species library: loaded once per process from the committed JSON,
 // indexed by key (constant-time lookup) and by common name per phase.
-import libraryJson from '../../db/data/species-library.json';
+import libraryJson from './data/species-library.json';
 import { editDistance } from './edit-distance';
 import type { SpeciesLibraryFile, SpeciesRecord } from './species-types';
 

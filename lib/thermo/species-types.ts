@@ -1,4 +1,4 @@
-// Shape of db/data/species-library.json (our own format) and of team-supplied species.
+// Shape of lib/thermo/data/species-library.json (our own format) and of team-supplied species.
 
 export type LibraryPhase = 'g' | 'l' | 's' | 'aq';
 

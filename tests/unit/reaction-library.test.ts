@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import reactionLibrary from '@/db/data/reaction-library.json';
+import reactionLibrary from '@/lib/thermo/data/reaction-library.json';
 import { evaluateStep } from '@/lib/thermo/evaluate';
 
 describe('palette reaction library', () => {

@@ -1,4 +1,4 @@
-import reactionLibrary from '../../../db/data/reaction-library.json';
+import reactionLibrary from '@/lib/thermo/data/reaction-library.json';
 import { parseEquation } from '../../thermo/equation';
 import { builtinLookup } from '../../thermo/species-library';
 

@@ -1,5 +1,5 @@
 // Driver reactions for coupling remedies: the seed list, and each driver parsed once per route.
-import driversJson from '../../../db/data/driver-reactions.json';
+import driversJson from '../data/driver-reactions.json';
 import type { SpeciesLookup } from '../species-library';
 import type { DriverReaction, RouteWarning } from './route-types';
 import { readStoichiometry, type Stoichiometry } from './stoichiometry';

@@ -31,7 +31,7 @@ describe('RouteEvaluateRequestSchema', () => {
   });
 });
 
-describe('DEFAULT_DRIVERS (db/data/driver-reactions.json)', () => {
+describe('DEFAULT_DRIVERS (lib/thermo/data/driver-reactions.json)', () => {
   it('has 8–12 drivers with unique ids, basis "common practice"', () => {
     expect(DEFAULT_DRIVERS.length).toBeGreaterThanOrEqual(8);
     expect(DEFAULT_DRIVERS.length).toBeLessThanOrEqual(12);

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { checkConsistency, CONSISTENCY_TOLERANCE_KJ, elementEntropies, formationEntropy } from '@/lib/species/consistency';
 import { builtinLookup, builtinSpecies } from '@/lib/thermo/species-library';
 
-// Rows of the NBS tables (Wagman et al., J. Phys. Chem. Ref. Data 11, Suppl. 2, 1982), as carried in db/data/species-library.json.
+// Rows of the NBS tables (Wagman et al., J. Phys. Chem. Ref. Data 11, Suppl. 2, 1982), as carried in lib/thermo/data/species-library.json.
 const nbs = (key: string) => {
   const r = builtinLookup.get(key)!;
   expect(r.source).toBe('NBS 1982');

@@ -6,7 +6,7 @@ import { describe, expect, it } from 'vitest';
 const ROOT = path.resolve(__dirname, '../../..');
 
 describe('scripts/build-species-library.ts', () => {
-  it('reproduces db/data/species-library.json byte for byte', () => {
+  it('reproduces lib/thermo/data/species-library.json byte for byte', () => {
     const r = spawnSync(path.join(ROOT, 'node_modules/.bin/tsx'), ['scripts/build-species-library.ts', '--check'], {
       cwd: ROOT,
       encoding: 'utf8',

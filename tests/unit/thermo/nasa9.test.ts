@@ -1,5 +1,5 @@
 // NASA-9 evaluation against the NASA Glenn file's own numbers (McBride, Zehe & Gordon 2002),
-// as recorded in ../shared/data/thermo/nasa9-coefficients.json (`at_298_15_K`).
+// as recorded in lib/thermo/data/source/thermo/nasa9-coefficients.json (`at_298_15_K`).
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -12,7 +12,7 @@ interface SharedEntry {
   at_298_15_K: { H298_from_polynomial_J_per_mol: number; S298_from_polynomial_J_per_mol_K: number; Cp298_from_polynomial_J_per_mol_K: number };
 }
 const shared = JSON.parse(
-  readFileSync(path.resolve(__dirname, '../../../../shared/data/thermo/nasa9-coefficients.json'), 'utf8'),
+  readFileSync(path.resolve(__dirname, '../../../lib/thermo/data/source/thermo/nasa9-coefficients.json'), 'utf8'),
 ) as { species: SharedEntry[] };
 
 const cpOf = (key: string): Nasa9Cp => {
