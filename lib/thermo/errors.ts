@@ -8,7 +8,10 @@ export type ThermoErrorCode =
   | 'INVALID_VALUE'
   | 'OUT_OF_RANGE'
   | 'ZERO_ACTIVITY'
-  | 'MISSING_DATA';
+  | 'MISSING_DATA'
+  | 'INVALID_STRUCTURE'
+  | 'UNSUPPORTED_STRUCTURE'
+  | 'AMBIGUOUS_NAME';
 
 export interface ThermoErrorOptions {
   field?: string;
