@@ -3,6 +3,8 @@ import { getDb } from '@/db';
 import { POST as evaluateRoute } from '@/app/api/routes/[routeId]/evaluate/route';
 import { GET as exportTeamRoute } from '@/app/api/teams/[teamId]/export/route';
 import { POST as importTeamRoute } from '@/app/api/teams/[teamId]/import/route';
+import { GET as importFileRoute } from '@/app/api/species/imports/[importId]/file/route';
+import { uploadSpeciesImport } from '@/lib/services/species/upload-species-import';
 import { createComment } from '@/lib/services/comments/create-comment';
 import { recordDecision } from '@/lib/services/decisions/record-decision';
 import { listDrivers } from '@/lib/services/drivers/list-drivers';
@@ -88,10 +90,12 @@ describe('team export and import', () => {
 
   it('imports into an empty team: same routes, evaluations, review and decisions', async () => {
     const target = await makeTeamWithLead('restored');
+    // The same people are members here, so their routes, comments and mentions stay theirs.
+    for (const userId of [team.designerId, team.reviewerId]) await getDb().models.Membership.create({ teamId: target.teamId, userId, role: 'designer' });
     await listDrivers({ teamId: target.teamId }); // a new team's default drivers do not make it "not empty"
     const res = await callRoute(importTeamRoute, { method: 'POST', userId: target.leadId, params: { teamId: String(target.teamId) }, body: file });
     expect(res.status, JSON.stringify(res.body)).toBe(201);
-    expect(res.body).toMatchObject({ counts: { routes: 2 }, unmatchedPeople: [] });
+    expect(res.body).toMatchObject({ counts: { routes: 2 } });
 
     expect(await teamCounts(target.teamId)).toEqual(await teamCounts(team.teamId));
     const evaluated = await evaluations(target.teamId, target.leadId);
@@ -199,13 +203,77 @@ describe('team export and import', () => {
     expect(res.status, JSON.stringify(res.body)).toBe(201);
   });
 
-  it('maps people without an account here to the importing lead or to nobody', async () => {
+  it('credits only members of the importing team and never says which addresses have accounts', async () => {
+    // The designer has an account, but not in this team: their rows become "former member" (or the lead where required).
     const target = await makeTeamWithLead('strangers');
-    const renamed = JSON.parse(JSON.stringify(file).replaceAll(team.email.designer, 'someone.new@elsewhere.example')) as typeof file;
-    const res = await callRoute(importTeamRoute, { method: 'POST', userId: target.leadId, params: { teamId: String(target.teamId) }, body: renamed });
+    const res = await callRoute(importTeamRoute, { method: 'POST', userId: target.leadId, params: { teamId: String(target.teamId) }, body: file });
     expect(res.status, JSON.stringify(res.body)).toBe(201);
-    expect(res.body).toMatchObject({ unmatchedPeople: ['someone.new@elsewhere.example'] });
-    const routes = await getDb().models.Route.findAll({ where: { teamId: target.teamId } });
+    expect(JSON.stringify(res.body)).not.toMatch(/@/);
+    expect(res.body).not.toHaveProperty('unmatchedPeople');
+    expect(res.body).toMatchObject({ membersCredited: 0, formerMembers: file.people.length });
+    const { Route, Comment, StepFlag } = getDb().models;
+    const routes = await Route.findAll({ where: { teamId: target.teamId } });
     expect(routes.every((r) => r.createdById === target.leadId)).toBe(true);
+    const comments = await Comment.findAll({ where: { teamId: target.teamId } });
+    expect(comments.length).toBeGreaterThan(0);
+    expect(comments.every((c) => c.authorId === null)).toBe(true);
+    expect(comments.every((c) => (c.mentions as unknown[]).length === 0)).toBe(true);
+    expect((await StepFlag.findAll({ where: { teamId: target.teamId } })).every((f) => f.createdById === null)).toBe(true);
+  });
+
+  it('refuses, naming row and column, every cell that would break the team later', async () => {
+    const clone = () => JSON.parse(JSON.stringify(file)) as typeof file;
+    type Edit = (f: typeof file) => void;
+    const cases: Array<[string, Edit, string, RegExp]> = [
+      ['step conditions not JSON', (f) => { f.tables.steps![0]!.conditions = '{"temperature": '; }, 'tables.steps[0].conditions', /JSON/],
+      ['step conditions of the wrong shape', (f) => { f.tables.steps![0]!.conditions = '{"temperature": 5}'; }, 'tables.steps[0].conditions', /temperature/],
+      ['species aliases not JSON', (f) => { f.tables.team_species![0]!.aliases = 'methanol, wood spirit'; }, 'tables.team_species[0].aliases', /JSON/],
+      ['species aliases not a list', (f) => { f.tables.team_species![0]!.aliases = '{"a": 1}'; }, 'tables.team_species[0].aliases', /./],
+      ['unknown route status', (f) => { f.tables.routes![0]!.status = 'launched'; }, 'tables.routes[0].status', /route status/],
+      ['negative version', (f) => { f.tables.routes![1]!.version = -3; }, 'tables.routes[1].version', /at least 1/],
+      ['zero species version', (f) => { f.tables.team_species![0]!.version = 0; }, 'tables.team_species[0].version', /at least 1/],
+      ['file name with CR/LF', (f) => { f.tables.species_imports = [importRow({ file_name: 'a.csv\r\nX-Injected: 1' })]; }, 'tables.species_imports[0].file_name', /ASCII/],
+      ['file name with non-ASCII', (f) => { f.tables.species_imports = [importRow({ file_name: 'données.csv' })]; }, 'tables.species_imports[0].file_name', /ASCII/],
+      ['over-long route name', (f) => { f.tables.routes![0]!.name = 'x'.repeat(161); }, 'tables.routes[0].name', /160/],
+      ['flag category', (f) => { f.tables.step_flags![0]!.category = 'vibes'; }, 'tables.step_flags[0].category', /category/],
+      ['text in a number column', (f) => { f.tables.team_species![0]!.dfh_kj = '-205'; }, 'tables.team_species[0].dfh_kj', /number/],
+    ];
+    for (const [label, edit, field, message] of cases) {
+      const target = await makeTeamWithLead('bad-cell');
+      const body = clone();
+      edit(body);
+      const res = await callRoute(importTeamRoute, { method: 'POST', userId: target.leadId, params: { teamId: String(target.teamId) }, body });
+      expect(res.status, label).toBe(400);
+      const fields = errorOf(res.body).fields ?? {};
+      expect(Object.keys(fields), label).toEqual([field]);
+      expect(fields[field], label).toMatch(message);
+      expect(await teamCounts(target.teamId), label).toEqual({ routes: 0, revisions: 0, comments: 0, flags: 0, decisions: 0, transitions: 0, species: 0 });
+    }
+  });
+
+  it("gives imported species files a fresh key of the importing team, so another team's upload never downloads", async () => {
+    const csv = 'formula,phase,name,dfH,S,provenance,reference\nC2H6O,l,Secret ethanol,-277,160,citation,CRC Handbook (test row)\n';
+    const upload = await uploadSpeciesImport({ teamId: team.teamId, userId: team.leadId, fileName: 'secret.csv', bytes: Buffer.from(csv), text: csv });
+    const exported = await callRoute(exportTeamRoute, { userId: team.leadId, params: { teamId: String(team.teamId) } });
+    const withUpload = exported.body as typeof file;
+    const row = withUpload.tables.species_imports!.find((r) => r.id === upload.id)!;
+    expect(row.storage_key).toMatch(new RegExp(`^team-${team.teamId}/`));
+
+    const target = await makeTeamWithLead('key-thief');
+    const res = await callRoute(importTeamRoute, { method: 'POST', userId: target.leadId, params: { teamId: String(target.teamId) }, body: withUpload });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    const imported = await getDb().models.SpeciesImport.findOne({ where: { teamId: target.teamId, fileName: 'secret.csv' } });
+    expect(imported!.storageKey).toMatch(new RegExp(`^team-${target.teamId}/[0-9a-f-]{36}\\.csv$`));
+    const download = await callRoute(importFileRoute, { userId: target.leadId, params: { importId: String(imported!.id) } });
+    expect(download.status).toBe(410);
+    expect(JSON.stringify(download.body)).not.toContain('Secret ethanol');
   });
 });
+
+function importRow(overrides: Record<string, unknown>) {
+  return {
+    id: 1, team_id: 1, file_name: 'species.csv', checksum: 'a'.repeat(64), byte_size: 10, row_count: 1,
+    storage_key: 'team-7/0f8e2c1a-5b4d-4c3e-9a2b-1d0e9f8a7b6c.csv', status: 'committed', imported_by_id: null,
+    created_count: 1, overridden_count: 0, skipped_count: 0, committed_at: null, created_at: '2026-11-30T09:15:00.000Z', ...overrides,
+  };
+}

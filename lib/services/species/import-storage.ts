@@ -14,9 +14,14 @@ export function sha256(bytes: Buffer): string {
   return createHash('sha256').update(bytes).digest('hex');
 }
 
+/** A new key in the team's own part of the import store. */
+export function newImportKey(teamId: number): string {
+  return path.posix.join(`team-${teamId}`, `${randomUUID()}.csv`);
+}
+
 export const importFiles = {
   async put(teamId: number, bytes: Buffer): Promise<string> {
-    const storageKey = path.posix.join(`team-${teamId}`, `${randomUUID()}.csv`);
+    const storageKey = newImportKey(teamId);
     await imports().put(storageKey, bytes);
     return storageKey;
   },

@@ -4,7 +4,8 @@ import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
 import type { TeamExportFile } from '../../schemas/team-transfer';
 import { recordEvent } from '../audit/record-event';
-import { IMPORT_KEY_PATTERN } from '../species/import-storage';
+import { IMPORT_KEY_PATTERN, newImportKey } from '../species/import-storage';
+import { COLUMN_RULES, checkCell, typeRule } from './column-rules';
 import { remapJsonCell } from './remap-json';
 import { contentTables, transferTables, type TransferTable } from './transfer-tables';
 
@@ -13,8 +14,10 @@ type Deferred = { table: string; newId: number; column: string; ref: string; old
 
 export interface ImportTeamResult {
   counts: Record<string, number>;
-  /** e-mails in the file with no account here: their rows name the importing lead (required columns) or nobody */
-  unmatchedPeople: string[];
+  /** people of the file who are members of the importing team, and so keep their routes, comments and flags */
+  membersCredited: number;
+  /** people of the file who are not: their rows show "former member" (or name the importing lead where one is required) */
+  formerMembers: number;
 }
 
 function invalid(where: string, message: string): never {
@@ -36,15 +39,16 @@ export async function importTeam({ teamId, importerId, file }: { teamId: number;
         if (Number(counted?.n ?? 0) > 0) throw new AppError('CONFLICT', 'Import goes into an empty team only: this team already has routes or data. Create a new team and import there.');
       }
 
+      // Only the importing team's own members are credited: matching every account would tell the importer which
+      // addresses have one, and would put strangers' names on this team's rows.
       const emails = file.people.map((p) => p.email.trim().toLowerCase());
-      const accounts = await models.User.findAll({ where: { email: { [Op.in]: emails } }, attributes: ['id', 'email'], transaction });
+      const memberIds = (await models.Membership.findAll({ where: { teamId }, attributes: ['userId'], transaction })).map((m) => m.userId);
+      const accounts = await models.User.findAll({ where: { email: { [Op.in]: emails }, id: { [Op.in]: memberIds } }, attributes: ['id', 'email'], transaction });
       const byEmail = new Map(accounts.map((a) => [a.email, a.id]));
       const users = new Map<number, number>();
-      const unmatchedPeople: string[] = [];
       for (const person of file.people) {
         const id = byEmail.get(person.email.trim().toLowerCase());
-        if (id === undefined) unmatchedPeople.push(person.email);
-        else users.set(person.id, id);
+        if (id !== undefined) users.set(person.id, id);
       }
 
       const ids = new Map<string, Map<number, number>>();
@@ -58,6 +62,8 @@ export async function importTeam({ teamId, importerId, file }: { teamId: number;
         const rows = file.tables[table.name] ?? [];
         for (const [index, row] of rows.entries()) {
           const at = `tables.${table.name}[${index}]`;
+          // A reviewer who is not a member here cannot review here; the rest of the route comes along.
+          if (table.name === 'route_reviewers' && !users.has(Number(row.user_id))) continue;
           const values = rowValues({ table, row, at, teamId, importerId, users, ids, known, deferred });
           const columns = Object.keys(values);
           // The leading comment makes Sequelize's sqlite dialect use all() instead of run(), so RETURNING gives the new id.
@@ -68,7 +74,7 @@ export async function importTeam({ teamId, importerId, file }: { teamId: number;
           map.set(row.id as number, inserted[0]!.id);
           for (const d of deferred) if (d.newId === -1) d.newId = inserted[0]!.id;
         }
-        counts[table.name] = rows.length;
+        counts[table.name] = map.size;
       }
 
       for (const d of deferred) {
@@ -78,7 +84,7 @@ export async function importTeam({ teamId, importerId, file }: { teamId: number;
       }
       if (file.tables.driver_reactions) await models.Team.update({ driversSeededAt: new Date() }, { where: { id: teamId }, transaction });
       await recordEvent({ teamId, actorId: importerId, action: 'team.imported', targetType: 'team', targetId: teamId, data: { from: file.team.name, counts } }, transaction);
-      return { counts, unmatchedPeople };
+      return { counts, membersCredited: users.size, formerMembers: file.people.length - users.size };
     });
   } catch (error) {
     // A constraint the checks above did not foresee (a duplicate key, a wrong type) is still the file's fault, not a 500.
@@ -140,8 +146,16 @@ function rowValues({ table, row, at, teamId, importerId, users, ids, known, defe
       }
     }
     if (column.kind === 'boolean' && value !== null) value = booleanCell(value, where);
-    if (table.name === 'species_imports' && column.name === 'storage_key' && !(typeof value === 'string' && IMPORT_KEY_PATTERN.test(value))) {
-      invalid(where, 'A stored file key is team-<n>/<uuid>.csv.');
+    if (table.name === 'species_imports' && column.name === 'storage_key') {
+      if (!(typeof value === 'string' && IMPORT_KEY_PATTERN.test(value))) invalid(where, 'A stored file key is team-<n>/<uuid>.csv.');
+      // The file itself is not in a team file: a fresh key under the importing team points at nothing, so its download
+      // answers "no longer there" and can never reach another team's upload.
+      value = newImportKey(teamId);
+    }
+    const rule = column.ref || column.kind !== 'plain' ? null : (COLUMN_RULES[table.name]?.[column.name] ?? typeRule(column.type));
+    if (rule && value !== null) {
+      const problem = checkCell(rule, value);
+      if (problem) invalid(where, problem);
     }
     value = remapJsonCell(table.name, column.name, value, where, { routes: ids.get('routes') ?? new Map(), users });
     if (column.notNull && value === null) invalid(where, 'Required.');

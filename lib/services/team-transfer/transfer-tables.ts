@@ -38,6 +38,8 @@ export interface Column {
    * (TINYINT(1)) and times as its own text, PostgreSQL true/false and ISO strings.
    */
   kind: 'boolean' | 'timestamp' | 'plain';
+  /** the SQL type as the database reports it, e.g. VARCHAR(160) or JSON */
+  type: string;
 }
 
 function kindOf(type: string): Column['kind'] {
@@ -63,7 +65,7 @@ export async function transferTables(sequelize: Sequelize, transaction?: Transac
     const fks = (await qi.getForeignKeyReferencesForTable(name, { transaction })) as Array<{ columnName: string; referencedTableName: string }>;
     const refs: Record<string, string> = { ...Object.fromEntries(fks.map((fk) => [fk.columnName, fk.referencedTableName])), ...(SOFT_REFERENCES[name] ?? {}) };
     const columns = Object.entries(info).map(([column, c]) => ({
-      name: column, notNull: !c.allowNull, ref: refs[column] ?? null, kind: kindOf(c.type),
+      name: column, notNull: !c.allowNull, ref: refs[column] ?? null, kind: kindOf(c.type), type: c.type,
     }));
     const hasTeam = columns.some((c) => c.name === 'team_id');
     if (!hasTeam && !columns.some((c) => c.name === 'route_id' && c.ref === 'routes')) continue;
