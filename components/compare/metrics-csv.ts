@@ -1,5 +1,5 @@
 // The metrics table as CSV: numbers stay numbers (energies in the reader's unit), text rows as shown.
-import Papa from 'papaparse';
+import { writeCsv } from '@/lib/csv/write-csv';
 import type { Comparison, MetricKey, RouteMetrics } from '@/lib/compare/compare-types';
 import { METRIC_ROWS } from '@/lib/compare/metric-rows';
 import { energyFromKJ, energyUnitLabel } from '../ladder/energy-format';
@@ -25,6 +25,5 @@ export function metricsCsv(comparison: Comparison, units: MetricUnits, visible: 
     ...comparison.routes.map((route) => cell(r.key, route.metrics, units)),
     r.best === 'none' ? '' : comparison.routes.filter((route) => (comparison.best[r.key] ?? []).includes(route.id)).map((route) => route.name).join('; '),
   ]);
-  // A name like "=HYPERLINK(…)" must not run as a formula in a spreadsheet.
-  return Papa.unparse([header, ...body], { escapeFormulae: true });
+  return writeCsv([header, ...body]);
 }
