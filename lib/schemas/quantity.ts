@@ -8,10 +8,29 @@ export const QuantityString = z.string().trim().min(1).max(64);
 
 export const SpeciesName = z.string().trim().min(1).max(120);
 
-export function speciesMap<T extends z.ZodType>(value: T) {
+// Names that are properties of every JavaScript object: as a map key they would be dropped or change the object's
+// prototype instead of being read, so a key the user typed could silently vanish.
+export const RESERVED_KEYS: ReadonlySet<string> = new Set(['__proto__', 'constructor', 'prototype']);
+
+export function isReservedKey(key: string): boolean {
+  return RESERVED_KEYS.has(key);
+}
+
+/** z.record that refuses reserved keys by name, checked on the raw input before the record is rebuilt. */
+export function safeRecord<K extends z.ZodType<string, string>, V extends z.ZodType>(key: K, value: V) {
   return z
-    .record(SpeciesName, value)
-    .refine((m) => Object.keys(m).length <= MAX_MAP_ENTRIES, { message: `at most ${MAX_MAP_ENTRIES} species` });
+    .unknown()
+    .superRefine((raw, ctx) => {
+      if (raw === null || typeof raw !== 'object' || Array.isArray(raw)) return;
+      for (const k of Object.keys(raw)) {
+        if (isReservedKey(k)) ctx.addIssue({ code: 'custom', path: [k], message: `"${k}" cannot be used as a name here.` });
+      }
+    })
+    .pipe(z.record(key, value));
+}
+
+export function speciesMap<T extends z.ZodType>(value: T) {
+  return safeRecord(SpeciesName, value).refine((m) => Object.keys(m).length <= MAX_MAP_ENTRIES, { message: `at most ${MAX_MAP_ENTRIES} species` });
 }
 
 export const PositiveFinite = z.number().finite().positive();

@@ -2,7 +2,7 @@
 // (lib/schemas/route-evaluate.ts) plus a `stepwell` header with what only the board needs.
 import { z } from 'zod';
 import { MAX_ROUTE_LINKS, MAX_ROUTE_STEPS } from '../thermo/route/route-limits';
-import { PositiveFinite, QuantityString, SpeciesName, speciesMap } from './quantity';
+import { PositiveFinite, QuantityString, SpeciesName, safeRecord, speciesMap } from './quantity';
 import { StepKey } from './route';
 
 export const ROUTE_FILE_FORMAT = 'stepwell.route/1';
@@ -12,8 +12,8 @@ const Position = z.strictObject({ x: z.number().finite(), y: z.number().finite()
 export const StepwellHeader = z.strictObject({
   format: z.literal(ROUTE_FILE_FORMAT, { message: `The header's format is "${ROUTE_FILE_FORMAT}".` }),
   name: z.string().trim().min(1, { message: 'Name the route.' }).max(160),
-  positions: z.record(StepKey, Position).optional(),
-  notes: z.record(StepKey, z.string().max(4000)).optional(),
+  positions: safeRecord(StepKey, Position).optional(),
+  notes: safeRecord(StepKey, z.string().max(4000)).optional(),
 });
 export type StepwellHeader = z.infer<typeof StepwellHeader>;
 

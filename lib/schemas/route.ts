@@ -1,11 +1,14 @@
 import { z } from 'zod';
 import { DEFAULT_MARGINAL_THRESHOLD_KJ, MAX_ROUTE_LINKS, MAX_ROUTE_STEPS, MIN_YIELD_FRACTION } from '../thermo/route/route-limits';
-import { PositiveFinite, QuantityString, SpeciesName, speciesMap } from './quantity';
+import { PositiveFinite, QuantityString, SpeciesName, isReservedKey, speciesMap } from './quantity';
 
 export { ROUTE_STATUSES } from './workflow';
 
 const Quantity = z.union([QuantityString, z.literal('')]);
-export const StepKey = z.string().regex(/^[A-Za-z0-9_-]{1,64}$/, { message: 'Use letters, digits, - or _ (at most 64).' });
+export const StepKey = z
+  .string()
+  .regex(/^[A-Za-z0-9_-]{1,64}$/, { message: 'Use letters, digits, - or _ (at most 64).' })
+  .refine((key) => !isReservedKey(key), { message: 'This id is reserved; choose another.' });
 
 // A step as the editor saves it: every field of an evaluate request, plus yield, position and notes.
 // The equation may be blank or unfinished while someone is still typing; evaluation reports it per step.

@@ -1,6 +1,7 @@
 // Team species and the species library's queries, shared by the form, the CSV rows and the handlers.
 import { z } from 'zod';
 import { ENERGY_UNITS, ENTROPY_UNITS } from '../species/units';
+import { safeRecord } from './quantity';
 
 export const SPECIES_PHASES = ['g', 'l', 's', 'aq'] as const;
 export const SPECIES_ORIGINS = ['library', 'team'] as const;
@@ -66,7 +67,7 @@ export type DuplicateChoice = (typeof DUPLICATE_CHOICES)[number];
 
 export const SpeciesImportCommit = z.strictObject({
   /** per species key of a duplicate row */
-  choices: z.record(z.string().min(1).max(120), z.enum(DUPLICATE_CHOICES)).default({}),
+  choices: safeRecord(z.string().min(1).max(120), z.enum(DUPLICATE_CHOICES)).default({}),
   /** for every duplicate without its own choice */
   otherwise: z.enum(DUPLICATE_CHOICES).nullable().default(null),
 });

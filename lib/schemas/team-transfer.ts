@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { safeRecord } from './quantity';
 
 export const TEAM_EXPORT_FORMAT = 'stepwell.team/1';
 
@@ -10,7 +11,7 @@ export const TeamExportFile = z.strictObject({
   exportedAt: z.string().max(40),
   team: z.strictObject({ id: z.number().int(), name: z.string().max(120) }),
   people: z.array(z.strictObject({ id: z.number().int().positive(), email: z.string().max(254), name: z.string().max(120) })).max(10_000),
-  tables: z.record(z.string().max(64), z.array(z.record(z.string().max(64), cell)).max(500_000)),
+  tables: safeRecord(z.string().max(64), z.array(safeRecord(z.string().max(64), cell)).max(500_000)),
   /** what the export could not carry, in words */
   notes: z.array(z.string().max(400)).max(20).optional(),
 });

@@ -163,6 +163,26 @@ describe('POST /api/routes/import', () => {
     expect(await count()).toBe(before);
   });
 
+  it('answers a __proto__ key anywhere in the file with 400 naming the field, and creates nothing', async () => {
+    const count = () => getDb().models.Route.count();
+    const before = await count();
+    // Written as raw JSON text: an object literal would set the prototype instead of making a key.
+    const step = '{"id": "a", "equation": "N2(g) + 3 H2(g) -> 2 NH3(g)"}';
+    const cases: [string, string][] = [
+      [`{"target": "NH3(g)", "steps": [${step}], "stepwell": {"format": "stepwell.route/1", "name": "X", "positions": {"__proto__": {"x": 1, "y": 2}}}}`, 'stepwell.positions.__proto__'],
+      [`{"target": "NH3(g)", "steps": [${step}], "stepwell": {"format": "stepwell.route/1", "name": "X", "notes": {"__proto__": "hidden"}}}`, 'stepwell.notes.__proto__'],
+      ['{"target": "NH3(g)", "steps": [{"id": "a", "equation": "N2(g) + 3 H2(g) -> 2 NH3(g)", "pressures": {"__proto__": "1 bar"}}]}', 'steps.0.pressures.__proto__'],
+      ['{"target": "NH3(g)", "steps": [{"id": "__proto__", "equation": "N2(g) + 3 H2(g) -> 2 NH3(g)"}]}', 'steps.0.id'],
+      ['{"target": "NH3(g)", "steps": [{"id": "constructor", "equation": "N2(g) + 3 H2(g) -> 2 NH3(g)"}]}', 'steps.0.id'],
+    ];
+    for (const [rawBody, field] of cases) {
+      const res = await callRoute(importRoute, { method: 'POST', userId: team.designerId, rawBody, headers: { 'content-type': 'application/json' } });
+      expect(res.status, field).toBe(400);
+      expect(errorOf(res.body).fields?.[field], `${field}: ${JSON.stringify(res.body)}`).toMatch(/reserved|cannot be used/);
+    }
+    expect(await count()).toBe(before);
+  });
+
   it('is for designers and leads: a reviewer gets 403, an anonymous caller 401', async () => {
     const body = { target: 'NH3(g)', steps: [{ id: 'a', equation: 'N2(g) + 3 H2(g) -> 2 NH3(g)' }] };
     expect((await callRoute(importRoute, { method: 'POST', userId: team.reviewerId, body })).status).toBe(403);
