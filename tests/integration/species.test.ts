@@ -156,6 +156,30 @@ describe('team species', () => {
     expect(stale.status).toBe(409);
   });
 
+  it('answers 404 to a measured value that names another team’s fit, on create and on edit', async () => {
+    const { Fit, TeamSpecies } = getDb().models;
+    const fitOf = (teamId: number) => Fit.create({
+      teamId, dataSetId: null, name: 'K(T) of the dimerisation', equation: '2 NO2(g) -> N2O4(g)', rawData: {} as never, result: {} as never,
+      deltaH0Kj: -57.2, deltaS0JPerK: -175.8, createdById: null,
+    });
+    const foreignFit = await fitOf(w.foreignTeamId);
+    const ownFit = await fitOf(w.teamId);
+    const measured = (fitId: number) => speciesInput({ provenance: { kind: 'measured', reference: 'Notebook KR-12, p. 4', fitId } });
+    const before = await TeamSpecies.count({ where: { teamId: w.teamId } });
+    const created = await callRoute(speciesRoute.POST, { method: 'POST', userId: w.designerId, body: measured(foreignFit.id) });
+    expect(created.status).toBe(404);
+    expect(errorOf(created.body).code).toBe('NOT_FOUND');
+    expect(await TeamSpecies.count({ where: { teamId: w.teamId } })).toBe(before);
+
+    const own = await callRoute(speciesRoute.POST, { method: 'POST', userId: w.designerId, body: measured(ownFit.id) });
+    expect(own.status, JSON.stringify(own.body)).toBe(201);
+    const id = (own.body as { id: number }).id;
+    const input = measured(foreignFit.id);
+    const edited = await callRoute(teamSpeciesRoute.PUT, { method: 'PUT', userId: w.designerId, params: { teamSpeciesId: String(id) }, body: { version: 1, species: input } });
+    expect(edited.status).toBe(404);
+    expect((await TeamSpecies.findByPk(id))!.fitId).toBe(ownFit.id);
+  });
+
   it('hides another team’s species behind 404', async () => {
     expect((await callRoute(teamSpeciesRoute.GET, { userId: w.foreignId, params: { teamSpeciesId: String(methanolId) } })).status).toBe(404);
     const put = await callRoute(teamSpeciesRoute.PUT, { method: 'PUT', userId: w.foreignId, params: { teamSpeciesId: String(methanolId) }, body: { version: 1, species: methanol } });

@@ -6,6 +6,7 @@ import { zodFields } from '../../api/error-response';
 import { TeamSpeciesInput } from '../../schemas/species';
 import { buildSpecies, type BuiltSpecies } from '../../species/build-species';
 import { recordEvent } from '../audit/record-event';
+import { findFitRow } from '../fits/read-fits';
 import { toTeamSpeciesDto, type TeamSpeciesDto } from './species-dto';
 import { invalidateTeamLookup } from './team-lookup';
 import { columnsOf } from './team-species-record';
@@ -19,6 +20,12 @@ export function readTeamSpecies(input: unknown): { species: BuiltSpecies; warnin
   const built = buildSpecies(parsed.data);
   if (!built.ok) throw new AppError('VALIDATION', 'Some values need attention.', { fields: built.errors });
   return { species: built.species, warnings: built.warnings };
+}
+
+/** A measured value may point at a saved fit of this team only; another team's fit answers 404 like any foreign id. */
+export async function checkProvenanceFit({ teamId, species, transaction }: { teamId: number; species: BuiltSpecies; transaction: Transaction }): Promise<void> {
+  const { provenance } = species;
+  if (provenance.kind === 'measured' && provenance.fitId !== null) await findFitRow({ teamId, fitId: provenance.fitId, transaction });
 }
 
 /** Invalidates the team's lookup once the writing transaction has committed (and now, for readers in between). */
@@ -37,6 +44,7 @@ export async function createTeamSpecies({
   const { species, warnings } = readTeamSpecies(input);
   const { sequelize, models } = getDb();
   const run = async (t: Transaction) => {
+    await checkProvenanceFit({ teamId, species, transaction: t });
     const existing = await models.TeamSpecies.findOne({ where: { teamId, key: species.key }, transaction: t });
     if (existing) {
       throw new AppError('CONFLICT', `Your team already has ${species.key} (“${existing.name}”); edit that one instead.`, {

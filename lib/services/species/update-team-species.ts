@@ -4,7 +4,7 @@ import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
 import { recordEvent } from '../audit/record-event';
 import { forUpdate } from '../row-lock';
-import { invalidateAfter, readTeamSpecies } from './create-team-species';
+import { checkProvenanceFit, invalidateAfter, readTeamSpecies } from './create-team-species';
 import { changeImpact } from './preview-species-change';
 import { toTeamSpeciesDto } from './species-dto';
 import { columnsOf } from './team-species-record';
@@ -16,6 +16,7 @@ export async function updateTeamSpecies({ teamId, userId, id, version, input }: 
   return sequelize.transaction(async (transaction) => {
     const row = await models.TeamSpecies.findOne({ where: { id, teamId }, ...forUpdate(transaction) });
     if (!row) throw new AppError('NOT_FOUND', 'No such team species.');
+    await checkProvenanceFit({ teamId, species, transaction });
     if (row.version !== version) {
       throw new AppError('CONFLICT', `Someone saved this species since you opened it (version ${row.version}, you had ${version}). Reload to see their values.`, {
         details: { currentVersion: row.version },
