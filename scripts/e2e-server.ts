@@ -14,6 +14,7 @@ async function main() {
     const build = spawnSync(process.execPath, ['node_modules/next/dist/bin/next', 'build'], { stdio: 'inherit', env: process.env });
     if (build.status !== 0) process.exit(build.status ?? 1);
   }
+  console.log(`e2e server: app on port ${E2E_PORT}, fake SMTP on port ${E2E_SMTP_PORT} (free ports; set E2E_PORT / E2E_SMTP_PORT to choose)`);
   await migrateAndSeed({ seed: true });
   await startFakeSmtpServer({ port: E2E_SMTP_PORT, dir: E2E_MAIL_DIR });
   const next = spawn(process.execPath, ['node_modules/next/dist/bin/next', 'start', '-p', String(E2E_PORT), '-H', '127.0.0.1'], {

@@ -1,16 +1,18 @@
 import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
+import { E2E_PORT, E2E_SMTP_PORT } from '../tests/e2e/support/e2e-env';
 
 // npm test: lint, typecheck, vitest, build, Playwright. Runs every stage, then prints the totals.
 const VITEST_JSON = path.resolve('var/vitest-results.json');
 const PLAYWRIGHT_JSON = path.resolve('var/playwright-results.json');
-const env = { ...process.env, NEXT_TELEMETRY_DISABLED: '1' };
+// Read at each spawn, after e2e-env has put the chosen ports into process.env.
+const env = () => ({ ...process.env, NEXT_TELEMETRY_DISABLED: '1' });
 
 function run(label: string, command: string, args: string[]): boolean {
   console.log(`\n=== ${label} ===`);
   const started = Date.now();
-  const result = spawnSync(command, args, { stdio: 'inherit', env });
+  const result = spawnSync(command, args, { stdio: 'inherit', env: env() });
   const ok = result.status === 0;
   console.log(`=== ${label}: ${ok ? 'ok' : 'FAILED'} (${((Date.now() - started) / 1000).toFixed(1)} s) ===`);
   return ok;
@@ -33,6 +35,7 @@ stages.lint = run('lint', 'npm', ['run', '-s', 'lint']);
 stages.typecheck = run('typecheck', 'npm', ['run', '-s', 'typecheck']);
 stages.vitest = run('vitest', npx, ['vitest', 'run', '--config', 'tests/vitest.config.ts', '--reporter=default', '--reporter=json', `--outputFile=${VITEST_JSON}`]);
 stages.build = run('build', npx, ['next', 'build']);
+console.log(`e2e ports (free ones, picked now): app ${E2E_PORT}, fake SMTP ${E2E_SMTP_PORT}`);
 stages.e2e = stages.build ? run('e2e', npx, ['playwright', 'test', '--config', 'tests/playwright.config.ts']) : false;
 
 const vitest = readJson<{ numPassedTests: number; numFailedTests: number }>(VITEST_JSON);

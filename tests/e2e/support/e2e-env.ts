@@ -1,9 +1,24 @@
+import { execFileSync } from 'node:child_process';
 import path from 'node:path';
 
+// Asks the OS for a free loopback port. Synchronous, because Playwright reads its config synchronously.
+function freePortNow(): number {
+  const script = "const s=require('net').createServer();s.listen(0,'127.0.0.1',()=>{process.stdout.write(String(s.address().port));s.close();});";
+  return Number(execFileSync(process.execPath, ['-e', script], { encoding: 'utf8' }));
+}
+
+// The first process to load this module picks free ports and puts them in the environment, so the web server,
+// Playwright's workers and any child process it starts inherit the same ones. E2E_PORT / E2E_SMTP_PORT may be set by hand.
+function port(name: 'E2E_PORT' | 'E2E_SMTP_PORT'): number {
+  const value = Number((process.env[name] ??= String(freePortNow())));
+  if (!Number.isInteger(value) || value <= 0 || value > 65535) throw new Error(`${name} must be a port number, not ${process.env[name]}`);
+  return value;
+}
+
 // Shared by the e2e server script and the specs, so both read the same mail folder.
-export const E2E_PORT = 3100;
+export const E2E_PORT = port('E2E_PORT');
 export const E2E_BASE_URL = `http://127.0.0.1:${E2E_PORT}`;
-export const E2E_SMTP_PORT = 2626;
+export const E2E_SMTP_PORT = port('E2E_SMTP_PORT');
 export const E2E_DIR = path.resolve(__dirname, '../../../var/e2e');
 export const E2E_MAIL_DIR = path.join(E2E_DIR, 'mail');
 
