@@ -5,6 +5,7 @@ import { getDb } from '../../db';
 import { SignInInput } from '../schemas/auth';
 import { authenticateUser } from '../services/users/authenticate-user';
 import { authSecret, env } from '../env';
+import { safeNextPath } from '../security/safe-next-path';
 import { currentSessionUser, SessionRevokedError } from './session-policy';
 
 export function authOptions(): NextAuthOptions {
@@ -27,6 +28,10 @@ export function authOptions(): NextAuthOptions {
       }),
     ],
     callbacks: {
+      // The one rule for every URL we follow after sign-in or sign-out: a path on our own origin, else the routes list.
+      async redirect({ url, baseUrl }) {
+        return new URL(safeNextPath(url, baseUrl), baseUrl).toString();
+      },
       async jwt({ token, user }) {
         if (user) {
           const row = await getDb().models.User.findByPk(Number(user.id));

@@ -19,8 +19,7 @@ export function SignInForm({ next }: { next: string }) {
   async function onSubmit(values: SignInInput) {
     setFormError(null);
     try {
-      await signInWithPassword(values);
-      router.push(next);
+      router.push(await signInWithPassword({ ...values, next }));
       router.refresh();
     } catch (error) {
       setFormError(error instanceof ApiError ? error.message : 'Sign-in failed. Try again.');
