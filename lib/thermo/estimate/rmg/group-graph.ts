@@ -1,0 +1,58 @@
+// A group graph compiled for matching: allowed molecule types per atom (each listed type and its
+// specific cases), allowed u/p/c, optional ring membership, and bond-order bit masks.
+import type { AtomTypeTable } from './atom-types';
+import type { BondCode, GraphGroupJson } from './group-json';
+import type { BondOrder } from './mol-graph';
+
+export interface GroupAtom {
+  accepted: ReadonlySet<string>;
+  u: readonly number[];
+  p: readonly number[];
+  c: readonly number[];
+  inRing?: boolean;
+  label?: string;
+  /** listed types, kept for descriptions and ring checks */
+  types: readonly string[];
+}
+
+export interface GroupGraph {
+  atoms: GroupAtom[];
+  /** per atom: neighbours with the bit mask of allowed orders */
+  adj: { to: number; mask: number }[][];
+  labels: Map<string, number>;
+}
+
+const CODE_BITS: Record<BondCode, number> = { S: 1, D: 2, T: 4, B: 8 };
+
+export function orderBit(order: BondOrder): number {
+  return order === 1 ? 1 : order === 2 ? 2 : order === 3 ? 4 : 8;
+}
+
+export function compileGroup(json: GraphGroupJson, table: AtomTypeTable): GroupGraph {
+  const index = new Map<number, number>();
+  const atoms: GroupAtom[] = json.atoms.map((a, i) => {
+    index.set(a.id, i);
+    return {
+      accepted: table.accepted(a.types),
+      u: a.u,
+      p: a.p,
+      c: a.c,
+      types: a.types,
+      ...(a.inRing === undefined ? {} : { inRing: a.inRing }),
+      ...(a.label === undefined ? {} : { label: a.label }),
+    };
+  });
+  const adj: { to: number; mask: number }[][] = atoms.map(() => []);
+  for (const b of json.bonds) {
+    const x = index.get(b.a)!;
+    const y = index.get(b.b)!;
+    const mask = b.orders.reduce((m, o) => m | CODE_BITS[o], 0);
+    adj[x]!.push({ to: y, mask });
+    adj[y]!.push({ to: x, mask });
+  }
+  const labels = new Map<string, number>();
+  atoms.forEach((a, i) => {
+    if (a.label) labels.set(a.label, i);
+  });
+  return { atoms, adj, labels };
+}
