@@ -1,6 +1,7 @@
 // Cp°(T) and ΔfG°(T) of one species over its data range, for the detail plot. ΔfG°(T) is the engine's
 // ΔrG°(T) of the formation reaction from the elements in their reference states (ions against H+(aq) and H2(g)),
 // so it meets the tabulated ΔfG° at 298.15 K exactly.
+import { cpFromForm } from '../thermo/cp-forms';
 import { T_REF } from '../thermo/constants';
 import { nasa9At } from '../thermo/nasa9';
 import { reactionThermoAt, type ReactionSpecies } from '../thermo/reaction-thermo';
@@ -21,7 +22,7 @@ export interface FormationSeries {
   range_K: [number, number];
   points: SeriesPoint[];
   /** how Cp° is known: a NASA polynomial, one constant value, or not at all (ΔCp = 0) */
-  cpBasis: 'nasa9' | 'constant' | 'none';
+  cpBasis: 'nasa9' | 'constant' | 'form' | 'none';
 }
 
 const REFERENCES = elementEntropies();
@@ -52,6 +53,7 @@ function cpAt(record: SpeciesRecord, T: number): number | null {
   const cp = record.cp;
   if (cp?.kind === 'nasa9') return nasa9At(cp, T).Cp_J_per_K;
   if (cp?.kind === 'constant') return cp.value;
+  if (cp?.kind === 'form') return cpFromForm(cp.model, T);
   return record.Cp_J_per_K;
 }
 

@@ -1,10 +1,11 @@
 // H°(T) and S°(T) of one species, anchored on the library's 298.15 K row so that at 298.15 K
 // the tabulated values come back exactly (the polynomial's own offsets never leak in).
 import { T_REF } from './constants';
+import { formIncrements } from './cp-forms';
 import { nasa9At, nasa9HSInto, nasa9Range } from './nasa9';
 import type { Nasa9Cp, SpeciesRecord } from './species-types';
 
-export type CpBasis = 'nasa9' | 'constant' | 'none';
+export type CpBasis = 'nasa9' | 'constant' | 'form' | 'none';
 
 export interface SpeciesState {
   /** ΔfH°-based enthalpy, kJ/mol */
@@ -39,6 +40,7 @@ function rangeOf(record: SpeciesRecord): readonly [number, number] {
     const cp = record.cp;
     if (cp?.kind === 'nasa9') r = nasa9Range(cp);
     else if (cp?.kind === 'constant') r = [cp.Tmin, cp.Tmax];
+    else if (cp?.kind === 'form') r = [cp.model.Tmin, cp.model.Tmax];
     else r = record.phase === 'aq' ? AQUEOUS_RANGE_K : NO_CP_RANGE_K;
     rangeCache.set(record, r);
   }
@@ -77,6 +79,10 @@ export function speciesHSInto(
   } else if (cp.kind === 'constant') {
     out.H_kJ = record.dfH_kJ + (cp.value * (T - T_REF)) / 1000;
     out.S_J_per_K = record.S_J_per_K + cp.value * Math.log(T / T_REF);
+  } else if (cp.kind === 'form') {
+    const inc = formIncrements(cp, T);
+    out.H_kJ = record.dfH_kJ + inc.dH_J / 1000;
+    out.S_J_per_K = record.S_J_per_K + inc.dS_J_per_K;
   } else {
     nasa9HSInto(cp, T, lnT, poly);
     const a = anchor(cp);

@@ -20,7 +20,7 @@ function hold(port: number): Promise<void> {
 
 function portsSeen(env: Record<string, string | undefined>): [number, number] {
   const script = "import('./tests/e2e/support/e2e-env.ts').then((mod) => { const m = mod.default ?? mod; console.log(m.E2E_PORT + ' ' + m.E2E_SMTP_PORT); })";
-  const clean = Object.fromEntries(Object.entries({ ...process.env, ...env }).filter(([, v]) => v !== undefined)) as Record<string, string>;
+  const clean = Object.fromEntries(Object.entries({ ...process.env, ...env }).filter(([, v]) => v !== undefined)) as NodeJS.ProcessEnv;
   const r = spawnSync(path.join(ROOT, 'node_modules/.bin/tsx'), ['-e', script], { cwd: ROOT, env: clean, encoding: 'utf8', timeout: 30_000 });
   expect(r.status, r.stderr).toBe(0);
   const [app, smtp] = r.stdout.trim().split(' ').map(Number);

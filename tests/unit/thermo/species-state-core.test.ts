@@ -30,6 +30,7 @@ describe('allocation-free thermo cores', () => {
     const cp = r.cp;
     if (!heatCapacity || T === T_REF || cp === null) return [r.dfH_kJ, r.S_J_per_K];
     if (cp.kind === 'constant') return [r.dfH_kJ + (cp.value * (T - T_REF)) / 1000, r.S_J_per_K + cp.value * Math.log(T / T_REF)];
+    if (cp.kind !== 'nasa9') throw new Error(`${r.key}: the NBS/NASA library has NASA-9 or constant Cp only`);
     const p = nasa9At(cp, T);
     const a = nasa9At(cp, T_REF);
     return [r.dfH_kJ + (p.H_J - a.H_J) / 1000, r.S_J_per_K + (p.S_J_per_K - a.S_J_per_K)];

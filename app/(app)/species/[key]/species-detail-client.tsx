@@ -52,7 +52,7 @@ export function SpeciesDetail({ detail, canEdit }: { detail: SpeciesDetailDto; c
       <section aria-labelledby="plots" className="flex flex-col gap-2">
         <h2 id="plots" className="text-base font-semibold">Over the data range ({formatNumber(lo, 2)}–{formatNumber(hi, 2)} K)</h2>
         <p className="text-sm text-ink-soft">
-          {detail.series.cpBasis === 'nasa9' ? 'Cp° from the NASA Glenn polynomial.' : detail.series.cpBasis === 'constant' ? 'Cp° is one constant value over this range.' : 'No Cp° data: ΔfG°(T) takes ΔCp = 0.'}{' '}
+          {detail.series.cpBasis === 'nasa9' ? 'Cp° from the NASA Glenn polynomial.' : detail.series.cpBasis === 'constant' ? 'Cp° is one constant value over this range.' : detail.series.cpBasis === 'form' ? 'Cp° from the published Cp(T) form named in the sources (or the estimate’s fitted curve).' : 'No Cp° data: ΔfG°(T) takes ΔCp = 0.'}{' '}
           ΔfG°(T) is the formation reaction from the elements in their reference states, as the engine computes it.
         </p>
         <div className="grid gap-3 md:grid-cols-2">
