@@ -18,6 +18,16 @@ const EnvSchema = z.object({
   MAIL_FROM: z.string().min(3).default('Stepwell <no-reply@stepwell.local>'),
   MAIL_DIR: z.string().min(1).default('./var/mail'),
   SESSION_MAX_AGE_S: z.coerce.number().int().positive().default(60 * 60 * 12),
+  /**
+   * How many reverse proxies of ours stand in front of the app. 0: none, rate limits key on the socket address and
+   * X-Forwarded-For is ignored (any client can write it). N: the Nth address from the right of X-Forwarded-For.
+   */
+  TRUSTED_PROXY_HOPS: z.coerce
+    .number({ message: 'TRUSTED_PROXY_HOPS must be a whole number of proxies (0 when none)' })
+    .int({ message: 'TRUSTED_PROXY_HOPS must be a whole number of proxies (0 when none)' })
+    .min(0, { message: 'TRUSTED_PROXY_HOPS must be 0 (no proxy) or more' })
+    .max(10, { message: 'TRUSTED_PROXY_HOPS above 10 is surely a mistake' })
+    .default(0),
   /** '1' shows /dev/mail in a production build: only the e2e server, which runs the fake SMTP server, sets it */
   SHOW_DEV_MAILBOX: z.enum(['0', '1']).default('0'),
 });

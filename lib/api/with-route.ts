@@ -3,6 +3,7 @@ import { NextResponse, type NextRequest } from 'next/server';
 import { type z } from 'zod';
 import { can, type Permission } from '../auth/permissions';
 import { sessionUserFromRequest, type SessionUser } from '../auth/session-user';
+import { installPeerAddressHook } from '../security/peer-address';
 import { findActiveMembership, findMembership, type TeamContext } from '../services/teams/find-membership';
 import { AppError } from './errors';
 import { checkOrigin } from './origin';
@@ -37,6 +38,9 @@ type TeamSource = 'path' | 'active' | TeamOfResource;
 type NextContext = { params: Promise<Record<string, string | string[]>> };
 
 const MUTATING = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
+
+// On with the first API request a process serves (often a health check), so rate limits see socket addresses early.
+installPeerAddressHook();
 
 export function withRoute<B extends z.ZodType | undefined = undefined, Q extends z.ZodType | undefined = undefined, A extends Access = Access>(
   options: RouteOptions<B, Q, A>,

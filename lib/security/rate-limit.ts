@@ -51,12 +51,22 @@ export function namedLimiter(name: string, opts: { limit: number; windowMs: numb
   return createRateLimiter({ name, ...opts });
 }
 
+// Failed sign-ins. Keyed on account and address, so a stranger's guesses never lock the owner out of another address;
+// per address across accounts, against one password tried on many accounts (spraying); and a far higher ceiling per
+// account from anywhere, so many addresses together still guess slowly.
 export const signInLimiter = () => namedLimiter('sign-in', { limit: 10, windowMs: 60_000 });
+export const signInByAddressLimiter = () => namedLimiter('sign-in-address', { limit: 30, windowMs: 15 * 60_000 });
+export const signInByAccountLimiter = () => namedLimiter('sign-in-account', { limit: 100, windowMs: 60 * 60_000 });
 export const signUpLimiter = () => namedLimiter('sign-up', { limit: 20, windowMs: 60 * 60_000 });
 export const inviteLimiter = () => namedLimiter('invite', { limit: 50, windowMs: 60 * 60_000 });
 // Per address (so one inbox is not flooded) and per IP (so addresses cannot be cycled); both apply whether or not the address exists.
 export const resetByEmailLimiter = () => namedLimiter('reset-email', { limit: 5, windowMs: 60 * 60_000 });
 export const resetByIpLimiter = () => namedLimiter('reset-ip', { limit: 30, windowMs: 60 * 60_000 });
+
+/** The hits enforceLimits counted, so a caller can take them back when the attempt turns out not to count (a success). */
+export interface CountedHits {
+  refund(): Promise<void>;
+}
 
 /**
  * Counts a hit on every (limiter, key) pair and lets the request through only when all allow; otherwise
@@ -65,16 +75,14 @@ export const resetByIpLimiter = () => namedLimiter('reset-ip', { limit: 30, wind
  * the limit (checking first and counting after would let them all pass one check). The cost is that a
  * concurrent request may be denied while another's refund is still in flight, never that one slips through.
  */
-export async function enforceLimits(pairs: ReadonlyArray<readonly [RateLimiter, string]>, message: (waitS: number) => string): Promise<void> {
+export async function enforceLimits(pairs: ReadonlyArray<readonly [RateLimiter, string]>, message: (waitS: number) => string): Promise<CountedHits> {
   const taken = await Promise.all(pairs.map(async ([limiter, key]) => ({ limiter, key, result: await limiter.take(key) })));
+  const refund = async () => {
+    await Promise.all(taken.map((t) => t.limiter.refund(t.key, t.result.window)));
+  };
   const waits = taken.filter((t) => !t.result.allowed).map((t) => t.result.retryAfterSeconds);
-  if (!waits.length) return;
-  await Promise.all(taken.map((t) => t.limiter.refund(t.key, t.result.window)));
+  if (!waits.length) return { refund };
+  await refund();
   const wait = Math.max(...waits);
   throw new AppError('RATE_LIMITED', message(wait), { headers: { 'Retry-After': String(wait) } });
-}
-
-export function clientIp(req: Request): string {
-  const forwarded = req.headers.get('x-forwarded-for');
-  return forwarded?.split(',')[0]?.trim() || req.headers.get('x-real-ip') || 'local';
 }

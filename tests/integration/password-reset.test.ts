@@ -3,6 +3,7 @@ import { getDb } from '@/db';
 import { GET as me } from '@/app/api/me/route';
 import { POST as requestReset } from '@/app/api/password-reset/route';
 import { POST as resetWithToken } from '@/app/api/password-reset/[token]/route';
+import { peerStampFor } from '@/lib/security/peer-address';
 import { settlePasswordResetRequests } from '@/lib/services/password-reset/request-password-reset';
 import { hashResetToken } from '@/lib/services/password-reset/reset-token';
 import { resetTokenStatus } from '@/lib/services/password-reset/reset-password';
@@ -36,8 +37,10 @@ async function waitForMail(address: string, count: number) {
   throw new Error(`no mail #${count} for ${address}`);
 }
 
-function ask(email: string, ip = freshIp()) {
-  return callRoute(requestReset, { method: 'POST', body: { email }, headers: { 'x-forwarded-for': ip } });
+// `ip` is the socket address as Node's request hook stamps it; `forwardedFor` is whatever the client writes.
+function ask(email: string, ip = freshIp(), forwardedFor?: string) {
+  const headers = { ...Object.fromEntries([peerStampFor(ip)]), ...(forwardedFor ? { 'x-forwarded-for': forwardedFor } : {}) };
+  return callRoute(requestReset, { method: 'POST', body: { email }, headers });
 }
 
 function tokenOf(mail: { text: string }): string {
@@ -147,5 +150,11 @@ describe('password reset', () => {
     const ip = freshIp();
     for (let i = 0; i < 30; i += 1) expect((await ask(`cycle-${i}@example.test`, ip)).status).toBe(202);
     expect((await ask('cycle-last@example.test', ip)).status).toBe(429);
+  });
+
+  it('limits per IP whatever X-Forwarded-For the client writes', async () => {
+    const ip = freshIp();
+    for (let i = 0; i < 30; i += 1) expect((await ask(`forged-${i}@example.test`, ip, `203.0.113.${i}`)).status).toBe(202);
+    expect((await ask('forged-last@example.test', ip, '203.0.113.250')).status).toBe(429);
   });
 });

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { POST as signUp } from '@/app/api/signup/route';
 import { POST as invite } from '@/app/api/teams/[teamId]/invitations/route';
+import { peerStampFor } from '@/lib/security/peer-address';
 import { makeTeamWithLead } from './support/fixtures';
 import { startMailbox } from './support/review-team';
 import { callRoute, errorOf } from './support/http';
@@ -28,12 +29,19 @@ function expectRateLimited(res: { status: number; body: unknown; headers: Header
 let n = 0;
 const account = () => ({ name: 'Baptiste Osei', email: `limit-${(n += 1)}@example.test`, password: 'a-strong-password-1', teamName: 'Process Development' });
 
+// `peer` is the socket address as Node's request hook stamps it; X-Forwarded-For is whatever the client writes.
+const from = (peer: string, forwardedFor?: string) => ({ ...Object.fromEntries([peerStampFor(peer)]), ...(forwardedFor ? { 'x-forwarded-for': forwardedFor } : {}) });
+
 describe('sign-up rate limit', () => {
   it('allows 20 sign-ups an hour from one address, then answers 429 with the wait', async () => {
-    const ip = '10.20.0.1';
-    for (let i = 0; i < 20; i += 1) expect((await callRoute(signUp, { method: 'POST', body: account(), headers: { 'x-forwarded-for': ip } })).status).toBe(201);
-    expectRateLimited(await callRoute(signUp, { method: 'POST', body: account(), headers: { 'x-forwarded-for': ip } }));
-    expect((await callRoute(signUp, { method: 'POST', body: account(), headers: { 'x-forwarded-for': '10.20.0.2' } })).status).toBe(201);
+    for (let i = 0; i < 20; i += 1) expect((await callRoute(signUp, { method: 'POST', body: account(), headers: from('10.20.0.1') })).status).toBe(201);
+    expectRateLimited(await callRoute(signUp, { method: 'POST', body: account(), headers: from('10.20.0.1') }));
+    expect((await callRoute(signUp, { method: 'POST', body: account(), headers: from('10.20.0.2') })).status).toBe(201);
+  });
+
+  it('is not escaped by writing a new X-Forwarded-For on each request', async () => {
+    for (let i = 0; i < 20; i += 1) expect((await callRoute(signUp, { method: 'POST', body: account(), headers: from('10.21.0.1', `203.0.113.${i}`) })).status).toBe(201);
+    expectRateLimited(await callRoute(signUp, { method: 'POST', body: account(), headers: from('10.21.0.1', '203.0.113.250') }));
   });
 });
 

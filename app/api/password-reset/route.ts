@@ -1,7 +1,8 @@
 // POST /api/password-reset: mail a single-use reset link; the same 202 answer whether or not the address has an account
 import { withRoute } from '@/lib/api/with-route';
 import { RequestPasswordResetInput, RESET_REQUESTED_MESSAGE } from '@/lib/schemas/password-reset';
-import { clientIp, enforceLimits, resetByEmailLimiter, resetByIpLimiter } from '@/lib/security/rate-limit';
+import { clientAddress } from '@/lib/security/client-address';
+import { enforceLimits, resetByEmailLimiter, resetByIpLimiter } from '@/lib/security/rate-limit';
 import { startPasswordResetRequest } from '@/lib/services/password-reset/request-password-reset';
 
 export const runtime = 'nodejs';
@@ -10,7 +11,7 @@ export const POST = withRoute({ access: 'public', body: RequestPasswordResetInpu
   await enforceLimits(
     [
       [resetByEmailLimiter(), body.email],
-      [resetByIpLimiter(), clientIp(req)],
+      [resetByIpLimiter(), clientAddress(req)],
     ],
     (wait) => `Too many reset requests. Wait ${wait} s and try again.`,
   );
