@@ -61,6 +61,19 @@ describe('invitation flow', () => {
     expect(errorOf(reused.body).message).toMatch(/already been used/);
   });
 
+  it('refuses a new password over 72 bytes or containing the invited address, and leaves the link usable', async () => {
+    const { token } = await inviteAndReadToken('ottilie.marchetti@example.test');
+    const long = await callRoute(accept, { method: 'POST', params: { token }, body: { name: 'Ottilie', password: 'ø'.repeat(20) + 'x'.repeat(33) } });
+    expect(long.status).toBe(400);
+    expect(errorOf(long.body).fields?.password).toMatch(/72 bytes/);
+    const named = await callRoute(accept, { method: 'POST', params: { token }, body: { name: 'Ottilie', password: 'ottilie.marchetti!' } });
+    expect(named.status).toBe(400);
+    expect(errorOf(named.body)).toMatchObject({ code: 'VALIDATION', fields: { password: expect.stringMatching(/e-mail address/) } });
+    expect(await getDb().models.User.count({ where: { email: 'ottilie.marchetti@example.test' } })).toBe(0);
+    const joined = await callRoute(accept, { method: 'POST', params: { token }, body: { name: 'Ottilie', password: 'tarragon-and-lime-7' } });
+    expect(joined.status).toBe(200);
+  });
+
   it('refuses an expired token with a clear message', async () => {
     const { token } = await inviteAndReadToken('late@example.test');
     await getDb().models.Invitation.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { email: 'late@example.test' } });

@@ -72,6 +72,15 @@ describe('password reset', () => {
     expect(errorOf(tooShort.body).fields).toHaveProperty('password');
     expect(await resetTokenStatus({ token })).toBe('valid');
 
+    // Over 72 bytes (bcrypt would ignore the rest), and the account's own e-mail name part: refused, link unspent.
+    const tooLong = await callRoute(resetWithToken, { method: 'POST', params: { token }, body: { password: 'ß'.repeat(30) + 'z'.repeat(13) } });
+    expect(tooLong.status).toBe(400);
+    expect(errorOf(tooLong.body).fields?.password).toMatch(/at most 72 bytes/);
+    const ownName = await callRoute(resetWithToken, { method: 'POST', params: { token }, body: { password: `my-${lead.leadEmail.split('@')[0]}-pass` } });
+    expect(ownName.status).toBe(400);
+    expect(errorOf(ownName.body)).toMatchObject({ code: 'VALIDATION', fields: { password: expect.stringMatching(/e-mail address/) } });
+    expect(await resetTokenStatus({ token })).toBe('valid');
+
     const done = await callRoute(resetWithToken, { method: 'POST', params: { token }, body: { password: 'a-brand-new-password' } });
     expect(done.status).toBe(200);
     expect(await authenticateUser({ email: lead.leadEmail, password: 'a-brand-new-password' })).toMatchObject({ id: lead.leadId });

@@ -38,6 +38,25 @@ describe('sign-up', () => {
     expect(errorOf(res.body).fields?.password).toMatch(/at least 10/);
   });
 
+  it('refuses a password over 72 bytes (bcrypt would ignore the rest), counting bytes, not characters', async () => {
+    // 55 characters but 74 bytes in UTF-8.
+    const password = 'Grüße-aus-Köln-'.repeat(3) + 'äöüäöüäöüä';
+    expect([password.length, new TextEncoder().encode(password).length]).toEqual([55, 74]);
+    const res = await callRoute(signup, { method: 'POST', body: { ...valid, email: 'bytes@example.test', password } });
+    expect(res.status).toBe(400);
+    expect(errorOf(res.body)).toMatchObject({ code: 'VALIDATION', fields: { password: expect.stringMatching(/at most 72 bytes/) } });
+    expect(await getDb().models.User.count({ where: { email: 'bytes@example.test' } })).toBe(0);
+  });
+
+  it('refuses a password containing the e-mail address or its name part, and a common one', async () => {
+    const withName = await callRoute(signup, { method: 'POST', body: { ...valid, email: 'hanne.lind@example.test', password: 'Hanne.Lind-2026' } });
+    expect(withName.status).toBe(400);
+    expect(errorOf(withName.body).fields?.password).toMatch(/e-mail address/);
+    const common = await callRoute(signup, { method: 'POST', body: { ...valid, email: 'common@example.test', password: 'Password2026!' } });
+    expect(common.status).toBe(400);
+    expect(errorOf(common.body).fields?.password).toMatch(/most common/);
+  });
+
   it('refuses a malformed e-mail and unknown fields', async () => {
     const bad = await callRoute(signup, { method: 'POST', body: { ...valid, email: 'not-an-email' } });
     expect(errorOf(bad.body).fields?.email).toBeTruthy();

@@ -3,6 +3,7 @@ import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
 import type { SessionUser } from '../../auth/session-user';
 import type { AcceptInvitationInput } from '../../schemas/auth';
+import { PASSWORD_MESSAGES, passwordContainsEmail } from '../../schemas/password';
 import { recordEvent } from '../audit/record-event';
 import { createUser } from '../users/create-user';
 import { invitationStatus } from './invitation-dto';
@@ -30,6 +31,7 @@ export async function acceptInvitation({ token, sessionUser, input }: { token: s
       const fields: Record<string, string> = {};
       if (!input.name) fields.name = 'Enter your name.';
       if (!input.password) fields.password = 'Choose a password of at least 10 characters.';
+      else if (passwordContainsEmail(input.password, row.email)) fields.password = PASSWORD_MESSAGES.email;
       if (Object.keys(fields).length) throw new AppError('VALIDATION', 'Create your account to join.', { fields });
       const user = await createUser({ name: input.name!, email: row.email, password: input.password!, activeTeamId: row.teamId }, transaction);
       userId = user.id;

@@ -4,6 +4,7 @@ import { getDb } from '../../../db';
 import { AppError } from '../../api/errors';
 import { hashPassword } from '../../auth/password';
 import { revokeAllSessions } from '../../auth/session-policy';
+import { PASSWORD_MESSAGES, passwordContainsEmail } from '../../schemas/password';
 import { recordEvent } from '../audit/record-event';
 import { hashResetToken } from './reset-token';
 
@@ -31,6 +32,11 @@ export async function resetPassword({ token, password }: { token: string; passwo
     if (!row) throw new AppError('NOT_FOUND', RESET_STATUS_MESSAGES.unknown);
     if (row.usedAt) throw new AppError('GONE', RESET_STATUS_MESSAGES.used);
     if (row.expiresAt.getTime() <= Date.now()) throw new AppError('GONE', RESET_STATUS_MESSAGES.expired);
+    // Checked before the link is spent, so the person can try another password with the same link.
+    const user = await models.User.findByPk(row.userId, { transaction });
+    if (user && passwordContainsEmail(password, user.email)) {
+      throw new AppError('VALIDATION', 'Choose another password.', { fields: { password: PASSWORD_MESSAGES.email } });
+    }
     // The guard on used_at makes a second, simultaneous use of the same link fail.
     const [spent] = await models.PasswordResetToken.update({ usedAt: new Date() }, { where: { id: row.id, usedAt: { [Op.is]: null } }, transaction });
     if (spent !== 1) throw new AppError('GONE', RESET_STATUS_MESSAGES.used);

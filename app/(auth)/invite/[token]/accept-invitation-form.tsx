@@ -3,7 +3,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
-import { useState } from 'react';
+import { useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { type z } from 'zod';
 import { Button } from '@/components/ui/button';
@@ -14,6 +14,7 @@ import { signInWithPassword } from '@/lib/auth/client-sign-in';
 import { applyServerErrors } from '@/lib/forms/apply-server-errors';
 import { apiFetch } from '@/lib/queries/api-fetch';
 import { AcceptInvitationInput } from '@/lib/schemas/auth';
+import { refuseEmailInPassword } from '@/lib/schemas/password';
 
 type Mode = 'signed-in' | 'wrong-account' | 'needs-sign-in' | 'new-account';
 
@@ -24,7 +25,9 @@ export function AcceptInvitationForm({ token, email, mode, signedInAs }: { token
   const router = useRouter();
   const [formError, setFormError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
-  const { register, handleSubmit, setError, formState } = useForm<NewAccount>({ resolver: zodResolver(NewAccount) });
+  // The invited address is known here, so the form refuses a password containing it before the server does.
+  const schema = useMemo(() => NewAccount.superRefine(refuseEmailInPassword(() => email)), [email]);
+  const { register, handleSubmit, setError, formState } = useForm<NewAccount>({ resolver: zodResolver(schema) });
   const acceptUrl = `/api/invitations/${encodeURIComponent(token)}/accept`;
 
   async function acceptSignedIn() {
