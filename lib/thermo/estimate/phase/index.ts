@@ -4,3 +4,4 @@ export type { MatchedGroup } from './matched-group';
 export { liquidFromGas, liquidAtTemperature, LIQUID_T_MIN_K, type LiquidEstimate } from './liquid';
 export { lnPsatBar, lnPsatBarConstantDvapH, type BoilingData } from './vapour-pressure';
 export { estimateJoback, type JobackEstimate } from '../joback';
+export { aqueousFromGas, type AqueousEstimate } from './aqueous';
