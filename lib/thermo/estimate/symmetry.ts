@@ -235,13 +235,16 @@ export function molecularSymmetry(mol: MolGraph, aromaticBonds: ReadonlySet<stri
     return sigma;
   };
 
-  // Ring-fusion and bridgehead centres that the graph cannot tell apart get their handedness
-  // chosen jointly: an arbitrary choice can describe a cage that cannot exist (adamantane with
-  // one bridgehead inverted), so the most symmetric choice is kept.
-  const fusion = kind
-    .map((k, a) => (k !== undefined && mol.rings.filter((r) => r.includes(a)).length >= 2 ? a : -1))
-    .filter((a) => a >= 0);
-  const free = fusion.filter((a) => fusion.some((b) => b !== a && colour[b] === colour[a])).slice(1, 9);
+  // Ring centres that the graph cannot tell apart get their handedness chosen jointly: an
+  // arbitrary choice can describe a cage that cannot exist (adamantane with one bridgehead
+  // inverted), so the most symmetric choice is kept.
+  // (a centre with two alike exocyclic neighbours, such as a ring CH2, can flip by swapping them)
+  const flipsFreely = (a: number): boolean => {
+    const exo = mol.neighbours[a]!.filter((b) => !mol.inRing[b]).map((b) => colour[b]!);
+    return new Set(exo).size < exo.length;
+  };
+  const ringCentres = kind.map((k, a) => (k !== undefined && mol.inRing[a] && !flipsFreely(a) ? a : -1)).filter((a) => a >= 0);
+  const free = ringCentres.filter((a) => ringCentres.some((b) => b !== a && colour[b] === colour[a])).slice(1, 9);
   let best = { sigma: groupOrder(), ref };
   for (let mask = 1; mask < 1 << free.length; mask += 1) {
     ref = refOrder.map((ns, a) => {

@@ -1,0 +1,126 @@
+// Gas group-additivity estimator against published data: every organic gas row of the organics
+// library (species.csv; ATcT, JANAF, NASA, WebBook, API, CRC as named per row) with 2–20 carbons.
+// Prints coverage, MAE, RMS, worst case and the share within 2σ for ΔfH°, S° and ΔfG°, the same by
+// weak class, and the time per estimate (parse + graph + groups + symmetry + Cp fit) after a
+// warm-up pass. Asserts nothing. Run: npx tsx bench/estimate-accuracy.ts [--list]
+import Papa from 'papaparse';
+import { readDataText } from '../lib/thermo/data/data-files';
+import { estimateGas, type GasEstimate, loadRmgDatabase } from '../lib/thermo/estimate/gas-estimate';
+import { loadChem } from '../lib/thermo/structure/chem';
+
+interface Row {
+  name: string;
+  smiles: string;
+  formula: string;
+  phase: string;
+  dfH_kJ_per_mol: string;
+  dfH_source: string;
+  S_J_per_mol_K: string;
+  S_source: string;
+  dfG_kJ_per_mol: string;
+  dfG_source: string;
+}
+
+interface Outcome {
+  row: Row;
+  est?: GasEstimate;
+  error?: string;
+  ms: number;
+}
+
+const num = (s: string): number | null => (s.trim() === '' ? null : Number(s));
+const carbons = (formula: string): number => {
+  const m = /^C(\d*)(?![a-z])/.exec(formula);
+  return m ? Number(m[1] || 1) : 0;
+};
+
+function stats(label: string, pairs: { err: number; sigma: number; name: string }[]): void {
+  if (pairs.length === 0) return console.log(`${label.padEnd(34)} n=0`);
+  const abs = pairs.map((p) => Math.abs(p.err));
+  const mae = abs.reduce((a, b) => a + b, 0) / abs.length;
+  const rms = Math.sqrt(pairs.reduce((a, p) => a + p.err ** 2, 0) / pairs.length);
+  const sorted = [...abs].sort((a, b) => a - b);
+  const median = sorted[Math.floor(sorted.length / 2)]!;
+  const worst = pairs.reduce((w, p) => (Math.abs(p.err) > Math.abs(w.err) ? p : w));
+  const within = pairs.filter((p) => Math.abs(p.err) <= 2 * p.sigma).length / pairs.length;
+  const meanSigma = pairs.reduce((a, p) => a + p.sigma, 0) / pairs.length;
+  // the σ that would put 85 % of this class within 2σ (for calibrating the σ model)
+  const needed = sorted[Math.min(sorted.length - 1, Math.ceil(0.85 * sorted.length) - 1)]! / 2;
+  console.log(
+    `${label.padEnd(34)} n=${String(pairs.length).padStart(3)}  MAE ${mae.toFixed(2).padStart(6)}  median ${median.toFixed(2).padStart(6)}  RMS ${rms.toFixed(2).padStart(6)}  ` +
+      `within 2σ ${(100 * within).toFixed(0).padStart(3)} %  mean σ ${meanSigma.toFixed(1).padStart(5)}  σ(85 %) ${needed.toFixed(1).padStart(5)}  worst ${worst.err.toFixed(1)} (${worst.name})`,
+  );
+}
+
+function percentile(xs: number[], p: number): number {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.min(s.length - 1, Math.floor((p / 100) * s.length))]!;
+}
+
+async function main(): Promise<void> {
+  const list = process.argv.includes('--list');
+  const rows = Papa.parse<Row>(readDataText('source/organics/species.csv'), { header: true, skipEmptyLines: true }).data.filter((r) => {
+    const c = carbons(r.formula);
+    return r.phase === 'g' && c >= 2 && c <= 20 && /H/.test(r.formula) && r.smiles !== '';
+  });
+  const chem = await loadChem();
+  const t0 = performance.now();
+  const db = loadRmgDatabase();
+  console.log(`groups loaded in ${(performance.now() - t0).toFixed(0)} ms; ${rows.length} organic gas rows with C2–C20`);
+
+  const run = (): Outcome[] =>
+    rows.map((row) => {
+      const t = performance.now();
+      try {
+        const est = estimateGas(chem, row.smiles, db);
+        return { row, est, ms: performance.now() - t };
+      } catch (e) {
+        return { row, error: (e as Error).message, ms: performance.now() - t };
+      }
+    });
+  run(); // warm-up
+  const outcomes = run();
+  const done = outcomes.filter((o) => o.est);
+  console.log(`estimated ${done.length} / ${rows.length} (${((100 * done.length) / rows.length).toFixed(1)} %)`);
+  for (const o of outcomes.filter((x) => x.error)) console.log(`  not estimated: ${o.row.name} ${o.row.smiles}: ${o.error}`);
+
+  const quantity = (pick: (o: Outcome) => { ref: number | null; est: number; sigma: number }) =>
+    done.flatMap((o) => {
+      const q = pick(o);
+      return q.ref === null ? [] : [{ err: q.est - q.ref, sigma: q.sigma, name: o.row.name, o }];
+    });
+  const dH = quantity((o) => ({ ref: num(o.row.dfH_kJ_per_mol), est: o.est!.dfH_kJ, sigma: o.est!.sigma_dfH_kJ }));
+  const S = quantity((o) => ({ ref: num(o.row.S_J_per_mol_K), est: o.est!.S_J_per_K, sigma: o.est!.sigma_S_J_per_K }));
+  const dG = quantity((o) => ({ ref: num(o.row.dfG_kJ_per_mol), est: o.est!.dfG_kJ, sigma: o.est!.sigma_dfG_kJ }));
+  console.log('\nall estimated rows');
+  stats('ΔfH° (kJ/mol)', dH);
+  stats('S° (J/(mol K))', S);
+  stats('ΔfG° (kJ/mol)', dG);
+  const normal = (p: { o: Outcome }): boolean => p.o.est!.confidence === 'normal';
+  console.log('\nconfidence "normal"');
+  stats('ΔfH° (kJ/mol)', dH.filter(normal));
+  stats('S° (J/(mol K))', S.filter(normal));
+  stats('ΔfG° (kJ/mol)', dG.filter(normal));
+  console.log('\nby weak class (a molecule can be in several)');
+  const kinds = [...new Set(done.flatMap((o) => o.est!.weakKinds))];
+  for (const k of kinds) {
+    const has = (p: { o: Outcome }): boolean => p.o.est!.weakKinds.includes(k);
+    stats(`ΔfH° ${k}`, dH.filter(has));
+    stats(`S°   ${k}`, S.filter(has));
+  }
+  const times = done.map((o) => o.ms);
+  console.log(`\ntime per estimate after warm-up: p50 ${percentile(times, 50).toFixed(2)} ms, p95 ${percentile(times, 95).toFixed(2)} ms, max ${Math.max(...times).toFixed(1)} ms`);
+  if (list) {
+    const show = (title: string, pairs: typeof dH, source: (r: Row) => string): void => {
+      console.log(`\n${title}, largest errors first`);
+      for (const p of [...pairs].sort((a, b) => Math.abs(b.err) - Math.abs(a.err))) {
+        const e = p.o.est!;
+        console.log(`${p.err.toFixed(1).padStart(7)} σ ${p.sigma.toFixed(1).padStart(5)} σsym ${e.symmetryNumber}/${e.opticalIsomers} ${p.name} ${p.o.row.smiles} [${e.weakKinds.join(',')}] ${source(p.o.row)}`);
+      }
+    };
+    show('ΔfH°', dH, (r) => r.dfH_source);
+    show('S°', S, (r) => r.S_source);
+  }
+}
+
+void main();
