@@ -8,6 +8,7 @@ import * as fits from './20261202-0007-fits';
 import * as teamSpecies from './20261202-0006-team-species';
 import * as passwordResetSessions from './20261203-0008-password-reset-sessions';
 import * as rateLimitWindows from './20261204-0009-rate-limit-windows';
+import * as revokedSessions from './20261205-0010-revoked-sessions';
 
 export interface MigrationModule {
   up(params: { context: QueryInterface }): Promise<void>;
@@ -25,4 +26,5 @@ export const MIGRATIONS: ReadonlyArray<{ name: string; module: MigrationModule }
   { name: '20261203-0008-password-reset-sessions', module: passwordResetSessions },
   { name: '20261202-0007-fits', module: fits },
   { name: '20261204-0009-rate-limit-windows', module: rateLimitWindows },
+  { name: '20261205-0010-revoked-sessions', module: revokedSessions },
 ];

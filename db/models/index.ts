@@ -9,6 +9,7 @@ import { initInvitation } from './invitation';
 import { initMembership } from './membership';
 import { initNotification } from './notification';
 import { initPasswordResetToken } from './password-reset-token';
+import { initRevokedSession } from './revoked-session';
 import { initRoute } from './route';
 import { initRouteReviewer } from './route-reviewer';
 import { initRouteRevision } from './route-revision';
@@ -43,6 +44,7 @@ export function initModels(sequelize: Sequelize) {
   const FitDataSet = initFitDataSet(sequelize);
   const Fit = initFit(sequelize);
   const PasswordResetToken = initPasswordResetToken(sequelize);
+  const RevokedSession = initRevokedSession(sequelize);
   const SpeciesImport = initSpeciesImport(sequelize);
   const TeamSpecies = initTeamSpecies(sequelize);
 
@@ -73,7 +75,7 @@ export function initModels(sequelize: Sequelize) {
   Fit.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
   FitDataSet.belongsTo(User, { foreignKey: 'updatedById', as: 'updatedBy' });
 
-  return { FitDataSet, Fit, User, PasswordResetToken, Team, Membership, Invitation, AuditEvent, UserPreference, Route, Step, StepLink, DriverReaction, RouteRevision, RouteTransition, RouteReviewer, Comment, StepFlag, Notification, Decision, SpeciesImport, TeamSpecies };
+  return { FitDataSet, Fit, User, PasswordResetToken, RevokedSession, Team, Membership, Invitation, AuditEvent, UserPreference, Route, Step, StepLink, DriverReaction, RouteRevision, RouteTransition, RouteReviewer, Comment, StepFlag, Notification, Decision, SpeciesImport, TeamSpecies };
 }
 
 export type Models = ReturnType<typeof initModels>;

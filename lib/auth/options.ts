@@ -6,7 +6,7 @@ import { SignInInput } from '../schemas/auth';
 import { authenticateUser } from '../services/users/authenticate-user';
 import { authSecret, env } from '../env';
 import { safeNextPath } from '../security/safe-next-path';
-import { currentSessionUser, SessionRevokedError } from './session-policy';
+import { currentSessionUser, newSessionId, revokeSession, SessionRevokedError } from './session-policy';
 
 export function authOptions(): NextAuthOptions {
   return {
@@ -38,6 +38,7 @@ export function authOptions(): NextAuthOptions {
           token.sub = user.id;
           token.epoch = row?.sessionEpoch ?? 0;
           token.authAt = Math.floor(Date.now() / 1000);
+          token.sid = newSessionId();
           return token;
         }
         // Throwing makes next-auth clear the cookie: the session was revoked, has hit its absolute limit, or its user is gone.
@@ -47,6 +48,12 @@ export function authOptions(): NextAuthOptions {
       async session({ session, token }) {
         if (session.user && token.sub) (session.user as { id?: string }).id = token.sub;
         return session;
+      },
+    },
+    events: {
+      // next-auth's sign-out route awaits this before it clears the cookie: the session ends on the server first.
+      async signOut({ token }) {
+        await revokeSession(token);
       },
     },
     logger: {

@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import { encode } from 'next-auth/jwt';
 import { NextRequest } from 'next/server';
 import { getDb } from '@/db';
@@ -15,10 +16,13 @@ export interface CallOptions {
   userId?: number | null;
 }
 
-// Like a real sign-in, the token carries the user's current session epoch and the sign-in time.
+// Like a real sign-in, the token carries the user's current session epoch, the sign-in time and a session id.
 export async function sessionCookie(userId: number): Promise<string> {
   const user = await getDb().models.User.findByPk(userId);
-  const token = await encode({ token: { sub: String(userId), epoch: user?.sessionEpoch ?? 0, authAt: Math.floor(Date.now() / 1000) }, secret: TEST_SECRET });
+  const token = await encode({
+    token: { sub: String(userId), epoch: user?.sessionEpoch ?? 0, authAt: Math.floor(Date.now() / 1000), sid: randomUUID() },
+    secret: TEST_SECRET,
+  });
   return `next-auth.session-token=${token}`;
 }
 
