@@ -9,6 +9,7 @@ import { AppError } from './errors';
 import { checkOrigin } from './origin';
 import { DEFAULT_MAX_BODY_BYTES, readJsonBody } from './read-body';
 import { toErrorResponse, zodFields } from './error-response';
+import { refuseNulInUrl } from './url-text';
 
 type Access = 'public' | 'user' | 'team';
 
@@ -50,6 +51,7 @@ export function withRoute<B extends z.ZodType | undefined = undefined, Q extends
     try {
       if (MUTATING.has(req.method)) checkOrigin(req);
       const params = flattenParams((await next?.params) ?? {});
+      refuseNulInUrl(params, req.nextUrl.searchParams);
       const user = options.access === 'public' ? await optionalUser(req) : await requireUser(req);
       const team = options.access === 'team' ? await resolveTeam(user as SessionUser, params, options) : null;
       const query = options.query ? parseWith(options.query, Object.fromEntries(req.nextUrl.searchParams)) : undefined;
