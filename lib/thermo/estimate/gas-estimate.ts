@@ -11,7 +11,7 @@ import { buildMolecule } from './rmg/rdkit-graph';
 import { loadRmgDatabase, type RmgDatabase } from './rmg/rmg-database';
 import { sigmaFor } from './rmg/sigma-model';
 import { CP_TEMPERATURES_K } from './rmg/thermo-values';
-import { type WeakKind, weakReasons } from './rmg/weak-classes';
+import { type WeakKind, weakReasons, WIDEN_ONLY } from './rmg/weak-classes';
 import { molecularSymmetry } from './symmetry';
 import { fitWilhoit, type WilhoitCp, wilhoitStateAt } from './wilhoit';
 
@@ -128,7 +128,7 @@ export function estimateGas(chem: Chem, smiles: string, db: RmgDatabase): GasEst
     sigma_dfH_kJ: sigma.dH_kJ,
     sigma_S_J_per_K: sigma.S_J_per_K,
     sigma_dfG_kJ: sigma.dG_kJ,
-    confidence: reasons.length > 0 ? 'low' : 'normal',
+    confidence: reasons.some((r) => !WIDEN_ONLY.has(r.kind)) ? 'low' : 'normal',
     weakReasons: reasons.map((r) => r.text),
     weakKinds: reasons.map((r) => r.kind),
     groups: [...groups.values()],

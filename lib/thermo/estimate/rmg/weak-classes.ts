@@ -13,7 +13,11 @@ export type WeakKind =
   | 'generic-group'
   | 'ring-heuristic'
   | 'cumulene'
-  | 'o-s-ring';
+  | 'o-s-ring'
+  | 'alcohol';
+
+/** Kinds that only widen σ (a known, moderate offset); the others also mark the estimate "low". */
+export const WIDEN_ONLY: ReadonlySet<WeakKind> = new Set(['o-s-ring', 'alcohol']);
 
 export interface WeakReason {
   kind: WeakKind;
@@ -60,6 +64,9 @@ export function weakReasons(groupTree: GroupTree<ThermoValues>, mol: MolGraph, c
     add('o-s-ring', 'ring holding O or S: ring-correction entropies of these rings fit published data poorly');
   }
   for (const c of contributions) {
+    if (c.file === 'group' && c.label === 'O2s-CsH') {
+      add('alcohol', 'aliphatic alcohol: the O2s-CsH group gives simple alcohols a systematic offset of several kJ/mol');
+    }
     if (c.file === 'group' && OLD_CARBONYL.has(c.label)) {
       add('conjugated-carbonyl-oxygen', `aromatic or conjugated acid, ester or anhydride: ${c.label} is of older provenance than its oxygen neighbours`);
     }
