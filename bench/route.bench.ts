@@ -2,7 +2,7 @@
 // evaluateRoute on a 200-step synthetic chain (median, p95 ms after warm-up): half the steps uphill
 // with every remedy worked out (cold: a species lookup of its own each run, so no memo helps), the
 // same after one edit (one step's temperature changed, the editor's pattern), and every step downhill.
-import { layeredLookup } from '../lib/thermo';
+import { builtinLookup, layeredLookup } from '../lib/thermo';
 import type { RouteEvaluateRequest, RouteStep } from '../lib/thermo/route';
 
 const STEPS = 200;
@@ -71,8 +71,8 @@ export async function runRouteBench(): Promise<Record<string, number>> {
   const mixed = mixedChain();
   const downhill = downhillChain();
   await time('route_200_mixed_cold', () => evaluateRoute(mixed, { lookup: layeredLookup([]) }), figures);
-  await time('route_200_mixed_after_edit', (i) => evaluateRoute(editOne(mixed, i)), figures);
-  await time('route_200_downhill', () => evaluateRoute(downhill), figures);
+  await time('route_200_mixed_after_edit', (i) => evaluateRoute(editOne(mixed, i), { lookup: builtinLookup }), figures);
+  await time('route_200_downhill', () => evaluateRoute(downhill, { lookup: builtinLookup }), figures);
   figures.route_steps = STEPS;
   return figures;
 }

@@ -35,7 +35,7 @@ function main(): void {
     cpSync(source, target, { recursive: true });
     console.log(`data:sync: ${name}: ${filesUnder(target).length} files copied to ${path.relative(ROOT, target)}`);
   }
-  console.log('data:sync: now run `npx tsx scripts/build-species-library.ts` and commit the changes.');
+  console.log('data:sync: now run `npx tsx scripts/build-species-library.ts` and `npm run data:organics`, then commit the changes.');
 }
 
 main();

@@ -3,7 +3,7 @@
 // Exit 0; exit 2 when stdin is not JSON or the subcommand is unknown.
 import { EvaluateRequestSchema } from '../lib/schemas/evaluate';
 import { FitRequestSchema } from '../lib/schemas/fit';
-import { evaluateStep, runFit } from '../lib/thermo';
+import { builtinLookup, evaluateStep, runFit } from '../lib/thermo';
 import { runItem } from '../lib/thermo/batch';
 import { evaluateRoute, RouteEvaluateRequestSchema } from '../lib/thermo/route';
 
@@ -22,9 +22,9 @@ async function readStdin(): Promise<string> {
 async function main(): Promise<number> {
   const command = process.argv[2];
   const handlers: Record<string, (item: unknown) => unknown> = {
-    evaluate: (item) => runItem(EvaluateRequestSchema, (r) => evaluateStep(r), item),
+    evaluate: (item) => runItem(EvaluateRequestSchema, (r) => evaluateStep(r, { lookup: builtinLookup }), item),
     fit: (item) => runItem(FitRequestSchema, (r) => runFit(r), item),
-    route: (item) => runItem(RouteEvaluateRequestSchema, (r) => evaluateRoute(r), item),
+    route: (item) => runItem(RouteEvaluateRequestSchema, (r) => evaluateRoute(r, { lookup: builtinLookup }), item),
   };
   const handler = command === undefined ? undefined : handlers[command];
   if (!handler) {

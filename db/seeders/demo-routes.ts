@@ -2,6 +2,7 @@ import type { Sequelize } from 'sequelize';
 import type { LinkInput, StepInput } from '../../lib/schemas/route';
 import { evaluateRouteDocument, summariseEvaluation } from '../../lib/services/routes/evaluate-route-document';
 import { stepRow } from '../../lib/services/routes/route-dto';
+import { builtinLookup } from '../../lib/thermo/species-library';
 import type { Models } from '../models';
 import { DEMO_TEAM_NAME, DEMO_USERS } from './demo-team';
 
@@ -48,7 +49,7 @@ export async function seedDemoRoutes({ sequelize, models }: { sequelize: Sequeli
     let originId: number | null = null;
     for (const plan of [STEAM_REFORMING, PARTIAL_OXIDATION]) {
       const doc = { target: 'CH3OH(g)', targetAmount: '1 mol', marginalThreshold_kJ: -17, steps: plan.steps, links: plan.links };
-      const summary = summariseEvaluation(doc, evaluateRouteDocument(doc));
+      const summary = summariseEvaluation(doc, evaluateRouteDocument(doc, builtinLookup));
       const route: { id: number } = await models.Route.create(
         { teamId: team.id, name: plan.name, target: doc.target, targetAmount: doc.targetAmount, originRouteId: originId, createdById: designer.id, updatedById: designer.id, ...summary },
         { transaction },

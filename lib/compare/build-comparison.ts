@@ -29,7 +29,7 @@ export interface RouteForComparison {
   outcome: { evaluation: RouteEvaluateResponse } | { error: { code: string; message: string; field: string | null } };
 }
 
-function compareOne(route: RouteForComparison, lookup?: SpeciesLookup): ComparedRoute {
+function compareOne(route: RouteForComparison, lookup: SpeciesLookup): ComparedRoute {
   const { outcome, request, openFlags, unresolvedComments, stepCount, ...meta } = route;
   const facts = { status: meta.status, updatedAt: meta.updatedAt, updatedBy: meta.updatedBy, stepCount, openFlags, unresolvedComments };
   const head = {
@@ -43,7 +43,7 @@ function compareOne(route: RouteForComparison, lookup?: SpeciesLookup): Compared
   return { ...head, ladder, error: null, metrics: metricsOf(facts, { evaluation: outcome.evaluation, ladder, targetMol }) };
 }
 
-export function buildComparison(routes: readonly RouteForComparison[], whatIf: WhatIf, lookup?: SpeciesLookup): Comparison {
+export function buildComparison(routes: readonly RouteForComparison[], whatIf: WhatIf, lookup: SpeciesLookup): Comparison {
   const compared = routes.map((r) => compareOne(r, lookup));
   return {
     whatIf,

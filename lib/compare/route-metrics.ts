@@ -28,7 +28,7 @@ function stepTemperature(request: RouteEvaluateRequest, stepId: string, evaluate
 }
 
 /** The ladder in the engine's order, energies divided down to one mol of target. */
-export function ladderOf(request: RouteEvaluateRequest, evaluation: RouteEvaluateResponse, targetMol: number, lookup?: SpeciesLookup): RouteLadder {
+export function ladderOf(request: RouteEvaluateRequest, evaluation: RouteEvaluateResponse, targetMol: number, lookup: SpeciesLookup): RouteLadder {
   const equations = new Map(request.steps.map((s) => [s.id, s.equation]));
   const steps: LadderStep[] = evaluation.steps.map((s) => {
     const equation = equations.get(s.id) ?? '';

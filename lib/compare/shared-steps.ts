@@ -1,5 +1,5 @@
 // Steps two or more compared routes share: the same equation up to spelling, term order and species aliases.
-import { builtinLookup, type SpeciesLookup } from '../thermo/species-library';
+import type { SpeciesLookup } from '../thermo/species-library';
 import { formatStoichiometry, readStoichiometry } from '../thermo/route/stoichiometry';
 import type { SharedEquation } from './compare-types';
 
@@ -7,7 +7,7 @@ import type { SharedEquation } from './compare-types';
  * "CO(g) + 2 H2(g) -> CH3OH(g)" for "2H2(g) + CO(g) = CH3OH(g)". Coefficients stay as written, so a step
  * written twice as large is a different step. Null when the equation cannot be read.
  */
-export function normaliseEquation(equation: string, lookup: SpeciesLookup = builtinLookup): string | null {
+export function normaliseEquation(equation: string, lookup: SpeciesLookup): string | null {
   const { nu } = readStoichiometry(equation, lookup);
   if (!nu) return null;
   const sorted = new Map([...nu].filter(([, v]) => !v.equals(0)).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)));

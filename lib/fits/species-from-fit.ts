@@ -4,6 +4,7 @@
 import { T_REF } from '../thermo/constants';
 import { parseEquation } from '../thermo/equation';
 import { ThermoError } from '../thermo/errors';
+import { lookupParseOptions } from '../thermo/lookup-parse-options';
 import type { SpeciesRef } from '../thermo/notation';
 import type { SpeciesLookup } from '../thermo/species-library';
 import type { FitResult } from './analyse-fit';
@@ -25,7 +26,7 @@ export interface SolvedSpecies {
 }
 
 function netStoichiometry(equation: string, lookup: SpeciesLookup): Map<string, { ref: SpeciesRef; nu: number }> {
-  const parsed = parseEquation(equation, { resolveAlias: (n, p) => lookup.resolveAlias(n, p) });
+  const parsed = parseEquation(equation, lookupParseOptions(lookup));
   const out = new Map<string, { ref: SpeciesRef; nu: number }>();
   for (const [terms, sign] of [[parsed.reactants, -1], [parsed.products, 1]] as const) {
     for (const t of terms) {

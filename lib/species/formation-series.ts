@@ -5,7 +5,7 @@ import { cpFromForm } from '../thermo/cp-forms';
 import { T_REF } from '../thermo/constants';
 import { nasa9At } from '../thermo/nasa9';
 import { reactionThermoAt, type ReactionSpecies } from '../thermo/reaction-thermo';
-import { builtinLookup, type SpeciesLookup } from '../thermo/species-library';
+import type { SpeciesLookup } from '../thermo/species-library';
 import { speciesRange } from '../thermo/species-state';
 import type { SpeciesRecord } from '../thermo/species-types';
 import { elementEntropies } from './consistency';
@@ -57,7 +57,7 @@ function cpAt(record: SpeciesRecord, T: number): number | null {
   return record.Cp_J_per_K;
 }
 
-export function formationSeries(record: SpeciesRecord, lookup: SpeciesLookup = builtinLookup, count = 41): FormationSeries {
+export function formationSeries(record: SpeciesRecord, lookup: SpeciesLookup, count = 41): FormationSeries {
   const [lo, hi] = speciesRange(record);
   const terms = formationTerms(record, lookup);
   const isElement = Object.keys(record.elements).length === 1 && record.flags.includes('elementReference');

@@ -1,6 +1,6 @@
 import { fraction, type Fraction } from 'mathjs';
 import { ThermoError, parseError } from './errors';
-import { isPhaseContent, parseSpecies, type AliasResolver, type NameSuggester, type SpeciesRef } from './notation';
+import { isPhaseContent, parseSpecies, type AliasResolver, type KeyDescriber, type NameSuggester, type SpeciesRef } from './notation';
 
 export type Arrow = '->' | '→' | '=' | '<=>' | '⇌';
 
@@ -21,6 +21,8 @@ export interface ParseEquationOptions {
   resolveAlias?: AliasResolver;
   /** consulted only for a name resolveAlias does not know */
   suggestNames?: NameSuggester;
+  describeKey?: KeyDescriber;
+  resolveLabel?: (label: string) => string | undefined;
 }
 
 // Longest first, so "<=>" is not read as "=".
@@ -131,7 +133,7 @@ function parseTerm(text: string, start: number, end: number, opts: ParseEquation
     }
     i += m[0].length;
   }
-  const species = parseSpecies(text.slice(i, end), { resolveAlias: opts.resolveAlias, suggestNames: opts.suggestNames, offset: i, source: text });
+  const species = parseSpecies(text.slice(i, end), { ...opts, offset: i, source: text });
   return makeTerm(coefficient, species);
 }
 

@@ -7,13 +7,14 @@ import { memoCrossover } from './crossover';
 import { equilibriumFromRequest, type EquilibriumSummary } from './equilibrium-request';
 import { ThermoError, isThermoError } from './errors';
 import { kFromLnK } from './fit';
+import { lookupParseOptions } from './lookup-parse-options';
 import { parseSpecies } from './notation';
 import { phaseWarnings } from './phase-checks';
 import { applyOverride, type OverrideSummary } from './reaction-override';
 import { STANDARD_PRESSURES_BAR, lnKFromDeltaG, reactionThermoAt, type ReactionSpecies } from './reaction-thermo';
 import { resolveReaction } from './resolve-reaction';
 import { assertFiniteNumbers } from './sanitise';
-import { builtinLookup, type SpeciesLookup, type SpeciesOrigin } from './species-library';
+import type { SpeciesLookup, SpeciesOrigin } from './species-library';
 import { makeSpeciesMatcher, type CanonicalKey } from './species-matcher';
 import { reactionUncertainty, type UncertaintyResult } from './uncertainty';
 import { parseTemperature } from './units';
@@ -122,7 +123,7 @@ function dataWarnings(species: readonly ReactionSpecies[], lookup: SpeciesLookup
 function canonicalKeyFor(lookup: SpeciesLookup): CanonicalKey {
   return (text) => {
     try {
-      return parseSpecies(text, { resolveAlias: (n, p) => lookup.resolveAlias(n, p) }).key;
+      return parseSpecies(text, lookupParseOptions(lookup)).key;
     } catch (err) {
       if (isThermoError(err)) return undefined;
       throw err;
@@ -131,13 +132,14 @@ function canonicalKeyFor(lookup: SpeciesLookup): CanonicalKey {
 }
 
 export interface EvaluateOptions {
-  lookup?: SpeciesLookup;
+  /** the library, team species and estimator to resolve species with; always given, never a default */
+  lookup: SpeciesLookup;
   /** false leaves the finite-number check to a caller that checks its whole answer (route evaluation) */
   checkFinite?: boolean;
 }
 
-export function evaluateStep(request: EvaluateRequest, opts: EvaluateOptions = {}): EvaluateResponse {
-  const lookup = opts.lookup ?? builtinLookup;
+export function evaluateStep(request: EvaluateRequest, opts: EvaluateOptions): EvaluateResponse {
+  const lookup = opts.lookup;
   const T = readTemperature(request.temperature);
   const standardPressure_bar = readStandardPressure(request.standardPressure);
   const heatCapacity = request.heatCapacity ?? true;

@@ -20,9 +20,23 @@ export type AliasResolver = (name: string, phaseOrForm: string) => string | unde
 /** Closest known spellings for a name the resolver does not know, best first. */
 export type NameSuggester = (name: string, phaseOrForm: string) => string[];
 
+/** What a key that is not a formula (a structure key, "{InChIKey}(l)") stands for: read from the lookup's record. */
+export interface KeyDescription {
+  formula: string;
+  phase: Phase;
+  charge: number;
+  elements: Record<string, number>;
+}
+
+export type KeyDescriber = (key: string) => KeyDescription | undefined;
+
 export interface ParseSpeciesOptions {
   resolveAlias?: AliasResolver;
   suggestNames?: NameSuggester;
+  /** describes structure keys; without it they cannot be read */
+  describeKey?: KeyDescriber;
+  /** a label of the request's species map ("EtOAc", written without a phase) → its key */
+  resolveLabel?: (label: string) => string | undefined;
   /** Index of `text` inside a larger text, so positions point into what the user typed. */
   offset?: number;
   /** The larger text, quoted in error messages when given. */
@@ -83,6 +97,9 @@ export function parseSpecies(text: string, opts: ParseSpeciesOptions = {}): Spec
   if (work.length === 0) {
     throw parseError(`Expected a species at position ${base} in "${ctx.source}"`, base, PHASE_HINT);
   }
+  const labelled = opts.resolveLabel?.(raw);
+  if (labelled !== undefined) return { ...describedKey(labelled, raw, ctx, opts), alias: raw };
+  if (work.startsWith('{')) return describedKey(work, raw, ctx, opts);
   if (ELECTRON.test(work)) {
     throw parseError(
       `Electrons ("${raw}") at position ${base} can't be written as a species`,
@@ -159,6 +176,19 @@ function checkGroups(work: string, ctx: Ctx): Map<number, number> {
   return pairs;
 }
 
+/** A key read through the lookup rather than as a formula: structure keys, and labels that resolve to any key. */
+function describedKey(key: string, raw: string, ctx: Ctx, opts: ParseSpeciesOptions): SpeciesRef {
+  if (!key.startsWith('{')) return { ...parseSpecies(key, { describeKey: opts.describeKey }), raw };
+  const d = opts.describeKey?.(key);
+  if (!d) {
+    throw new ThermoError('UNKNOWN_SPECIES', `Unknown structure key "${key}"`, {
+      position: ctx.pos(0),
+      hint: 'give the species by name, formula or SMILES; structure keys come from Stepwell answers',
+    });
+  }
+  return { raw, key, formula: d.formula, phase: d.phase, form: null, charge: d.charge, elements: d.elements, alias: null };
+}
+
 function resolveName(raw: string, body: string, phaseOrForm: string, ctx: Ctx, opts: ParseSpeciesOptions): SpeciesRef {
   for (let i = 0; i < body.length; i++) {
     if (!NAME_CHARS.test(body[i]!)) {
@@ -184,7 +214,7 @@ function resolveName(raw: string, body: string, phaseOrForm: string, ctx: Ctx, o
   }
   let resolved: SpeciesRef;
   try {
-    resolved = parseSpecies(key);
+    resolved = key.startsWith('{') ? describedKey(key, raw, ctx, opts) : parseSpecies(key);
   } catch (err) {
     if (!(err instanceof ThermoError)) throw err;
     throw parseError(

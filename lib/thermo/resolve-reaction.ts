@@ -6,6 +6,7 @@ import { BoundedMemo } from './bounded-memo';
 import { formatEquation, parseEquation, type ParsedEquation } from './equation';
 import { ThermoError, isThermoError } from './errors';
 import type { ReactionSpecies } from './reaction-thermo';
+import { lookupParseOptions } from './lookup-parse-options';
 import type { SpeciesLookup } from './species-library';
 
 export interface ResolvedReaction {
@@ -27,10 +28,7 @@ function withField(err: ThermoError, field: string): ThermoError {
 
 function parse(text: string, lookup: SpeciesLookup): ParsedEquation {
   try {
-    return parseEquation(text, {
-      resolveAlias: (n, p) => lookup.resolveAlias(n, p),
-      suggestNames: (n, p) => lookup.suggestName?.(n, p, 5) ?? [],
-    });
+    return parseEquation(text, lookupParseOptions(lookup, true));
   } catch (err) {
     throw isThermoError(err) ? withField(err, 'equation') : err;
   }

@@ -3,6 +3,7 @@
 import libraryJson from './data/species-library.json';
 import { editDistance } from './edit-distance';
 import type { SpeciesLibraryFile, SpeciesRecord } from './species-types';
+import { mergeOrganicLibrary, readOrganicLibrary } from './structure/library-merge';
 
 export interface SpeciesLookup {
   get(key: string): SpeciesRecord | undefined;
@@ -16,6 +17,10 @@ export interface SpeciesLookup {
   origin?(key: string): SpeciesOrigin;
   /** closest writable names ("ethanol(l)") or keys for an unknown name; same phase first on ties */
   suggestName?(name: string, phaseOrForm: string, limit?: number): string[];
+  /** the key of the species with this InChIKey in this phase, if the lookup has one */
+  findStructure?(inchikey: string, phase: string): string | undefined;
+  /** a label of the request's species map ("EtOAc") → key; labels are written without a phase */
+  resolveLabel?(label: string): string | undefined;
 }
 
 export type SpeciesOrigin = 'library' | 'team';
@@ -60,11 +65,13 @@ class MapLookup implements SpeciesLookup {
   private readonly byKey = new Map<string, SpeciesRecord>();
   private readonly byAlias = new Map<string, string>();
   private readonly byComposition = new Map<string, string[]>();
+  private readonly byStructure = new Map<string, string>();
   private names: NameCandidate[] | undefined;
 
   constructor(records: readonly SpeciesRecord[]) {
     for (const r of records) {
       this.byKey.set(r.key, r);
+      if (r.structure) this.byStructure.set(`${r.structure.inchikey}|${r.phase}`, r.key);
       for (const a of r.aliases) this.byAlias.set(aliasKey(a, r.form ?? r.phase), r.key);
       const c = compositionKey(r.elements);
       const list = this.byComposition.get(c) ?? [];
@@ -79,6 +86,10 @@ class MapLookup implements SpeciesLookup {
 
   resolveAlias(name: string, phaseOrForm: string): string | undefined {
     return this.byAlias.get(aliasKey(name, phaseOrForm));
+  }
+
+  findStructure(inchikey: string, phase: string): string | undefined {
+    return this.byStructure.get(`${inchikey}|${phase}`);
   }
 
   keys(): IterableIterator<string> {
@@ -146,12 +157,25 @@ function rankSuggestions(key: string, candidates: string[], sameFormula: string[
   return ordered.slice(0, limit);
 }
 
-const builtin = new MapLookup(library.species);
+// The NBS/NASA library with the organic library merged in (lib/thermo/structure/library-merge.ts).
+const builtinRecords = mergeOrganicLibrary(library.species, readOrganicLibrary());
+const builtin = new MapLookup(builtinRecords);
 
 export const builtinLookup: SpeciesLookup = builtin;
 
-export function builtinSpecies(): readonly SpeciesRecord[] {
+/**
+ * The NBS 1982 / NASA Glenn records alone, as tabulated (no organic library, no newer evaluations): for the
+ * reference tests that check the engine's arithmetic against those tables, worked by hand.
+ */
+export const nbsLookup: SpeciesLookup = new MapLookup(library.species);
+
+/** The records of nbsLookup. */
+export function nbsSpecies(): readonly SpeciesRecord[] {
   return library.species;
+}
+
+export function builtinSpecies(): readonly SpeciesRecord[] {
+  return builtinRecords;
 }
 
 /** Team species shadow built-ins of the same key; the evaluation warns with code OVERRIDE. */
@@ -170,5 +194,6 @@ export function layeredLookup(teamSpecies: readonly SpeciesRecord[], base: Speci
       const own = team.suggestName(name, phaseOrForm, limit);
       return [...new Set([...own, ...(base.suggestName?.(name, phaseOrForm, limit) ?? [])])].slice(0, limit);
     },
+    findStructure: (inchikey, phase) => team.findStructure(inchikey, phase) ?? base.findStructure?.(inchikey, phase),
   };
 }

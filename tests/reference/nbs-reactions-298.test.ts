@@ -2,6 +2,7 @@
 // NBS Tables 1982 (Wagman et al., J. Phys. Chem. Ref. Data 11, Suppl. 2). The species values
 // used are listed beside each reaction as (ΔfH° kJ/mol, ΔfG° kJ/mol, S° J/(mol K)).
 import { describe, expect, it } from 'vitest';
+import { nbsLookup } from '@/lib/thermo/species-library';
 import { evaluateStep } from '@/lib/thermo';
 
 interface Case {
@@ -39,7 +40,7 @@ const CASES: Case[] = [
 
 describe('reaction values at 298.15 K against NBS Tables 1982 (Wagman et al.), worked by hand', () => {
   it.each(CASES)('$equation  [$values]', ({ equation, dH, dS, dG }) => {
-    const r = evaluateStep({ equation });
+    const r = evaluateStep({ equation }, { lookup: nbsLookup });
     expect(r.temperature_K).toBe(298.15);
     expect(Math.abs(r.deltaH0_kJ - dH)).toBeLessThanOrEqual(TOL_KJ);
     expect(Math.abs(r.deltaS0_J_per_K - dS)).toBeLessThanOrEqual(TOL_J_PER_K);
@@ -48,7 +49,7 @@ describe('reaction values at 298.15 K against NBS Tables 1982 (Wagman et al.), w
 
   it('reproduces the tabulated ΔfG° exactly at 298.15 K, not H − TS (NBS Tables 1982: Na2CO3(s) ΔfG° −1044.44)', () => {
     // Na2CO3 is a "G-H-S relaxed" NBS row: H − TS would give about −1046.9 kJ/mol.
-    const r = evaluateStep({ equation: '2 Na(s) + C(s) + 3/2 O2(g) -> Na2CO3(s)' });
+    const r = evaluateStep({ equation: '2 Na(s) + C(s) + 3/2 O2(g) -> Na2CO3(s)' }, { lookup: nbsLookup });
     expect(r.deltaG0_kJ).toBe(-1044.44);
     expect(r.deltaH0_kJ).toBe(-1130.68);
     expect(r.warnings.map((w) => w.code)).toContain('GHS_INCONSISTENT');
@@ -60,7 +61,7 @@ describe('independent published values at 298.15 K', () => {
   const pK = (dG_kJ: number): number => (dG_kJ * 1000) / (8.314462618 * 298.15 * lnTen);
 
   it('water formation against CODATA Key Values 1989 (from memory): ΔfH° −285.830 ± 0.040 kJ/mol, S°(H2O,l) 69.95 ± 0.03', () => {
-    const r = evaluateStep({ equation: 'H2(g) + 1/2 O2(g) -> H2O(l)' });
+    const r = evaluateStep({ equation: 'H2(g) + 1/2 O2(g) -> H2O(l)' }, { lookup: nbsLookup });
     expect(Math.abs(r.deltaH0_kJ - -285.83)).toBeLessThanOrEqual(0.04);
     // NBS S°(H2O,l) 69.91 sits 0.04 below CODATA; the S° sum must stay within that spread plus σ.
     const sWater = r.deltaS0_J_per_K + 130.684 + 205.138 / 2;
@@ -68,45 +69,45 @@ describe('independent published values at 298.15 K', () => {
   });
 
   it('CO2 formation against CODATA Key Values 1989 (from memory): ΔfH° −393.51 ± 0.13 kJ/mol', () => {
-    const r = evaluateStep({ equation: 'C(s) + O2(g) -> CO2(g)' });
+    const r = evaluateStep({ equation: 'C(s) + O2(g) -> CO2(g)' }, { lookup: nbsLookup });
     expect(Math.abs(r.deltaH0_kJ - -393.51)).toBeLessThanOrEqual(0.13);
   });
 
   it('ionic product of water pKw = 13.995 at 25 °C (Harned & Owen; from memory)', () => {
-    expect(pK(evaluateStep({ equation: 'H2O(l) -> H+(aq) + OH-(aq)' }).deltaG0_kJ)).toBeCloseTo(13.995, 2);
+    expect(pK(evaluateStep({ equation: 'H2O(l) -> H+(aq) + OH-(aq)' }, { lookup: nbsLookup }).deltaG0_kJ)).toBeCloseTo(13.995, 2);
   });
 
   it('acetic acid pKa = 4.756 at 25 °C (Harned & Ehlers 1932; from memory)', () => {
-    expect(pK(evaluateStep({ equation: 'CH3COOH(aq) -> CH3COO-(aq) + H+(aq)' }).deltaG0_kJ)).toBeCloseTo(4.756, 2);
+    expect(pK(evaluateStep({ equation: 'CH3COOH(aq) -> CH3COO-(aq) + H+(aq)' }, { lookup: nbsLookup }).deltaG0_kJ)).toBeCloseTo(4.756, 2);
   });
 
   it('ammonium pKa = 9.245 at 25 °C (Bates & Pinching 1949; from memory), within 0.01', () => {
-    const v = pK(evaluateStep({ equation: 'NH4+(aq) -> NH3(aq) + H+(aq)' }).deltaG0_kJ);
+    const v = pK(evaluateStep({ equation: 'NH4+(aq) -> NH3(aq) + H+(aq)' }, { lookup: nbsLookup }).deltaG0_kJ);
     expect(Math.abs(v - 9.245)).toBeLessThanOrEqual(0.01);
   });
 
   it('Daniell cell E° = 1.104 V from E°(Cu2+/Cu) = +0.3419 V and E°(Zn2+/Zn) = −0.7618 V (CRC Handbook; from memory)', () => {
-    const r = evaluateStep({ equation: 'Zn(s) + Cu+2(aq) -> Zn+2(aq) + Cu(s)', electrons: 2 });
+    const r = evaluateStep({ equation: 'Zn(s) + Cu+2(aq) -> Zn+2(aq) + Cu(s)', electrons: 2 }, { lookup: nbsLookup });
     expect(Math.abs(r.cellPotential_V! - 1.1037)).toBeLessThanOrEqual(0.005);
   });
 
   it('H2/O2 cell E° = 1.229 V (common textbook value, from memory)', () => {
-    const r = evaluateStep({ equation: 'H2(g) + 1/2 O2(g) -> H2O(l)', electrons: 2 });
+    const r = evaluateStep({ equation: 'H2(g) + 1/2 O2(g) -> H2O(l)', electrons: 2 }, { lookup: nbsLookup });
     expect(r.cellPotential_V!).toBeCloseTo(1.229, 3);
   });
 
   it('vapour pressure of water at 25 °C = 3.1699 kPa (IAPWS-95 / Wagner & Pruss 2002; from memory), within 1 %', () => {
-    const r = evaluateStep({ equation: 'H2O(l) -> H2O(g)' });
+    const r = evaluateStep({ equation: 'H2O(l) -> H2O(g)' }, { lookup: nbsLookup });
     expect(Math.abs(r.K! / 0.031699 - 1)).toBeLessThanOrEqual(0.01);
   });
 
   it('water boils at 372.76 K under 1 bar (IAPWS-95; from memory), within 1 K for the ideal-gas standard state', () => {
-    const r = evaluateStep({ equation: 'H2O(l) -> H2O(g)' });
+    const r = evaluateStep({ equation: 'H2O(l) -> H2O(g)' }, { lookup: nbsLookup });
     expect(Math.abs(r.crossover_K! - 372.76)).toBeLessThanOrEqual(1);
   });
 
   it('1 atm standard state: ΔfG°(H2O,l) = −237.178 kJ/mol in the older 1 atm tables (NBS Technical Note 270; from memory)', () => {
-    const r = evaluateStep({ equation: 'H2(g) + 1/2 O2(g) -> H2O(l)', standardPressure: '1 atm' });
+    const r = evaluateStep({ equation: 'H2(g) + 1/2 O2(g) -> H2O(l)', standardPressure: '1 atm' }, { lookup: nbsLookup });
     expect(r.deltaG0_kJ).toBeCloseTo(-237.178, 3);
   });
 });

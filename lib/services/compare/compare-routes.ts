@@ -83,5 +83,5 @@ export async function compareRoutes({ teamId, ids, whatIf = {}, transaction }: {
     request,
     outcome: evaluateOutcome(request, drivers, lookup),
   }));
-  return buildComparison(routes, whatIf);
+  return buildComparison(routes, whatIf, lookup);
 }

@@ -3,11 +3,12 @@ import { getDb } from '../../../db';
 import type { DriverInput } from '../../schemas/driver';
 import { evaluateStep } from '../../thermo/evaluate';
 import { recordEvent } from '../audit/record-event';
+import { teamLookup } from '../species/team-lookup';
 import { listDrivers } from './list-drivers';
 
 export async function createDriver({ teamId, userId, input }: { teamId: number; userId: number; input: DriverInput }) {
   // Evaluating once proves the equation parses, balances and uses known species (ThermoError → 400 otherwise).
-  const check = evaluateStep({ equation: input.equation });
+  const check = evaluateStep({ equation: input.equation }, { lookup: await teamLookup(teamId) });
   await listDrivers({ teamId });
   const { sequelize, models } = getDb();
   return sequelize.transaction(async (transaction) => {

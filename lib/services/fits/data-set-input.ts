@@ -6,6 +6,7 @@ import type { DataRowInput, StoredPoint, TemperatureUnit, ValueKind } from '../.
 import { checkBalance, describeImbalance, isBalanced } from '../../thermo/balance';
 import { parseEquation } from '../../thermo/equation';
 import { isThermoError } from '../../thermo/errors';
+import { lookupParseOptions } from '../../thermo/lookup-parse-options';
 import type { SpeciesLookup } from '../../thermo/species-library';
 
 /** Table text (CSV or pasted) → rows; a table that cannot be read is one message on `text`. */
@@ -32,7 +33,7 @@ export function pointsFromRows(rows: readonly DataRowInput[], unit: TemperatureU
 export function checkLinkedEquation(equation: string, lookup: SpeciesLookup): void {
   if (equation === '') return;
   try {
-    const parsed = parseEquation(equation, { resolveAlias: (n, p) => lookup.resolveAlias(n, p) });
+    const parsed = parseEquation(equation, lookupParseOptions(lookup));
     if (!isBalanced(parsed)) {
       const message = `The equation is not balanced (${describeImbalance(checkBalance(parsed))}).`;
       throw new AppError('VALIDATION', message, { fields: { equation: message } });

@@ -15,7 +15,7 @@ export async function latestRevisionState({ routeId, transaction }: { routeId: n
 }
 
 // A route without revisions is compared against its saved rows, evaluated once for their ΔG.
-export function stateOfDocument(doc: RouteDocumentDto, evaluation?: RouteEvaluation, lookup?: SpeciesLookup): RevisionState {
+export function stateOfDocument(doc: RouteDocumentDto, evaluation: RouteEvaluation | undefined, lookup: SpeciesLookup): RevisionState {
   const snapshot = toSnapshot(doc);
   return { snapshot, ...energiesOf(evaluation ?? (doc.steps.length ? evaluateRouteDocument(snapshot, lookup) : null)) };
 }

@@ -1,7 +1,7 @@
 import { ThermoError } from '../../thermo/errors';
 import { parseAmount } from '../../thermo/units';
 import { evaluateRoute, type RouteEvaluateResponse } from '../../thermo/route';
-import { builtinLookup, type SpeciesLookup } from '../../thermo/species-library';
+import type { SpeciesLookup } from '../../thermo/species-library';
 import type { LinkInput, StepInput } from '../../schemas/route';
 import type { ReactionOverride } from '../../thermo/reaction-override';
 
@@ -41,7 +41,7 @@ export function toRouteEvaluateRequest(route: RouteLike, fits: StepFits = NO_FIT
 // The ladder and totals a save caches for the list; remedies are the evaluate endpoint's job.
 // A route the engine refuses as a whole (empty, cyclic) still saves; the answer carries the reason.
 // `lookup` is the team's (lib/services/species/team-lookup.ts); the built-in library alone otherwise.
-export function evaluateRouteDocument(route: RouteLike, lookup: SpeciesLookup = builtinLookup, fits: StepFits = NO_FITS): RouteEvaluation {
+export function evaluateRouteDocument(route: RouteLike, lookup: SpeciesLookup, fits: StepFits = NO_FITS): RouteEvaluation {
   try {
     return evaluateRoute(toRouteEvaluateRequest(route, fits) as Parameters<typeof evaluateRoute>[0], { remedies: false, lookup });
   } catch (error) {

@@ -35,7 +35,7 @@ export async function getSpecies({ teamId, key }: { teamId: number; key: string 
     team: row ? toTeamSpeciesDto(row) : null,
     builtin,
     series: formationSeries(record, lookup),
-    builtinSeries: row && builtin ? formationSeries(builtin) : null,
+    builtinSeries: row && builtin ? formationSeries(builtin, builtinLookup) : null,
     routes: uses.get(key) ?? [],
   };
 }

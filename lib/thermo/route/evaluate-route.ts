@@ -5,7 +5,7 @@ import type { RouteEvaluateRequest, RouteStep } from '../../schemas/route-evalua
 import { ThermoError, isThermoError } from '../errors';
 import { evaluateStep, type EvaluateResponse } from '../evaluate';
 import { assertFiniteNumbers } from '../sanitise';
-import { builtinLookup, type SpeciesLookup } from '../species-library';
+import type { SpeciesLookup } from '../species-library';
 import { parseAmount } from '../units';
 import { DEFAULT_DRIVERS, prepareDrivers } from './drivers';
 import { computeExtents } from './extents';
@@ -23,7 +23,8 @@ import { readStoichiometry, speciesKey, type Stoichiometry } from './stoichiomet
 export { DEFAULT_MARGINAL_THRESHOLD_KJ };
 
 export interface RouteOptions {
-  lookup?: SpeciesLookup;
+  /** the library, team species and estimator to resolve species with; always given, never a default */
+  lookup: SpeciesLookup;
   drivers?: readonly DriverReaction[];
   /** false skips the remedy searches, for callers that need only the ladder and totals (default true) */
   remedies?: boolean;
@@ -125,8 +126,8 @@ function remediesFor(e: Evaluated, goal_kJ: number, ctx: CouplingContext, driver
  * the totals; its cumulative values carry the running sum. Classes, counts, remedies and
  * smallestDrivingForce_kJ use ΔG per mol of reaction as written; largestUphill_kJ uses ξ·ΔG.
  */
-export function evaluateRoute(request: RouteEvaluateRequest, opts: RouteOptions = {}): RouteEvaluateResponse {
-  const lookup = opts.lookup ?? builtinLookup;
+export function evaluateRoute(request: RouteEvaluateRequest, opts: RouteOptions): RouteEvaluateResponse {
+  const lookup = opts.lookup;
   const { amount, threshold, yields } = readInputs(request);
   checkTarget(request.target, lookup);
   const links = request.links ?? [];

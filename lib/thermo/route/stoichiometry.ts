@@ -4,6 +4,7 @@ import { fraction, type Fraction } from 'mathjs';
 import { BoundedMemo } from '../bounded-memo';
 import { parseEquation } from '../equation';
 import { isThermoError, type ThermoError } from '../errors';
+import { lookupParseOptions } from '../lookup-parse-options';
 import { parseSpecies } from '../notation';
 import type { SpeciesLookup } from '../species-library';
 
@@ -12,7 +13,7 @@ export type Stoichiometry = Map<string, Fraction>;
 const ZERO = fraction(0);
 
 export function speciesKey(text: string, lookup: SpeciesLookup): string {
-  return parseSpecies(text, { resolveAlias: (n, p) => lookup.resolveAlias(n, p) }).key;
+  return parseSpecies(text, lookupParseOptions(lookup)).key;
 }
 
 export function nuOf(nu: Stoichiometry, key: string): number {
@@ -39,7 +40,7 @@ export function readStoichiometry(equation: string, lookup: SpeciesLookup): Stoi
 
 function parseStoichiometry(equation: string, lookup: SpeciesLookup): StoichiometryRead {
   try {
-    const eq = parseEquation(equation, { resolveAlias: (n, p) => lookup.resolveAlias(n, p) });
+    const eq = parseEquation(equation, lookupParseOptions(lookup));
     const nu: Stoichiometry = new Map();
     for (const t of eq.reactants) nu.set(t.species.key, (nu.get(t.species.key) ?? ZERO).sub(t.coefficient));
     for (const t of eq.products) nu.set(t.species.key, (nu.get(t.species.key) ?? ZERO).add(t.coefficient));

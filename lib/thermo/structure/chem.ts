@@ -30,8 +30,8 @@ export interface ParsedStructure {
 export interface Chem {
   readonly rdkit: RDKitModule;
   parse(smiles: string, field?: string): ParsedStructure;
-  /** Runs `use` on a parsed molecule and frees its WASM memory afterwards. */
-  withMol<T>(smiles: string, use: (mol: JSMol) => T, field?: string): T;
+  /** Runs `read` on a parsed molecule and frees its WASM memory afterwards. */
+  withMol<T>(smiles: string, read: (mol: JSMol) => T, field?: string): T;
 }
 
 let loading: Promise<Chem> | undefined;
@@ -101,10 +101,10 @@ function createChem(rdkit: RDKitModule): Chem {
     return mol;
   }
 
-  function withMol<T>(smiles: string, use: (mol: JSMol) => T, field = 'smiles'): T {
+  function withMol<T>(smiles: string, read: (mol: JSMol) => T, field = 'smiles'): T {
     const mol = open(smiles, field);
     try {
-      return use(mol);
+      return read(mol);
     } finally {
       mol.delete();
     }

@@ -1,5 +1,6 @@
 // Best value per metric row: worked examples from library reactions (NBS Tables 1982 ΔfG° at 298.15 K, from memory).
 import { describe, expect, it } from 'vitest';
+import { nbsLookup } from '@/lib/thermo/species-library';
 import { bestPerRow, type RankedRoute } from '@/lib/compare/best-values';
 import { buildComparison } from '@/lib/compare/build-comparison';
 import type { RouteMetrics } from '@/lib/compare/compare-types';
@@ -20,7 +21,7 @@ describe('best per row, from evaluated routes', () => {
   const calcine = forComparison(oneStep('CO2(g)', CALCINATION), { id: 2, status: 'approved' });
   const dimer = forComparison(oneStep('N2O4(g)', NO2_DIMER), { id: 3, unresolvedComments: 4 });
   const chain = forComparison(reformingThenShift(), { id: 4 });
-  const { best } = buildComparison([burn, calcine, dimer, chain], {});
+  const { best } = buildComparison([burn, calcine, dimer, chain], {}, nbsLookup);
 
   it('lowest overall ΔG and ΔG° is the carbon burn (−394.359 kJ per mol target)', () => {
     expect(best.overallDeltaG_kJ).toEqual([1]);

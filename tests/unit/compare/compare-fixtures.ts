@@ -1,6 +1,7 @@
 // Routes for the comparison tests: every reaction is in the built-in library (NBS Tables 1982 values at 298.15 K).
 import type { RouteForComparison } from '@/lib/compare/build-comparison';
 import { evaluateRoute, type RouteEvaluateRequest } from '@/lib/thermo/route';
+import { nbsLookup } from '@/lib/thermo/species-library';
 
 export const CARBON_BURN = 'C(s) + O2(g) -> CO2(g)';
 export const CALCINATION = 'CaCO3(s) -> CaO(s) + CO2(g)';
@@ -43,7 +44,7 @@ export function forComparison(request: RouteEvaluateRequest, over: Partial<Route
     openFlags: 0,
     unresolvedComments: 0,
     request,
-    outcome: { evaluation: evaluateRoute(request) },
+    outcome: { evaluation: evaluateRoute(request, { lookup: nbsLookup }) },
     ...over,
   };
 }

@@ -4,6 +4,7 @@
 import { describe, expect, it } from 'vitest';
 import { buildComparison } from '@/lib/compare/build-comparison';
 import { DEFAULT_DRIVERS } from '@/lib/thermo/route';
+import { nbsLookup } from '@/lib/thermo/species-library';
 import {
   CALCINATION, CARBON_BURN, NH3_SYNTHESIS, NO2_DIMER, forComparison, oneStep, reformingThenShift,
 } from './compare-fixtures';
@@ -12,7 +13,7 @@ const TOL = 0.01; // kJ, as in tests/reference/nbs-reactions-298.test.ts
 
 function metricsOf(...args: Parameters<typeof forComparison>) {
   const route = forComparison(...args);
-  return buildComparison([route], {}).routes[0]!;
+  return buildComparison([route], {}, nbsLookup).routes[0]!;
 }
 
 describe('route metrics', () => {
@@ -49,7 +50,7 @@ describe('route metrics', () => {
     const evaluation = 'evaluation' in route.outcome ? route.outcome.evaluation : null;
     const used = evaluation!.steps.filter((s) => s.class === 'uphill').flatMap((s) => s.remedies.flatMap((r) => (r.kind === 'coupling' ? [r.driverName] : [])));
     expect(new Set(used).size).toBeLessThan(used.length); // some driver serves both steps
-    const { metrics } = buildComparison([route], {}).routes[0]!;
+    const { metrics } = buildComparison([route], {}, nbsLookup).routes[0]!;
     expect(metrics.uphillSteps).toBe(2);
     expect(metrics.driversNeeded).toEqual([...new Set(used)]);
   });
@@ -102,7 +103,7 @@ describe('route metrics', () => {
       status: 'in_review', openFlags: 2, unresolvedComments: 3, updatedBy: 'Hanne Vasquez-Lind',
       outcome: { error: { code: 'ROUTE_CYCLE', message: 'The links form a cycle', field: 'links' } },
     });
-    const [r] = buildComparison([refused], {}).routes;
+    const [r] = buildComparison([refused], {}, nbsLookup).routes;
     expect(r!.ladder).toBeNull();
     expect(r!.error).toMatchObject({ code: 'ROUTE_CYCLE' });
     expect(r!.metrics).toMatchObject({

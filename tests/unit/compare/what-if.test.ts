@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { nbsLookup } from '@/lib/thermo/species-library';
 import { buildComparison } from '@/lib/compare/build-comparison';
 import { applyWhatIf, isEmptyWhatIf } from '@/lib/compare/what-if';
 import { evaluateRoute } from '@/lib/thermo/route';
@@ -33,12 +34,12 @@ describe('applyWhatIf', () => {
 
   it('a +50 K what-if evaluates exactly like the route saved at the shifted temperatures', () => {
     const { request } = applyWhatIf(reformingThenShift(['700 K', '500 K']), { temperatureOffset_K: 50 });
-    const byHand = evaluateRoute(reformingThenShift(['750 K', '550 K']));
-    const compared = buildComparison([forComparison(request)], { temperatureOffset_K: 50 }).routes[0]!;
+    const byHand = evaluateRoute(reformingThenShift(['750 K', '550 K']), { lookup: nbsLookup });
+    const compared = buildComparison([forComparison(request)], { temperatureOffset_K: 50 }, nbsLookup).routes[0]!;
     expect(compared.metrics.overallDeltaG_kJ).toBe(byHand.overall.deltaG_kJ);
     expect(compared.metrics.temperatureMin_K).toBe(550);
     // Reforming is strongly temperature dependent (ΔS° > 0): warmer is less uphill.
-    const colder = evaluateRoute(reformingThenShift(['700 K', '500 K']));
+    const colder = evaluateRoute(reformingThenShift(['700 K', '500 K']), { lookup: nbsLookup });
     expect(byHand.steps[0]!.deltaG0_kJ!).toBeLessThan(colder.steps[0]!.deltaG0_kJ!);
   });
 });

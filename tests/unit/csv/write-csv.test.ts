@@ -2,6 +2,7 @@
 // (the usual neutralisation, common practice; OWASP "CSV Injection" names = + - @ tab and carriage return).
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
+import { nbsLookup } from '@/lib/thermo/species-library';
 import { buildComparison } from '@/lib/compare/build-comparison';
 import { METRIC_ROWS } from '@/lib/compare/metric-rows';
 import { metricsCsv } from '@/components/compare/metrics-csv';
@@ -39,7 +40,7 @@ describe('the compare CSV', () => {
   it('neutralises a route name with a line break and a leading =', () => {
     const evil = forComparison(oneStep('CO2(g)', CARBON_BURN), { name: '=HYPERLINK("http://evil.example")\nPlan B' });
     const plain = forComparison(oneStep('CaO(s)', CALCINATION), { name: 'Plan A' });
-    const csv = metricsCsv(buildComparison([evil, plain], {}), { energyUnit: 'kJ', temperatureUnit: 'K', pressureUnit: 'bar' } as never, new Set(METRIC_ROWS.map((r) => r.key)));
+    const csv = metricsCsv(buildComparison([evil, plain], {}, nbsLookup), { energyUnit: 'kJ', temperatureUnit: 'K', pressureUnit: 'bar' } as never, new Set(METRIC_ROWS.map((r) => r.key)));
     const cells = readBack(csv).flat();
     expect(cells).toContain(`'=HYPERLINK("http://evil.example")\nPlan B`);
     expect(cells.filter((c) => /^[\s]*[=+\-@]/.test(c) && Number.isNaN(Number(c)))).toEqual([]);

@@ -1,6 +1,7 @@
 // A real route evaluation for the ladder and panel tests: an uphill step linked to a downhill one,
 // a step the engine cannot read, and a step with no path to the target (no extent).
 import { evaluateRoute, type RouteEvaluateResponse } from '@/lib/thermo/route';
+import { nbsLookup } from '@/lib/thermo/species-library';
 
 export function sampleEvaluation(): RouteEvaluateResponse {
   return evaluateRoute({
@@ -12,5 +13,5 @@ export function sampleEvaluation(): RouteEvaluateResponse {
       { id: 'loose', equation: 'H2(g) + 1/2 O2(g) -> H2O(g)' },
     ],
     links: [{ from: 'reform', to: 'synth', species: 'H2(g)' }],
-  });
+  }, { lookup: nbsLookup });
 }

@@ -1,6 +1,7 @@
 // Step classes (on ΔG per mol of reaction), the threshold edge, totals and safety notes.
 // Reaction values: NBS Tables 1982 (Wagman et al.); thresholds −17 kJ/mol and −100 kJ/mol are common practice.
 import { describe, expect, it } from 'vitest';
+import { nbsLookup } from '@/lib/thermo/species-library';
 import { evaluateStep } from '@/lib/thermo';
 import { evaluateRoute } from '@/lib/thermo/route';
 import { classify } from '@/lib/thermo/route/step-notes';
@@ -25,7 +26,7 @@ describe('classify', () => {
 
 describe('classes in a route', () => {
   // Methanol synthesis: ΔG° = −161.96 − (−137.168) = −24.792 kJ/mol (NBS 1982).
-  const dG = evaluateStep({ equation: METHANOL }).deltaG0_kJ;
+  const dG = evaluateStep({ equation: METHANOL }, { lookup: nbsLookup }).deltaG0_kJ;
 
   it('uses the default −17 kJ/mol threshold (≈ K = 10^3 at 298 K, common practice)', () => {
     expect(dG).toBeCloseTo(-24.792, 3);
@@ -46,7 +47,7 @@ describe('classes in a route', () => {
 
   it('passes the engine’s sign-uncertainty flag through (N2O4 ⇌ 2 NO2 near equilibrium)', () => {
     const near = { equation: 'N2O4(g) -> 2 NO2(g)', pressures: { 'N2O4(g)': '1 bar', 'NO2(g)': '0.5 bar' } };
-    const engine = evaluateStep(near);
+    const engine = evaluateStep(near, { lookup: nbsLookup });
     expect(engine.uncertainty.signUncertain).toBe(true);
     expect(single('NO2(g)', near).step.signUncertain).toBe(true);
     expect(single('NO2(g)', { equation: 'N2O4(g) -> 2 NO2(g)' }).step.signUncertain).toBe(false);
@@ -55,7 +56,7 @@ describe('classes in a route', () => {
   it('counts classes, the largest uphill (scaled) and the smallest driving force (per mol of reaction)', () => {
     const req = ammoniumChlorideTree();
     req.steps.push({ id: 'stray', equation: 'N2O4(g) -> 2 NO2(g)' });
-    const r = evaluateRoute({ ...req, marginalThreshold_kJ: -50 });
+    const r = evaluateRoute({ ...req, marginalThreshold_kJ: -50 }, { lookup: nbsLookup });
     // NH3 synthesis −32.90 (marginal at −50), HCl −190.60, NH4Cl −91.12, stray +4.73 (uphill, disconnected).
     expect(r.overall.marginalSteps).toBe(1);
     expect(r.overall.uphillSteps).toBe(1);
@@ -65,7 +66,7 @@ describe('classes in a route', () => {
   });
 
   it('largestUphill_kJ is the largest positive ξ·ΔG', () => {
-    const r = evaluateRoute({ target: 'CaO(s)', targetAmount: '3 mol', steps: [{ id: 'c', equation: 'CaCO3(s) -> CaO(s) + CO2(g)' }] });
+    const r = evaluateRoute({ target: 'CaO(s)', targetAmount: '3 mol', steps: [{ id: 'c', equation: 'CaCO3(s) -> CaO(s) + CO2(g)' }] }, { lookup: nbsLookup });
     expect(r.overall.largestUphill_kJ).toBeCloseTo(3 * 130.401, 6);
   });
 });
@@ -100,8 +101,8 @@ describe('remedies: false', () => {
       ],
       links: [{ from: 's1', to: 's2', species: 'CO(g)' }],
     };
-    const full = evaluateRoute(request);
-    const lean = evaluateRoute(request, { remedies: false });
+    const full = evaluateRoute(request, { lookup: nbsLookup });
+    const lean = evaluateRoute(request, { lookup: nbsLookup, remedies: false });
     expect(full.steps.some((s) => s.remedies.length > 0)).toBe(true);
     expect(lean.steps.every((s) => s.remedies.length === 0)).toBe(true);
     expect(lean.steps.map((s) => [s.class, s.cumulative_kJ])).toEqual(full.steps.map((s) => [s.class, s.cumulative_kJ]));

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { nbsLookup } from '@/lib/thermo/species-library';
 import { evaluateStep } from '@/lib/thermo';
 import { evaluateRoute } from '@/lib/thermo/route';
 import { HCL_SYNTHESIS, NH3_SYNTHESIS, NH4CL_FORMATION, ammoniumChlorideTree, chain } from './route-fixtures';
@@ -7,21 +8,21 @@ const byId = (r: ReturnType<typeof evaluateRoute>, id: string) => r.steps.find((
 
 describe('extents', () => {
   it('divides by each yield along a 2-step chain (yields 0.5): ξ(salt) = 1/0.5 = 2, ξ(NH3) = 2·1/(2·0.5) = 2', () => {
-    const r = evaluateRoute(chain('NH4Cl(s)', [NH3_SYNTHESIS, NH4CL_FORMATION], ['NH3(g)'], [{ yield: 0.5 }, { yield: 0.5 }]));
+    const r = evaluateRoute(chain('NH4Cl(s)', [NH3_SYNTHESIS, NH4CL_FORMATION], ['NH3(g)'], [{ yield: 0.5 }, { yield: 0.5 }]), { lookup: nbsLookup });
     expect(byId(r, 's2').extent_mol).toBe(2);
     expect(byId(r, 's1').extent_mol).toBe(2);
   });
 
   it('follows the coefficients: 1 mol NH4Cl needs ½ mol of ammonia synthesis and ½ of HCl synthesis', () => {
-    const r = evaluateRoute(ammoniumChlorideTree());
+    const r = evaluateRoute(ammoniumChlorideTree(), { lookup: nbsLookup });
     expect(byId(r, 'salt').extent_mol).toBe(1);
     expect(byId(r, 'nh3').extent_mol).toBe(0.5);
     expect(byId(r, 'hcl').extent_mol).toBe(0.5);
   });
 
   it('scales every extent and energy with targetAmount', () => {
-    const one = evaluateRoute(ammoniumChlorideTree());
-    const five = evaluateRoute({ ...ammoniumChlorideTree(), targetAmount: '5000 mmol' });
+    const one = evaluateRoute(ammoniumChlorideTree(), { lookup: nbsLookup });
+    const five = evaluateRoute({ ...ammoniumChlorideTree(), targetAmount: '5000 mmol' }, { lookup: nbsLookup });
     for (const s of one.steps) {
       const t = byId(five, s.id);
       expect(t.extent_mol).toBeCloseTo(5 * s.extent_mol!, 12);
@@ -40,7 +41,7 @@ describe('extents', () => {
         { from: 'h2', to: 'nh3', species: 'H2(g)' },
         { from: 'h2', to: 'hcl', species: 'H2(g)' },
       ],
-    });
+    }, { lookup: nbsLookup });
     expect(byId(r, 'h2').extent_mol).toBeCloseTo(2 / 4, 12);
   });
 
@@ -48,8 +49,8 @@ describe('extents', () => {
     const conditions = { pressures: { 'NH3(g)': '0.2 bar', 'HCl(g)': '0.3 bar' } };
     const req = ammoniumChlorideTree();
     req.steps = req.steps.map((s) => (s.id === 'salt' ? { ...s, ...conditions, yield: 0.8 } : s));
-    const r = evaluateRoute(req);
-    const alone = evaluateStep({ equation: NH4CL_FORMATION, ...conditions });
+    const r = evaluateRoute(req, { lookup: nbsLookup });
+    const alone = evaluateStep({ equation: NH4CL_FORMATION, ...conditions }, { lookup: nbsLookup });
     const salt = byId(r, 'salt');
     expect(salt.extent_mol).toBe(1 / 0.8);
     expect(salt.deltaG_kJ).toBeCloseTo(alone.deltaG_kJ! / 0.8, 9);
@@ -61,7 +62,7 @@ describe('extents', () => {
 describe('links and connectivity', () => {
   it('warns LINK_SPECIES when the link species is not made upstream or not used downstream, and goes on', () => {
     const req = chain('NH4Cl(s)', [NH3_SYNTHESIS, NH4CL_FORMATION], ['N2(g)']);
-    const r = evaluateRoute(req);
+    const r = evaluateRoute(req, { lookup: nbsLookup });
     const w = r.warnings.find((x) => x.code === 'LINK_SPECIES')!;
     expect(w.steps).toEqual(['s1', 's2']);
     expect(w.species).toEqual(['N2(g)']);
@@ -73,20 +74,20 @@ describe('links and connectivity', () => {
   it('warns DISCONNECTED for a step with no path to the final step, evaluates it and leaves it out of the totals', () => {
     const req = ammoniumChlorideTree();
     req.steps.push({ id: 'stray', equation: 'CaCO3(s) -> CaO(s) + CO2(g)' });
-    const r = evaluateRoute(req);
+    const r = evaluateRoute(req, { lookup: nbsLookup });
     const stray = byId(r, 'stray');
     expect(stray.result).not.toBeNull();
     expect(stray.class).toBe('uphill');
     expect(stray.extent_mol).toBeNull();
     expect(stray.deltaG_kJ).toBeNull();
     expect(r.warnings.find((w) => w.code === 'DISCONNECTED')?.steps).toEqual(['stray']);
-    expect(r.overall.deltaG0_kJ).toBeCloseTo(evaluateRoute(ammoniumChlorideTree()).overall.deltaG0_kJ, 9);
+    expect(r.overall.deltaG0_kJ).toBeCloseTo(evaluateRoute(ammoniumChlorideTree(), { lookup: nbsLookup }).overall.deltaG0_kJ, 9);
   });
 
   it('errors when no step makes the target, and when several final steps make it', () => {
-    expect(() => evaluateRoute({ ...ammoniumChlorideTree(), target: 'CaO(s)' })).toThrow(/No step makes the target CaO\(s\)/);
+    expect(() => evaluateRoute({ ...ammoniumChlorideTree(), target: 'CaO(s)' }, { lookup: nbsLookup })).toThrow(/No step makes the target CaO\(s\)/);
     const two = { target: 'NH3(g)', steps: [{ id: 'a', equation: NH3_SYNTHESIS }, { id: 'b', equation: NH3_SYNTHESIS }] };
-    expect(() => evaluateRoute(two)).toThrow(/Several steps make the target NH3\(g\).*a, b/);
+    expect(() => evaluateRoute(two, { lookup: nbsLookup })).toThrow(/Several steps make the target NH3\(g\).*a, b/);
   });
 });
 
@@ -95,7 +96,7 @@ describe('a bad step does not break the rest', () => {
     const req = ammoniumChlorideTree();
     // Liquid chlorine is not in the library: unknown species, but the equation parses.
     req.steps = req.steps.map((s) => (s.id === 'hcl' ? { ...s, equation: 'H2(g) + Cl2(l) -> 2 HCl(g)' } : s));
-    const r = evaluateRoute(req);
+    const r = evaluateRoute(req, { lookup: nbsLookup });
     const bad = byId(r, 'hcl');
     expect(bad.class).toBe('error');
     expect(bad.result).toBeNull();
@@ -105,12 +106,12 @@ describe('a bad step does not break the rest', () => {
     expect(bad.deltaG_kJ).toBeNull();
     expect(byId(r, 'nh3').class).toBe('downhill');
     expect(r.warnings.find((w) => w.code === 'STEP_ERROR')?.steps).toEqual(['hcl']);
-    const good = evaluateStep({ equation: NH3_SYNTHESIS }).deltaG0_kJ * 0.5 + evaluateStep({ equation: NH4CL_FORMATION }).deltaG0_kJ;
+    const good = evaluateStep({ equation: NH3_SYNTHESIS }, { lookup: nbsLookup }).deltaG0_kJ * 0.5 + evaluateStep({ equation: NH4CL_FORMATION }, { lookup: nbsLookup }).deltaG0_kJ;
     expect(r.overall.deltaG0_kJ).toBeCloseTo(good, 9);
   });
 
   it('marks an unbalanced step as error', () => {
-    const r = evaluateRoute(chain('NH4Cl(s)', ['N2(g) + H2(g) -> NH3(g)', NH4CL_FORMATION], ['NH3(g)']));
+    const r = evaluateRoute(chain('NH4Cl(s)', ['N2(g) + H2(g) -> NH3(g)', NH4CL_FORMATION], ['NH3(g)']), { lookup: nbsLookup });
     expect(byId(r, 's1').error?.code).toBe('UNBALANCED');
     expect(byId(r, 's2').class).toBe('downhill');
   });
@@ -118,7 +119,7 @@ describe('a bad step does not break the rest', () => {
   it('warns EXTENT_UNKNOWN upstream of a step that cannot be parsed', () => {
     // s2 (two arrows) cannot be parsed; s3 decomposes the salt again and makes the target.
     const req = chain('NH3(g)', [HCL_SYNTHESIS, 'NH3(g) + HCl(g) -> -> NH4Cl(s)', 'NH4Cl(s) -> NH3(g) + HCl(g)'], ['HCl(g)', 'NH4Cl(s)']);
-    const r = evaluateRoute(req);
+    const r = evaluateRoute(req, { lookup: nbsLookup });
     expect(byId(r, 's2').error?.code).toBe('PARSE_ERROR');
     const unknown = r.warnings.filter((w) => w.code === 'EXTENT_UNKNOWN').flatMap((w) => w.steps);
     expect(unknown).toEqual(expect.arrayContaining(['s1', 's2']));
@@ -129,8 +130,8 @@ describe('a bad step does not break the rest', () => {
 describe('limits that keep the extents finite', () => {
   it('refuses a yield below 0.0001 % and a target over 1e9 mol with route errors, not an engine fault', () => {
     const step = { id: 's1', equation: 'H2(g) + 1/2 O2(g) -> H2O(l)' };
-    expect(() => evaluateRoute({ target: 'H2O(l)', steps: [{ ...step, yield: 1e-308 }] })).toThrow(/yield/);
-    expect(() => evaluateRoute({ target: 'H2O(l)', targetAmount: '1e300 mol', steps: [step] })).toThrow(/at most/);
-    expect(evaluateRoute({ target: 'H2O(l)', steps: [{ ...step, yield: 1e-6 }] }).steps[0]!.extent_mol).toBeCloseTo(1e6, 0);
+    expect(() => evaluateRoute({ target: 'H2O(l)', steps: [{ ...step, yield: 1e-308 }] }, { lookup: nbsLookup })).toThrow(/yield/);
+    expect(() => evaluateRoute({ target: 'H2O(l)', targetAmount: '1e300 mol', steps: [step] }, { lookup: nbsLookup })).toThrow(/at most/);
+    expect(evaluateRoute({ target: 'H2O(l)', steps: [{ ...step, yield: 1e-6 }] }, { lookup: nbsLookup }).steps[0]!.extent_mol).toBeCloseTo(1e6, 0);
   });
 });

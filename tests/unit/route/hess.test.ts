@@ -2,6 +2,7 @@
 // Net equations are worked by hand here; the published check uses NBS Tables 1982 (Wagman et al.,
 // J. Phys. Chem. Ref. Data 11, Suppl. 2) ΔfG° values, quoted from memory.
 import { describe, expect, it } from 'vitest';
+import { nbsLookup } from '@/lib/thermo/species-library';
 import { evaluateStep } from '@/lib/thermo';
 import { evaluateRoute, routeNetEquation, type RouteEvaluateRequest } from '@/lib/thermo/route';
 
@@ -94,9 +95,9 @@ const ROUTES: Route[] = [
 
 describe("Hess's law over whole routes", () => {
   it.each(ROUTES)('$name: last cumulative ΔG° = ΔrG° of the net reaction at 298.15 K [$values]', ({ request, net, published_kJ }) => {
-    const r = evaluateRoute(request);
+    const r = evaluateRoute(request, { lookup: nbsLookup });
     const last = r.steps[r.steps.length - 1]!;
-    const direct = evaluateStep({ equation: net });
+    const direct = evaluateStep({ equation: net }, { lookup: nbsLookup });
     expect(last.cumulative0_kJ).toBeCloseTo(direct.deltaG0_kJ, 9);
     expect(r.overall.deltaG0_kJ).toBe(last.cumulative0_kJ);
     expect(Math.abs(direct.deltaG0_kJ - published_kJ)).toBeLessThan(0.01);
@@ -104,14 +105,14 @@ describe("Hess's law over whole routes", () => {
 
   it.each(ROUTES)('$name: holds at 900 K too (ΔG° linear in the stoichiometry)', ({ request, net }) => {
     const hot = { ...request, steps: request.steps.map((s) => ({ ...s, temperature: '900 K' })) };
-    const r = evaluateRoute(hot);
-    expect(r.overall.deltaG0_kJ).toBeCloseTo(evaluateStep({ equation: net, temperature: '900 K' }).deltaG0_kJ, 9);
+    const r = evaluateRoute(hot, { lookup: nbsLookup });
+    expect(r.overall.deltaG0_kJ).toBeCloseTo(evaluateStep({ equation: net, temperature: '900 K' }, { lookup: nbsLookup }).deltaG0_kJ, 9);
   });
 
   it.each(ROUTES)('$name: routeNetEquation finds the hand-worked net reaction', ({ request, net }) => {
     const nu = (equation: string): Record<string, number> =>
-      Object.fromEntries(evaluateStep({ equation }).species.map((s) => [s.key, s.nu]));
-    const found = routeNetEquation(request, evaluateRoute(request));
+      Object.fromEntries(evaluateStep({ equation }, { lookup: nbsLookup }).species.map((s) => [s.key, s.nu]));
+    const found = routeNetEquation(request, evaluateRoute(request, { lookup: nbsLookup }), nbsLookup);
     expect(found).not.toBeNull();
     expect(nu(found!)).toEqual(nu(net));
   });

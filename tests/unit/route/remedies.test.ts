@@ -1,6 +1,7 @@
 // Remedies for uphill and marginal steps. Published values: NBS Tables 1982 (Wagman et al.,
 // J. Phys. Chem. Ref. Data 11, Suppl. 2), worked by hand; others marked "from memory".
 import { describe, expect, it } from 'vitest';
+import { nbsLookup } from '@/lib/thermo/species-library';
 import { R_GAS, evaluateStep } from '@/lib/thermo';
 import { DEFAULT_DRIVERS } from '@/lib/thermo/route';
 import { MAX_COUPLING_OPTIONS } from '@/lib/thermo/route/remedy-coupling';
@@ -32,7 +33,7 @@ describe('temperature remedy', () => {
     const { temperature } = single('CaO(s)', { equation: CALCINATION });
     const t = temperature[0]!;
     expect(t.suggested_K).toBeGreaterThan(t.target_K!);
-    expect(evaluateStep({ equation: CALCINATION, temperature: `${t.suggested_K} K` }).deltaG0_kJ).toBeLessThan(0);
+    expect(evaluateStep({ equation: CALCINATION, temperature: `${t.suggested_K} K` }, { lookup: nbsLookup }).deltaG0_kJ).toBeLessThan(0);
     const at = (T: number) => t.samples.find((s) => Math.abs(s.T_K - T) < 2e-3)!; // samples closer than 1e-3 K are merged
     expect(at(t.target_K! - 50).deltaG0_kJ).toBeGreaterThan(0);
     expect(at(t.target_K! + 50).deltaG0_kJ).toBeLessThan(0);
@@ -52,7 +53,7 @@ describe('temperature remedy', () => {
     const t = temperature[0]!;
     expect(t.direction).toBe('lower');
     expect(t.goal_kJ).toBe(-30);
-    expect(evaluateStep({ equation: 'CO(g) + 2 H2(g) -> CH3OH(g)', temperature: `${t.suggested_K} K` }).deltaG0_kJ).toBeLessThan(-30);
+    expect(evaluateStep({ equation: 'CO(g) + 2 H2(g) -> CH3OH(g)', temperature: `${t.suggested_K} K` }, { lookup: nbsLookup }).deltaG0_kJ).toBeLessThan(-30);
   });
 
   it('says so when no temperature in the data range helps (water autoionisation, 273–373 K)', () => {
@@ -78,7 +79,7 @@ describe('conditions remedy', () => {
     expect(excess.value!).toBeGreaterThanOrEqual(1 / K);
     expect(excess.value!).toBeLessThan(1.01 / K);
     for (const c of [product, excess]) {
-      const r = evaluateStep({ equation: DIMER_SPLIT, ...c.conditions });
+      const r = evaluateStep({ equation: DIMER_SPLIT, ...c.conditions }, { lookup: nbsLookup });
       expect(r.deltaG_kJ!).toBeLessThan(0);
       expect(c.checkedDeltaG_kJ).toBeCloseTo(r.deltaG_kJ!, 9);
     }
@@ -92,7 +93,7 @@ describe('conditions remedy', () => {
     // ΔG = ΔG° + RT ln(1/2) > 0 still; N2O4 must reach 1/K bar, a (1/K)/2-fold excess.
     expect(excess.value!).toBeGreaterThanOrEqual(1 / K);
     expect(excess.factor!).toBeCloseTo(excess.value! / 2, 9);
-    expect(evaluateStep({ equation: DIMER_SPLIT, ...excess.conditions }).deltaG_kJ!).toBeLessThan(0);
+    expect(evaluateStep({ equation: DIMER_SPLIT, ...excess.conditions }, { lookup: nbsLookup }).deltaG_kJ!).toBeLessThan(0);
   });
 
   it('aqueous products: remove H+ or NH3 as they form, or more NH4+; never a pure solid or liquid', () => {
@@ -101,7 +102,7 @@ describe('conditions remedy', () => {
     const { step, conditions } = single('NH3(aq)', { equation: eq, concentrations });
     expect(step.class).toBe('uphill');
     expect(conditions.map((c) => `${c.action} ${c.species}`).sort()).toEqual(['reactant-excess NH4+(aq)', 'remove-product H+(aq)', 'remove-product NH3(aq)']);
-    for (const c of conditions) expect(evaluateStep({ equation: eq, ...c.conditions }).deltaG_kJ!).toBeLessThan(0);
+    for (const c of conditions) expect(evaluateStep({ equation: eq, ...c.conditions }, { lookup: nbsLookup }).deltaG_kJ!).toBeLessThan(0);
   });
 
   it('offers no single change beyond practical bounds: calcination at 298 K needs p(CO2) ≈ 10^-22.8 bar', () => {
@@ -115,7 +116,7 @@ describe('conditions remedy', () => {
     const eq = 'CO(g) + 2 H2(g) -> CH3OH(g)';
     const { conditions } = single('CH3OH(g)', { equation: eq }, { marginalThreshold_kJ: -30 });
     expect(conditions.length).toBe(3);
-    for (const c of conditions) expect(evaluateStep({ equation: eq, ...c.conditions }).deltaG_kJ!).toBeLessThan(-30);
+    for (const c of conditions) expect(evaluateStep({ equation: eq, ...c.conditions }, { lookup: nbsLookup }).deltaG_kJ!).toBeLessThan(-30);
   });
 });
 
@@ -124,9 +125,9 @@ describe('coupling remedy', () => {
     const { coupling, step } = single('CaO(s)', { equation: CALCINATION });
     expect(coupling.length).toBeGreaterThan(3);
     for (const c of coupling) {
-      const direct = evaluateStep({ equation: c.combinedEquation });
+      const direct = evaluateStep({ equation: c.combinedEquation }, { lookup: nbsLookup });
       expect(c.combinedDeltaG_kJ).toBeCloseTo(direct.deltaG0_kJ, 9);
-      const driver = evaluateStep({ equation: c.driverEquation }).deltaG0_kJ;
+      const driver = evaluateStep({ equation: c.driverEquation }, { lookup: nbsLookup }).deltaG0_kJ;
       expect(c.combinedDeltaG_kJ).toBeCloseTo(step.result!.deltaG0_kJ + c.multiple * driver, 9);
       expect(c.combinedDeltaG_kJ).toBeLessThan(0);
       if (c.multiple > 0.5) expect(step.result!.deltaG0_kJ + (c.multiple - 0.5) * driver).toBeGreaterThanOrEqual(0);
@@ -152,7 +153,7 @@ describe('coupling remedy', () => {
     const { coupling } = single('CaO(s)', { equation: CALCINATION, temperature: '1000 K', pressures: { 'CO2(g)': '0.5 bar' } });
     expect(coupling.length).toBeGreaterThan(0);
     for (const c of coupling) {
-      const r = evaluateStep({ equation: c.combinedEquation, temperature: '1000 K', ...c.conditions });
+      const r = evaluateStep({ equation: c.combinedEquation, temperature: '1000 K', ...c.conditions }, { lookup: nbsLookup });
       expect(c.combinedDeltaG_kJ).toBeCloseTo(r.deltaG_kJ ?? r.deltaG0_kJ, 9);
       expect(c.combinedDeltaG_kJ).toBeLessThan(0);
     }

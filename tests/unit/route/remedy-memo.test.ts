@@ -1,6 +1,7 @@
 // Remedies are memoised per step: a re-evaluation must give the same answer as a fresh one, and an
 // edited step must get fresh remedies. Calcination values: NBS Tables 1982 (Wagman et al.), by hand.
 import { describe, expect, it } from 'vitest';
+import { nbsLookup } from '@/lib/thermo/species-library';
 import { evaluateRoute, type RouteEvaluateRequest } from '@/lib/thermo/route';
 import { layeredLookup } from '@/lib/thermo';
 
@@ -19,8 +20,8 @@ function route(temperature2: string): RouteEvaluateRequest {
 
 describe('remedy memo', () => {
   it('a second evaluation reuses the remedies and equals a fresh evaluation with an empty memo', () => {
-    const first = evaluateRoute(route('700 K'));
-    const second = evaluateRoute(route('700 K'));
+    const first = evaluateRoute(route('700 K'), { lookup: nbsLookup });
+    const second = evaluateRoute(route('700 K'), { lookup: nbsLookup });
     const b1 = first.steps.find((s) => s.id === 'b')!;
     const b2 = second.steps.find((s) => s.id === 'b')!;
     expect(b1.class).toBe('uphill');
@@ -32,8 +33,8 @@ describe('remedy memo', () => {
   });
 
   it('an edited step gets remedies for its new conditions', () => {
-    const at700 = evaluateRoute(route('700 K')).steps.find((s) => s.id === 'b')!;
-    const at800 = evaluateRoute(route('800 K')).steps.find((s) => s.id === 'b')!;
+    const at700 = evaluateRoute(route('700 K'), { lookup: nbsLookup }).steps.find((s) => s.id === 'b')!;
+    const at800 = evaluateRoute(route('800 K'), { lookup: nbsLookup }).steps.find((s) => s.id === 'b')!;
     expect(at800.remedies).not.toBe(at700.remedies);
     const t700 = at700.remedies.find((r) => r.kind === 'temperature')!;
     const t800 = at800.remedies.find((r) => r.kind === 'temperature')!;
@@ -42,8 +43,8 @@ describe('remedy memo', () => {
   });
 
   it('a different driver list is a different key', () => {
-    const all = evaluateRoute(route('700 K')).steps.find((s) => s.id === 'b')!;
-    const none = evaluateRoute(route('700 K'), { drivers: [] }).steps.find((s) => s.id === 'b')!;
+    const all = evaluateRoute(route('700 K'), { lookup: nbsLookup }).steps.find((s) => s.id === 'b')!;
+    const none = evaluateRoute(route('700 K'), { lookup: nbsLookup, drivers: [] }).steps.find((s) => s.id === 'b')!;
     expect(all.remedies.some((r) => r.kind === 'coupling')).toBe(true);
     expect(none.remedies.some((r) => r.kind === 'coupling')).toBe(false);
   });

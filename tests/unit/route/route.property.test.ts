@@ -1,6 +1,7 @@
 // Random chains of library reactions, each step consuming something the previous one makes.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { nbsLookup } from '@/lib/thermo/species-library';
 import { evaluateStep } from '@/lib/thermo';
 import { evaluateRoute, routeNetEquation, type RouteEvaluateRequest } from '@/lib/thermo/route';
 
@@ -77,7 +78,7 @@ describe('random chains of library reactions', () => {
   it('cumulative series are running sums, overall = last cumulative, JSON clean', () => {
     fc.assert(
       fc.property(chainArb, (c) => {
-        const r = evaluateRoute(buildChain(c, true));
+        const r = evaluateRoute(buildChain(c, true), { lookup: nbsLookup });
         let sum = 0;
         let sum0 = 0;
         for (const s of r.steps) {
@@ -102,10 +103,10 @@ describe('random chains of library reactions', () => {
     fc.assert(
       fc.property(chainArb, (c) => {
         const req = buildChain(c, false);
-        const r = evaluateRoute(req);
-        const net = routeNetEquation(req, r);
+        const r = evaluateRoute(req, { lookup: nbsLookup });
+        const net = routeNetEquation(req, r, nbsLookup);
         // A chain can cancel to nothing (e.g. N2O4 split then dimerised back); then ΔG° is 0.
-        const direct = net === null ? 0 : evaluateStep({ equation: net, temperature: c.temperature }).deltaG0_kJ;
+        const direct = net === null ? 0 : evaluateStep({ equation: net, temperature: c.temperature }, { lookup: nbsLookup }).deltaG0_kJ;
         expect(r.overall.deltaG0_kJ).toBeCloseTo(direct, 6);
       }),
       { numRuns: 40, seed: 20240612 },

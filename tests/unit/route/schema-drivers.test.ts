@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { nbsLookup } from '@/lib/thermo/species-library';
 import { builtinLookup, evaluateStep, parseEquation } from '@/lib/thermo';
 import { DEFAULT_DRIVERS, RouteEvaluateRequestSchema } from '@/lib/thermo/route';
 import { speciesKey } from '@/lib/thermo/route/stoichiometry';
@@ -42,6 +43,6 @@ describe('DEFAULT_DRIVERS (lib/thermo/data/driver-reactions.json)', () => {
   it.each(DEFAULT_DRIVERS.map((d) => [d.id, d.equation]))('%s: every species is in the library, and it is strongly downhill at 298.15 K', (_, equation) => {
     const eq = parseEquation(equation!);
     for (const t of [...eq.reactants, ...eq.products]) expect(builtinLookup.get(speciesKey(t.species.raw, builtinLookup))).toBeDefined();
-    expect(evaluateStep({ equation: equation! }).deltaG0_kJ).toBeLessThan(-50);
+    expect(evaluateStep({ equation: equation! }, { lookup: nbsLookup }).deltaG0_kJ).toBeLessThan(-50);
   });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { evaluateStep } from '@/lib/thermo/evaluate';
-import { builtinLookup, layeredLookup } from '@/lib/thermo/species-library';
+import { builtinLookup, layeredLookup, nbsLookup } from '@/lib/thermo/species-library';
 import type { SpeciesRecord } from '@/lib/thermo/species-types';
 
 // Invented team values: only the bookkeeping of whose value was used is under test here.
@@ -10,7 +10,7 @@ const teamNew: SpeciesRecord = { ...co2, key: 'C2O4(g)', formula: 'C2O4', elemen
 
 describe('species provenance in an evaluation', () => {
   it('names the built-in library when no team species is involved', () => {
-    const r = evaluateStep({ equation: 'C(s) + O2(g) -> CO2(g)' });
+    const r = evaluateStep({ equation: 'C(s) + O2(g) -> CO2(g)' }, { lookup: nbsLookup });
     expect(r.species.map((s) => [s.key, s.origin, s.override])).toEqual([['C(s)', 'library', false], ['O2(g)', 'library', false], ['CO2(g)', 'library', false]]);
   });
 

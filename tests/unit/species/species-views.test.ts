@@ -13,7 +13,7 @@ import type { SpeciesDetailDto } from '@/lib/services/species/get-species';
 import type { PreviewRowDto } from '@/lib/services/species/import-preview';
 import type { SpeciesRowDto, TeamSpeciesDto } from '@/lib/services/species/species-dto';
 import { formationSeries } from '@/lib/species/formation-series';
-import { builtinLookup } from '@/lib/thermo/species-library';
+import { builtinLookup, nbsLookup } from '@/lib/thermo/species-library';
 
 const noop = () => undefined;
 const builtinMethanol = builtinLookup.get('CH3OH(g)')!;
@@ -45,7 +45,7 @@ describe('the species table', () => {
 describe('the species detail', () => {
   const detail: SpeciesDetailDto = {
     key: 'CH3OH(g)', inUse: 'team', team: TEAM, builtin: builtinMethanol,
-    series: formationSeries(builtinMethanol), builtinSeries: formationSeries(builtinMethanol),
+    series: formationSeries(builtinMethanol, nbsLookup), builtinSeries: formationSeries(builtinMethanol, nbsLookup),
     routes: [{ routeId: 7, routeName: 'Methanol from syngas', archived: false, stepKeys: ['s2'] }],
   };
 

@@ -32,7 +32,8 @@ describe('thermo CLI', () => {
     expect(r.status).toBe(0);
     const out = JSON.parse(r.stdout) as { deltaG0_kJ?: number; error?: { code: string; field: string; message: string } }[];
     expect(out).toHaveLength(4);
-    expect(out[0]!.deltaG0_kJ).toBeCloseTo(-32.9, 9);
+    // 2 ΔfG°(NH3, g): NBS 1982 −16.45 kJ/mol shifted by ATcT 1.112's newer ΔfH° (−45.558 against −46.11), the CLI's library.
+    expect(out[0]!.deltaG0_kJ).toBeCloseTo(2 * (-16.45 + (-45.558 + 46.11)), 6);
     expect(out[1]!.error).toMatchObject({ code: 'UNBALANCED', field: 'equation' });
     expect(out[2]!.error).toMatchObject({ code: 'VALIDATION', field: 'temperature' });
     expect(out[3]!.error).toMatchObject({ code: 'VALIDATION', field: 'colour' });

@@ -1,6 +1,7 @@
 // Property tests of the engine over fuzzed reactions, temperatures and conditions.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { nbsLookup } from '@/lib/thermo/species-library';
 import {
   builtinSpecies,
   evaluateStep,
@@ -42,8 +43,8 @@ describe('engine properties', () => {
   it('reversing an equation negates ΔG° and ln K', () => {
     fc.assert(
       fc.property(fc.constantFrom(...ALL), temperature, (text, T) => {
-        const fwd = evaluateStep({ equation: text, temperature: `${T} K` });
-        const rev = evaluateStep({ equation: formatEquation(reverseEquation(eqOf(text))), temperature: `${T} K` });
+        const fwd = evaluateStep({ equation: text, temperature: `${T} K` }, { lookup: nbsLookup });
+        const rev = evaluateStep({ equation: formatEquation(reverseEquation(eqOf(text))), temperature: `${T} K` }, { lookup: nbsLookup });
         expect(rev.deltaG0_kJ).toBeCloseTo(-fwd.deltaG0_kJ, 9);
         expect(rev.lnK).toBeCloseTo(-fwd.lnK, 9);
         if (fwd.K !== null && rev.K !== null) expect(fwd.K * rev.K).toBeCloseTo(1, 9);
@@ -55,8 +56,8 @@ describe('engine properties', () => {
   it('doubling the coefficients doubles ΔG° and ln K (K squares)', () => {
     fc.assert(
       fc.property(fc.constantFrom(...ALL), temperature, fc.boolean(), (text, T, heatCapacity) => {
-        const one = evaluateStep({ equation: text, temperature: `${T} K`, heatCapacity });
-        const two = evaluateStep({ equation: formatEquation(scaleEquation(eqOf(text), 2)), temperature: `${T} K`, heatCapacity });
+        const one = evaluateStep({ equation: text, temperature: `${T} K`, heatCapacity }, { lookup: nbsLookup });
+        const two = evaluateStep({ equation: formatEquation(scaleEquation(eqOf(text), 2)), temperature: `${T} K`, heatCapacity }, { lookup: nbsLookup });
         expect(two.deltaG0_kJ).toBeCloseTo(2 * one.deltaG0_kJ, 8);
         expect(two.lnK).toBeCloseTo(2 * one.lnK, 8);
         expect(two.deltaH0_kJ).toBeCloseTo(2 * one.deltaH0_kJ, 8);
@@ -68,8 +69,8 @@ describe('engine properties', () => {
   it('ΔG° is continuous in T: a 1 mK step moves it by at most |ΔS°|·dT plus rounding', () => {
     fc.assert(
       fc.property(fc.constantFrom(...ALL), temperature, (text, T) => {
-        const a = evaluateStep({ equation: text, temperature: `${T} K` });
-        const b = evaluateStep({ equation: text, temperature: `${T + 1e-3} K` });
+        const a = evaluateStep({ equation: text, temperature: `${T} K` }, { lookup: nbsLookup });
+        const b = evaluateStep({ equation: text, temperature: `${T + 1e-3} K` }, { lookup: nbsLookup });
         const bound = ((Math.abs(a.deltaS0_J_per_K) + 10) * 1e-3) / 1000 + 1e-9;
         expect(Math.abs(b.deltaG0_kJ - a.deltaG0_kJ)).toBeLessThanOrEqual(bound);
       }),
@@ -90,12 +91,12 @@ describe('engine properties', () => {
           const species = [...new Set(text.replace(/<=>/, '+').split('+').map((s) => s.trim().replace(/^\d+\s+/, '')))];
           const initial = Object.fromEntries(species.map((s, i) => [s, `${i % 2 === 0 ? amounts[i % 4] : 0} mol`]));
           const base = { equation: text, temperature: `${T} K`, standardPressure, totalPressure: `${P} bar` };
-          const r = evaluateStep({ ...base, initial });
+          const r = evaluateStep({ ...base, initial }, { lookup: nbsLookup });
           const n = r.equilibrium!.amounts_mol;
           const total = Object.values(n).reduce((x, y) => x + y, 0);
           fc.pre(Object.values(n).every((v) => v > 1e-200));
           const pressures = Object.fromEntries(Object.entries(n).map(([k, v]) => [k, `${(v / total) * P} bar`]));
-          const again = evaluateStep({ ...base, pressures });
+          const again = evaluateStep({ ...base, pressures }, { lookup: nbsLookup });
           expect(Math.abs(again.deltaG_kJ!)).toBeLessThan(1e-6);
           expect(again.direction).toBe('at equilibrium');
         },
@@ -108,10 +109,10 @@ describe('engine properties', () => {
     fc.assert(
       fc.property(fc.double({ min: 1e-4, max: 1, noNaN: true }), fc.double({ min: 0, max: 0.1, noNaN: true }), (c0, a0) => {
         const equation = 'CH3COOH(aq) <=> CH3COO-(aq) + H+(aq)';
-        const r = evaluateStep({ equation, initial: { 'CH3COOH(aq)': `${c0} mol/L`, 'CH3COO-(aq)': `${a0} mol/L` } });
+        const r = evaluateStep({ equation, initial: { 'CH3COOH(aq)': `${c0} mol/L`, 'CH3COO-(aq)': `${a0} mol/L` } }, { lookup: nbsLookup });
         const n = r.equilibrium!.amounts_mol;
         const concentrations = Object.fromEntries(Object.entries(n).map(([k, v]) => [k, `${v} mol/L`]));
-        expect(Math.abs(evaluateStep({ equation, concentrations }).deltaG_kJ!)).toBeLessThan(1e-6);
+        expect(Math.abs(evaluateStep({ equation, concentrations }, { lookup: nbsLookup }).deltaG_kJ!)).toBeLessThan(1e-6);
       }),
       { numRuns: 60 },
     );
@@ -154,7 +155,7 @@ describe('no NaN or Infinity in any response over fuzzed requests', () => {
           if (amount !== undefined) req.initial = { [firstSpecies]: `${amount} mol` };
           let r: EvaluateResponse | undefined;
           try {
-            r = evaluateStep(req);
+            r = evaluateStep(req, { lookup: nbsLookup });
           } catch (err) {
             if (!isThermoError(err)) throw err;
           }
@@ -175,7 +176,7 @@ describe('no NaN or Infinity in any response over fuzzed requests', () => {
         (left, right, coeffs, temperature) => {
           const side = (ks: string[], off: number) => ks.map((k, i) => `${coeffs[off + i]} ${k}`).join(' + ');
           try {
-            assertAllFinite(evaluateStep({ equation: `${side(left, 0)} -> ${side(right, 2)}`, temperature }));
+            assertAllFinite(evaluateStep({ equation: `${side(left, 0)} -> ${side(right, 2)}`, temperature }, { lookup: nbsLookup }));
           } catch (err) {
             if (!isThermoError(err)) throw err;
           }

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { nbsLookup } from '@/lib/thermo/species-library';
 import { evaluateStep, layeredLookup, builtinLookup, R_GAS } from '@/lib/thermo';
 import type { EvaluateRequest } from '@/lib/schemas/evaluate';
 import { thermoErrorOf } from './thermo-error-of';
@@ -10,7 +11,7 @@ const shift = 'CO(g) + H2O(g) <=> CO2(g) + H2(g)';
 
 describe('evaluateStep response', () => {
   it('has every contract field, with energies per mole of reaction as written', () => {
-    const r = evaluateStep({ equation: 'CH4(g) + 2 O2(g) -> CO2(g) + 2 H2O(l)' });
+    const r = evaluateStep({ equation: 'CH4(g) + 2 O2(g) -> CO2(g) + 2 H2O(l)' }, { lookup: nbsLookup });
     expect(r).toMatchObject({
       equation: 'CH4(g) + 2 O2(g) ⇌ CO2(g) + 2 H2O(l)',
       balanced: true,
@@ -28,15 +29,15 @@ describe('evaluateStep response', () => {
   });
 
   it('reports K when representable and null beyond the double range', () => {
-    const water = evaluateStep({ equation: 'H2(g) + 1/2 O2(g) -> H2O(l)' });
+    const water = evaluateStep({ equation: 'H2(g) + 1/2 O2(g) -> H2O(l)' }, { lookup: nbsLookup });
     expect(water.K! / Math.exp(95.65676095741)).toBeCloseTo(1, 9);
-    const glucose = evaluateStep({ equation: 'C6H12O6(s) + 6 O2(g) -> 6 CO2(g) + 6 H2O(l)' });
+    const glucose = evaluateStep({ equation: 'C6H12O6(s) + 6 O2(g) -> 6 CO2(g) + 6 H2O(l)' }, { lookup: nbsLookup });
     expect(glucose.lnK).toBeGreaterThan(1000);
     expect(glucose.K).toBeNull();
   });
 
   it('accepts common names as written and reports their library keys', () => {
-    const r = evaluateStep({ equation: 'ethanol(l) + 3 oxygen(g) -> 2 CO2(g) + 3 water(l)' });
+    const r = evaluateStep({ equation: 'ethanol(l) + 3 oxygen(g) -> 2 CO2(g) + 3 water(l)' }, { lookup: nbsLookup });
     expect(r.equation).toBe('C2H5OH(l) + 3 O2(g) ⇌ 2 CO2(g) + 3 H2O(l)');
     expect(r.species.map((s) => s.as_written)).toEqual(['ethanol(l)', 'oxygen(g)', 'CO2(g)', 'water(l)']);
     expect(r.species[0]).toMatchObject({ key: 'C2H5OH(l)', nu: -1, source: 'NBS 1982', override: false });
@@ -48,7 +49,7 @@ describe('evaluateStep response', () => {
       equation: shift,
       temperature: `${T} K`,
       pressures: { 'CO(g)': '1 bar', 'H2O(g)': '1 bar', 'CO2(g)': '10 bar', 'H2(g)': '10 bar' },
-    });
+    }, { lookup: nbsLookup });
     expect(r.lnQ).toBeCloseTo(Math.log(100), 12);
     expect(r.deltaG_kJ!).toBeCloseTo(r.deltaG0_kJ + (R_GAS * T * Math.log(100)) / 1000, 9);
     expect(r.deltaG0_kJ).toBeLessThan(0);
@@ -59,27 +60,27 @@ describe('evaluateStep response', () => {
 
   it('gives the same ΔG under conditions whichever standard pressure is chosen', () => {
     const req = { equation: 'N2(g) + 3 H2(g) -> 2 NH3(g)', temperature: '600 K', pressures: { 'N2(g)': '50 bar', 'H2(g)': '150 bar', 'NH3(g)': '20 bar' } };
-    const bar = evaluateStep(req);
-    const atm = evaluateStep({ ...req, standardPressure: '1 atm' });
+    const bar = evaluateStep(req, { lookup: nbsLookup });
+    const atm = evaluateStep({ ...req, standardPressure: '1 atm' }, { lookup: nbsLookup });
     expect(atm.deltaG0_kJ).not.toBeCloseTo(bar.deltaG0_kJ, 3);
     expect(atm.deltaG_kJ!).toBeCloseTo(bar.deltaG_kJ!, 9);
   });
 
   it('says "at equilibrium" when Q = K', () => {
-    const first = evaluateStep({ equation: 'CaCO3(s) -> CaO(s) + CO2(g)', temperature: '1100 K' });
-    const r = evaluateStep({ equation: 'CaCO3(s) -> CaO(s) + CO2(g)', temperature: '1100 K', pressures: { 'CO2(g)': `${first.K} bar` } });
+    const first = evaluateStep({ equation: 'CaCO3(s) -> CaO(s) + CO2(g)', temperature: '1100 K' }, { lookup: nbsLookup });
+    const r = evaluateStep({ equation: 'CaCO3(s) -> CaO(s) + CO2(g)', temperature: '1100 K', pressures: { 'CO2(g)': `${first.K} bar` } }, { lookup: nbsLookup });
     expect(Math.abs(r.deltaG_kJ!)).toBeLessThan(1e-6);
     expect(r.direction).toBe('at equilibrium');
   });
 
   it('gives a cell potential E = −ΔG/(nF) when electrons are given', () => {
-    const r = evaluateStep({ equation: 'Zn(s) + Cu+2(aq) -> Zn+2(aq) + Cu(s)', electrons: 2 });
+    const r = evaluateStep({ equation: 'Zn(s) + Cu+2(aq) -> Zn+2(aq) + Cu(s)', electrons: 2 }, { lookup: nbsLookup });
     expect(r.cellPotential_V!).toBeCloseTo(212550 / (2 * 96485.33212), 9);
   });
 
   it('reports the crossover temperature or null', () => {
-    expect(evaluateStep({ equation: shift }).crossover_K!).toBeGreaterThan(1000);
-    expect(evaluateStep({ equation: 'H2(g) + Cl2(g) -> 2 HCl(g)' }).crossover_K).toBeNull();
+    expect(evaluateStep({ equation: shift }, { lookup: nbsLookup }).crossover_K!).toBeGreaterThan(1000);
+    expect(evaluateStep({ equation: 'H2(g) + Cl2(g) -> 2 HCl(g)' }, { lookup: nbsLookup }).crossover_K).toBeNull();
   });
 
   it('computes the equilibrium with amounts keyed as written', () => {
@@ -88,7 +89,7 @@ describe('evaluateStep response', () => {
       temperature: '700 K',
       initial: { 'N2(g)': '1 mol', 'hydrogen(g)': '3 mol', 'Ar(g)': '1 mol' },
       totalPressure: '200 bar',
-    });
+    }, { lookup: nbsLookup });
     const eq = r.equilibrium!;
     expect(Object.keys(eq.amounts_mol)).toEqual(['N2(g)', 'hydrogen(g)', 'NH3(g)', 'Ar(g)']);
     expect(eq.amounts_mol['NH3(g)']).toBeCloseTo(2 * eq.extent_mol, 12);
@@ -101,7 +102,7 @@ describe('evaluateStep response', () => {
     const r = evaluateStep({
       equation: 'CO2(aq) + H2O(l) <=> HCO3-(aq) + H+(aq)',
       initial: { 'CO2(aq)': '0.01 mol/L' },
-    });
+    }, { lookup: nbsLookup });
     expect(r.equilibrium!.amounts_mol['H2O(l)']).toBeUndefined();
     // pKa1 from NBS values 6.366: x² /(0.01 − x) = 10^-6.366
     const Ka = Math.exp(r.lnK);
@@ -120,15 +121,15 @@ describe('evaluateStep response', () => {
   });
 
   it('names from-memory data in a warning', () => {
-    const r = evaluateStep({ equation: 'CH3COCH3(l) -> CH3COCH3(g)' });
+    const r = evaluateStep({ equation: 'CH3COCH3(l) -> CH3COCH3(g)' }, { lookup: nbsLookup });
     expect(r.warnings.map((w) => w.code)).toContain('FROM_MEMORY');
   });
 
   it('gives an uncertainty block, judging the sign of ΔG when conditions are given', () => {
-    const std = evaluateStep({ equation: '2 NO2(g) -> N2O4(g)' });
+    const std = evaluateStep({ equation: '2 NO2(g) -> N2O4(g)' }, { lookup: nbsLookup });
     expect(std.uncertainty.deltaG0_kJ!).toBeCloseTo(2.81, 2); // sqrt((2·1.01)² + 1.95²), data README table
     expect(std.uncertainty.signUncertain).toBe(false); // |ΔG°| = 4.73 kJ/mol > σ
-    const near = evaluateStep({ equation: '2 NO2(g) -> N2O4(g)', pressures: { 'NO2(g)': '1 bar', 'N2O4(g)': '8.25 bar' } });
+    const near = evaluateStep({ equation: '2 NO2(g) -> N2O4(g)', pressures: { 'NO2(g)': '1 bar', 'N2O4(g)': '8.25 bar' } }, { lookup: nbsLookup });
     expect(Math.abs(near.deltaG_kJ!)).toBeLessThan(1);
     expect(near.uncertainty.signUncertain).toBe(true);
   });
@@ -136,14 +137,14 @@ describe('evaluateStep response', () => {
 
 describe('evaluateStep errors', () => {
   it('names an unknown species and suggests the closest library species', () => {
-    const err = thermoErrorOf(() => evaluateStep({ equation: 'C2H5OH(s) + 3 O2(g) -> 2 CO2(g) + 3 H2O(l)' }));
+    const err = thermoErrorOf(() => evaluateStep({ equation: 'C2H5OH(s) + 3 O2(g) -> 2 CO2(g) + 3 H2O(l)' }, { lookup: nbsLookup }));
     expect(err.code).toBe('UNKNOWN_SPECIES');
     expect(err.field).toBe('equation');
     expect(err.message).toMatch(/C2H5OH\(s\).*C2H5OH\(l\)/);
   });
 
   it('lists each element surplus and offers the balanced form', () => {
-    const err = thermoErrorOf(() => evaluateStep({ equation: 'H2(g) + O2(g) -> H2O(l)' }));
+    const err = thermoErrorOf(() => evaluateStep({ equation: 'H2(g) + O2(g) -> H2O(l)' }, { lookup: nbsLookup }));
     expect(err.code).toBe('UNBALANCED');
     expect(err.message).toMatch(/O: 1 more on the left/);
     expect(err.details?.balanced).toBe('2 H2(g) + O2(g) ⇌ 2 H2O(l)');
@@ -163,13 +164,13 @@ describe('evaluateStep errors', () => {
     [{ initial: { 'Xx(g)': '1 mol' } }, 'INVALID_VALUE', 'initial.Xx(g)'],
     [{ initial: { 'H2(g)': '1 mol' }, totalPressure: '0 bar' }, 'INVALID_VALUE', 'totalPressure'],
   ] as const)('%j → %s on %s', (extra, code, field) => {
-    const err = thermoErrorOf(() => evaluateStep(loose({ equation: 'H2(g) + 1/2 O2(g) -> H2O(l)', ...extra })));
+    const err = thermoErrorOf(() => evaluateStep(loose({ equation: 'H2(g) + 1/2 O2(g) -> H2O(l)', ...extra }), { lookup: nbsLookup }));
     expect(err.code).toBe(code);
     expect(err.field).toBe(field);
   });
 
   it('turns a parse error into a field error on the equation', () => {
-    const err = thermoErrorOf(() => evaluateStep({ equation: 'H2 + O2 -> H2O' }));
+    const err = thermoErrorOf(() => evaluateStep({ equation: 'H2 + O2 -> H2O' }, { lookup: nbsLookup }));
     expect(err.code).toBe('PARSE_ERROR');
     expect(err.field).toBe('equation');
   });

@@ -7,7 +7,7 @@ import { findCrossover, memoCrossover } from '@/lib/thermo/crossover';
 import { parseEquation } from '@/lib/thermo/equation';
 import { evaluateStep } from '@/lib/thermo/evaluate';
 import { clearReactionMemo, resolveReaction } from '@/lib/thermo/resolve-reaction';
-import { builtinLookup, builtinSpecies, layeredLookup } from '@/lib/thermo/species-library';
+import { builtinLookup, builtinSpecies, layeredLookup, nbsLookup } from '@/lib/thermo/species-library';
 import type { EvaluateRequest } from '@/lib/schemas/evaluate';
 
 const REQUESTS: EvaluateRequest[] = [
@@ -31,7 +31,7 @@ describe('reaction memo', () => {
   it('gives results identical to uncached evaluation, on the first call and on memo hits', () => {
     for (const req of REQUESTS) {
       const uncached = fresh(req);
-      for (let i = 0; i < 3; i++) expect(JSON.stringify(evaluateStep(req))).toBe(uncached);
+      for (let i = 0; i < 3; i++) expect(JSON.stringify(evaluateStep(req, { lookup: builtinLookup }))).toBe(uncached);
     }
   });
 
@@ -48,9 +48,9 @@ describe('reaction memo', () => {
     const teamCO2 = { ...builtinCO2, dfG_kJ: -390, source: 'team calorimetry' };
     const team = layeredLookup([teamCO2]);
     const req = { equation: 'C(s) + O2(g) -> CO2(g)' };
-    const before = evaluateStep(req);
+    const before = evaluateStep(req, { lookup: nbsLookup });
     const shadowed = evaluateStep(req, { lookup: team });
-    const after = evaluateStep(req);
+    const after = evaluateStep(req, { lookup: nbsLookup });
     expect(shadowed.deltaG0_kJ).toBe(-390);
     expect(shadowed.species.find((s) => s.key === 'CO2(g)')).toMatchObject({ source: 'team calorimetry', override: true });
     expect(shadowed.warnings.map((w) => w.code)).toContain('OVERRIDE');

@@ -1,5 +1,6 @@
 // A step on fitted ΔH°, ΔS°: ΔG°(T) = ΔH° − TΔS° (ΔCp = 0), multiples and reversals, the warning and the fit's σ.
 import { describe, expect, it } from 'vitest';
+import { nbsLookup } from '@/lib/thermo/species-library';
 import { evaluateStep } from '@/lib/thermo';
 
 // Synthetic fitted values (not a measurement), for the reaction as the fit has it.
@@ -14,7 +15,7 @@ const override = {
 
 describe('evaluateStep with an override', () => {
   it('uses the fitted values, names the source and says ΔCp = 0 and the range', () => {
-    const r = evaluateStep({ equation: 'N2O4(g) -> 2 NO2(g)', temperature: '320 K', override });
+    const r = evaluateStep({ equation: 'N2O4(g) -> 2 NO2(g)', temperature: '320 K', override }, { lookup: nbsLookup });
     expect(r.deltaH0_kJ).toBe(60);
     expect(r.deltaG0_kJ).toBeCloseTo(60 - (320 * 180) / 1000, 12);
     expect(r.override).toEqual({ source: 'fit #7 “bench set”', factor: 1, deltaH0_kJ: 60, deltaS0_J_per_K: 180, range_K: [280, 360] });
@@ -28,20 +29,20 @@ describe('evaluateStep with an override', () => {
   });
 
   it('scales for a multiple, flips for the reverse, and warns outside the fitted range', () => {
-    const half = evaluateStep({ equation: '1/2 N2O4(g) -> NO2(g)', temperature: '300 K', override });
+    const half = evaluateStep({ equation: '1/2 N2O4(g) -> NO2(g)', temperature: '300 K', override }, { lookup: nbsLookup });
     expect(half.deltaH0_kJ).toBeCloseTo(30, 12);
     expect(half.override!.factor).toBe(0.5);
-    const back = evaluateStep({ equation: '2 NO2(g) -> N2O4(g)', temperature: '500 K', override });
+    const back = evaluateStep({ equation: '2 NO2(g) -> N2O4(g)', temperature: '500 K', override }, { lookup: nbsLookup });
     expect(back.deltaG0_kJ).toBeCloseTo(-(60 - 0.5 * 180), 12);
     expect(back.warnings.find((x) => x.code === 'FITTED_VALUES')!.message).toContain('500 K is an extrapolation');
   });
 
   it('refuses a step that is not the fitted reaction', () => {
-    expect(() => evaluateStep({ equation: 'N2(g) + 2 O2(g) -> 2 NO2(g)', override })).toThrow(/not fit #7 “bench set”'s reaction/);
+    expect(() => evaluateStep({ equation: 'N2(g) + 2 O2(g) -> 2 NO2(g)', override }, { lookup: nbsLookup })).toThrow(/not fit #7 “bench set”'s reaction/);
   });
 
   it('without an override nothing changes: no override field, no FITTED_VALUES', () => {
-    const r = evaluateStep({ equation: 'N2O4(g) -> 2 NO2(g)', temperature: '320 K' });
+    const r = evaluateStep({ equation: 'N2O4(g) -> 2 NO2(g)', temperature: '320 K' }, { lookup: nbsLookup });
     expect(r.override).toBeUndefined();
     expect(r.warnings.some((x) => x.code === 'FITTED_VALUES')).toBe(false);
   });

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { lookupParseOptions } from '@/lib/thermo/lookup-parse-options';
 import { parseSpecies } from '@/lib/thermo/notation';
 import { builtinLookup, builtinSpecies, layeredLookup, libraryMeta } from '@/lib/thermo/species-library';
 import type { SpeciesRecord } from '@/lib/thermo/species-types';
@@ -12,8 +13,10 @@ describe('built-in species library', () => {
   });
 
   it('uses keys the equation notation reads back to themselves, with the same elements and charge', () => {
+    // Structure keys ({InChIKey}(phase)) are read through the lookup's records.
+    const options = lookupParseOptions(builtinLookup);
     for (const r of builtinSpecies()) {
-      const ref = parseSpecies(r.key);
+      const ref = parseSpecies(r.key, options);
       expect(ref.key, r.key).toBe(r.key);
       expect(ref.elements).toEqual(r.elements);
       expect(ref.charge).toBe(r.charge);

@@ -2,12 +2,13 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { nasa9At, nasa9HSInto } from '@/lib/thermo/nasa9';
-import { builtinSpecies } from '@/lib/thermo/species-library';
+import { nbsSpecies } from '@/lib/thermo/species-library';
 import { speciesHSInto, speciesRange, speciesStateAt } from '@/lib/thermo/species-state';
 import { T_REF } from '@/lib/thermo/constants';
 import type { Nasa9Cp, SpeciesRecord } from '@/lib/thermo/species-types';
 
-const records = builtinSpecies();
+// The NBS/NASA records: NASA-9 polynomials and constant Cp (the published forms are checked in cp-forms.test.ts).
+const records = nbsSpecies();
 const withPolynomial = records.filter((r) => r.cp?.kind === 'nasa9');
 
 describe('allocation-free thermo cores', () => {
