@@ -102,7 +102,7 @@ export function estimateGas(chem: Chem, smiles: string, db: RmgDatabase): GasEst
   const { Cp0, CpInf } = cpLimits(mol);
   const wilhoit = fitWilhoit(CP_TEMPERATURES_K, sum.values.Cp, Cp0, CpInf, 1000);
 
-  const reasons = weakReasons(db.trees.group, mol, sum.contributions, built.rdkitAromatic);
+  const reasons = weakReasons(db.trees, mol, sum.contributions, built.rdkitAromatic);
   const sigma = sigmaFor(
     reasons.map((r) => r.kind),
     built.heavyCount,

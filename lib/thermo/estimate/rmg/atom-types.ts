@@ -48,6 +48,11 @@ export class AtomTypeTable {
     return undefined;
   }
 
+  /** Element of a type (undefined for wildcards). */
+  elementOf(type: string): string | undefined {
+    return this.types[type]?.element ?? undefined;
+  }
+
   /** Molecule types accepted by a group atom listing `groupTypes` (each type or a specific case of it). */
   accepted(groupTypes: readonly string[]): ReadonlySet<string> {
     const key = groupTypes.join('|');

@@ -15,8 +15,16 @@ export interface GroupAtom {
   types: readonly string[];
 }
 
+/** What a labelled atom needs among its molecule neighbours: per element, and heavy atoms in all. */
+export interface NeighbourNeeds {
+  byElement: [string, number][];
+  heavy: number;
+}
+
 export interface GroupGraph {
   atoms: GroupAtom[];
+  /** per labelled atom: a quick necessary condition checked before the search */
+  needs: Map<number, NeighbourNeeds>;
   /** per atom: neighbours with the bit mask of allowed orders */
   adj: { to: number; mask: number }[][];
   labels: Map<string, number>;
@@ -51,8 +59,21 @@ export function compileGroup(json: GraphGroupJson, table: AtomTypeTable): GroupG
     adj[y]!.push({ to: x, mask });
   }
   const labels = new Map<string, number>();
+  const needs = new Map<number, NeighbourNeeds>();
   atoms.forEach((a, i) => {
-    if (a.label) labels.set(a.label, i);
+    if (!a.label) return;
+    labels.set(a.label, i);
+    const byElement = new Map<string, number>();
+    let heavy = 0;
+    for (const { to } of adj[i]!) {
+      const elements = new Set([...atoms[to]!.accepted].map((t) => table.elementOf(t)).filter((e): e is string => e !== undefined));
+      if (elements.size === 1) {
+        const e = [...elements][0]!;
+        byElement.set(e, (byElement.get(e) ?? 0) + 1);
+        if (e !== 'H') heavy += 1;
+      } else if (!elements.has('H')) heavy += 1;
+    }
+    needs.set(i, { byElement: [...byElement], heavy });
   });
-  return { atoms, adj, labels };
+  return { atoms, adj, labels, needs };
 }

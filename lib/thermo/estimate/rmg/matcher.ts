@@ -1,6 +1,7 @@
 // Subgraph monomorphism of a group graph into a molecule graph with fixed labelled centres:
 // every group atom maps to a distinct molecule atom it accepts, every group bond onto a molecule
-// bond of an allowed order; extra molecule atoms and bonds are allowed.
+// bond of an allowed order; extra molecule atoms and bonds are allowed. Written without closures
+// or per-call allocation: tree descents call it thousands of times per molecule.
 import { type GroupGraph, orderBit } from './group-graph';
 import type { MolGraph } from './mol-graph';
 
@@ -8,16 +9,16 @@ interface Step {
   atom: number;
   /** an earlier group atom bonded to this one (candidates come from its image's neighbours), or -1 */
   anchor: number;
-  /** bonds to earlier group atoms: [earlier atom, allowed-order mask] */
-  checks: [number, number][];
+  /** bonds to earlier group atoms, as parallel lists of the earlier atom and its allowed-order mask */
+  checkAtoms: number[];
+  checkMasks: number[];
 }
 
-const plans = new WeakMap<GroupGraph, Map<string, Step[]>>();
+const plans = new WeakMap<GroupGraph, Map<number, Step[]>>();
 
-function plan(group: GroupGraph, fixed: readonly number[]): Step[] {
+function plan(group: GroupGraph, fixed: readonly number[], key: number): Step[] {
   let byKey = plans.get(group);
   if (!byKey) plans.set(group, (byKey = new Map()));
-  const key = fixed.join(',');
   const cached = byKey.get(key);
   if (cached) return cached;
   const order: number[] = [...fixed];
@@ -39,7 +40,12 @@ function plan(group: GroupGraph, fixed: readonly number[]): Step[] {
   const position = new Map(order.map((a, i) => [a, i]));
   const steps = order.map((atom, i) => {
     const earlier = group.adj[atom]!.filter((e) => position.get(e.to)! < i);
-    return { atom, anchor: i < fixed.length ? -1 : (earlier[0]?.to ?? -1), checks: earlier.map((e): [number, number] => [e.to, e.mask]) };
+    return {
+      atom,
+      anchor: i < fixed.length ? -1 : (earlier[0]?.to ?? -1),
+      checkAtoms: earlier.map((e) => e.to),
+      checkMasks: earlier.map((e) => e.mask),
+    };
   });
   byKey.set(key, steps);
   return steps;
@@ -53,8 +59,63 @@ function atomFits(group: GroupGraph, g: number, mol: MolGraph, m: number): boole
   if (ga.p.length > 0 && !ga.p.includes(ma.lonePairs)) return false;
   if (ga.c.length > 0 && !ga.c.includes(ma.charge)) return false;
   if (ga.inRing !== undefined && ga.inRing !== (mol.inRing[m] ?? false)) return false;
+  // a group atom with k bonds needs a molecule atom with at least k
+  return mol.neighbours[m]!.length >= group.adj[g]!.length;
+}
+
+// scratch state of the current search (the matcher is never re-entered during a search)
+let image = new Int32Array(64);
+let used = new Uint8Array(256);
+let steps: Step[] = [];
+let nFixed = 0;
+let sGroup: GroupGraph;
+let sMol: MolGraph;
+
+function bondsOk(step: Step, m: number): boolean {
+  for (let k = 0; k < step.checkAtoms.length; k += 1) {
+    const order = sMol.order(m, image[step.checkAtoms[k]!]!);
+    if (order === undefined || (orderBit(order) & step.checkMasks[k]!) === 0) return false;
+  }
   return true;
 }
+
+function extend(i: number): boolean {
+  if (i === steps.length) return true;
+  const step = steps[i]!;
+  if (i < nFixed) return bondsOk(step, image[step.atom]!) && extend(i + 1);
+  if (step.anchor >= 0) {
+    const pool = sMol.neighbours[image[step.anchor]!]!;
+    for (let k = 0; k < pool.length; k += 1) if (tryAtom(i, step, pool[k]!)) return true;
+  } else {
+    for (let m = 0; m < sMol.size; m += 1) if (tryAtom(i, step, m)) return true;
+  }
+  return false;
+}
+
+function tryAtom(i: number, step: Step, m: number): boolean {
+  if (used[m] || !atomFits(sGroup, step.atom, sMol, m) || !bondsOk(step, m)) return false;
+  image[step.atom] = m;
+  used[m] = 1;
+  if (extend(i + 1)) {
+    used[m] = 0;
+    return true;
+  }
+  used[m] = 0;
+  image[step.atom] = -1;
+  return false;
+}
+
+function neighboursSuffice(group: GroupGraph, g: number, mol: MolGraph, m: number): boolean {
+  const needs = group.needs.get(g);
+  if (!needs) return true;
+  const have = mol.neighbourElements(m);
+  if ((have.get('heavy') ?? 0) < needs.heavy) return false;
+  for (const [e, n] of needs.byElement) if ((have.get(e) ?? 0) < n) return false;
+  return true;
+}
+
+const fixedGroup: number[] = [];
+const fixedMol: number[] = [];
 
 /**
  * True when `group` matches `mol` with each labelled group atom named in `centres` placed on the
@@ -62,43 +123,29 @@ function atomFits(group: GroupGraph, g: number, mol: MolGraph, m: number): boole
  * `centres` absent from the group are ignored.
  */
 export function matchGroup(group: GroupGraph, mol: MolGraph, centres: Readonly<Record<string, number>>): boolean {
-  const fixedGroup: number[] = [];
-  const fixedMol: number[] = [];
-  for (const [label, m] of Object.entries(centres)) {
+  fixedGroup.length = 0;
+  fixedMol.length = 0;
+  let key = 0;
+  for (const label in centres) {
     const g = group.labels.get(label);
     if (g === undefined) continue;
-    if (!atomFits(group, g, mol, m) || fixedMol.includes(m)) return false;
+    const m = centres[label]!;
+    if (!atomFits(group, g, mol, m) || fixedMol.includes(m) || !neighboursSuffice(group, g, mol, m)) return false;
     fixedGroup.push(g);
     fixedMol.push(m);
+    key = key * 128 + g + 1;
   }
-  const steps = plan(group, fixedGroup);
-  const image = new Int32Array(group.atoms.length).fill(-1);
-  const used = new Uint8Array(mol.size);
-  fixedGroup.forEach((g, i) => {
-    image[g] = fixedMol[i]!;
-    used[fixedMol[i]!] = 1;
-  });
-
-  const bondsOk = (step: Step, m: number): boolean =>
-    step.checks.every(([other, mask]) => {
-      const order = mol.order(m, image[other]!);
-      return order !== undefined && (orderBit(order) & mask) !== 0;
-    });
-
-  const extend = (i: number): boolean => {
-    if (i === steps.length) return true;
-    const step = steps[i]!;
-    if (i < fixedGroup.length) return bondsOk(step, image[step.atom]!) && extend(i + 1);
-    const pool = step.anchor >= 0 ? mol.neighbours[image[step.anchor]!]! : mol.atoms.map((_, k) => k);
-    for (const m of pool) {
-      if (used[m] || !atomFits(group, step.atom, mol, m) || !bondsOk(step, m)) continue;
-      image[step.atom] = m;
-      used[m] = 1;
-      if (extend(i + 1)) return true;
-      used[m] = 0;
-      image[step.atom] = -1;
-    }
-    return false;
-  };
+  if (image.length < group.atoms.length) image = new Int32Array(group.atoms.length * 2);
+  if (used.length < mol.size) used = new Uint8Array(mol.size * 2);
+  used.fill(0, 0, mol.size);
+  image.fill(-1, 0, group.atoms.length);
+  for (let k = 0; k < fixedGroup.length; k += 1) {
+    image[fixedGroup[k]!] = fixedMol[k]!;
+    used[fixedMol[k]!] = 1;
+  }
+  steps = plan(group, fixedGroup, key);
+  nFixed = fixedGroup.length;
+  sGroup = group;
+  sMol = mol;
   return extend(0);
 }

@@ -29,6 +29,7 @@ export class MolGraph {
   /** smallest set of smallest rings, each an ordered cycle of atom indices */
   rings: number[][] = [];
   inRing: boolean[] = [];
+  private elementCounts: Map<string, number>[] | undefined;
 
   addAtom(element: string, charge = 0, radicals = 0): number {
     this.atoms.push({ element, charge, radicals, lonePairs: 0, type: undefined });
@@ -60,6 +61,22 @@ export class MolGraph {
 
   isHeavy(i: number): boolean {
     return this.atoms[i]!.element !== 'H';
+  }
+
+  /** Neighbour counts by element, and under "heavy" the non-H neighbours (cached; the graph is final). */
+  neighbourElements(i: number): Map<string, number> {
+    if (!this.elementCounts || this.elementCounts.length !== this.size) {
+      this.elementCounts = this.neighbours.map((ns) => {
+        const m = new Map<string, number>();
+        for (const j of ns) {
+          const e = this.atoms[j]!.element;
+          m.set(e, (m.get(e) ?? 0) + 1);
+          if (e !== 'H') m.set('heavy', (m.get('heavy') ?? 0) + 1);
+        }
+        return m;
+      });
+    }
+    return this.elementCounts[i]!;
   }
 
   bondCounts(i: number): BondCounts {

@@ -35,10 +35,10 @@ function ringSizesOfAtoms(mol: MolGraph, atoms: readonly number[]): string {
   return sizesKey(smallestRings(mol.size, edges));
 }
 
-function isPartial(tree: Tree, entry: Entry, mol: MolGraph, atoms: readonly number[]): boolean {
+function isPartial(tree: Tree, entry: Entry, atomCount: number, molKey: () => string): boolean {
   const graph = tree.graphOf(entry);
   if (!graph) return true;
-  if (graph.atoms.length < atoms.length) return true;
+  if (graph.atoms.length < atomCount) return true;
   let groupKey = groupRingSizes.get(entry);
   if (groupKey === undefined) {
     const edges: [number, number][] = [];
@@ -46,7 +46,7 @@ function isPartial(tree: Tree, entry: Entry, mol: MolGraph, atoms: readonly numb
     groupKey = sizesKey(smallestRings(graph.atoms.length, edges));
     groupRingSizes.set(entry, groupKey);
   }
-  return groupKey !== ringSizesOfAtoms(mol, atoms);
+  return groupKey !== molKey();
 }
 
 const averages = new WeakMap<Entry, ThermoValues | null>();
@@ -69,7 +69,9 @@ export function lookupRing(tree: Tree, mol: MolGraph, atoms: readonly number[]):
     if (e) matched.push(e);
   }
   if (matched.length === 0) return undefined;
-  const complete = matched.filter((e) => !isPartial(tree, e, mol, atoms));
+  let molSizes: string | undefined;
+  const molKey = (): string => (molSizes ??= ringSizesOfAtoms(mol, atoms));
+  const complete = matched.filter((e) => !isPartial(tree, e, atoms.length, molKey));
   const pool = complete.length > 0 ? complete : matched;
   const depths = pool.map((e) => tree.ancestors(e));
   const node = pool[depths.indexOf(Math.max(...depths))]!;

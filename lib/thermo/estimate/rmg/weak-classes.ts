@@ -14,7 +14,8 @@ export type WeakKind =
   | 'ring-heuristic'
   | 'cumulene'
   | 'o-s-ring'
-  | 'alcohol';
+  | 'alcohol'
+  | 'copied-ring';
 
 /** Kinds that only widen σ (a known, moderate offset); the others also mark the estimate "low". */
 export const WIDEN_ONLY: ReadonlySet<WeakKind> = new Set(['o-s-ring', 'alcohol']);
@@ -26,6 +27,24 @@ export interface WeakReason {
 
 /** Carbonyl-carbon groups of older provenance next to the Paraskevas oxygen groups (README, item 2). */
 const OLD_CARBONYL = new Set(['Cds-OdCbOs', 'Cds-O2d(Cds-Cds)O2s', 'Cds-OdCbCb', 'Cds-O2d(Cds-Cds)(Cds-Cds)']);
+
+const copiedRings = new WeakMap<GroupTree<ThermoValues>, Set<string>>();
+
+/** Ring entries whose numbers equal another ring entry's (e.g. Piperidine repeats Pyrrolidine). */
+function copiedRingLabels(ringTree: GroupTree<ThermoValues>): Set<string> {
+  let set = copiedRings.get(ringTree);
+  if (set) return set;
+  const byValue = new Map<string, string[]>();
+  for (const e of ringTree.entries.values()) {
+    const d = e.data;
+    if (!d || 'ref' in d || (d.H === 0 && d.S === 0)) continue;
+    const key = `${d.H.toFixed(3)}|${d.S.toFixed(3)}`;
+    byValue.set(key, [...(byValue.get(key) ?? []), e.label]);
+  }
+  set = new Set([...byValue.values()].filter((labels) => labels.length > 1).flat());
+  copiedRings.set(ringTree, set);
+  return set;
+}
 
 /** Whether the entry that gave the numbers names every non-aromatic neighbour of the centre. */
 function spellsOutNeighbours(tree: GroupTree<ThermoValues>, c: Contribution, mol: MolGraph): boolean {
@@ -40,7 +59,14 @@ function spellsOutNeighbours(tree: GroupTree<ThermoValues>, c: Contribution, mol
   return listed >= actual;
 }
 
-export function weakReasons(groupTree: GroupTree<ThermoValues>, mol: MolGraph, contributions: Contribution[], rdkitAromatic: ReadonlySet<string>): WeakReason[] {
+export function weakReasons(
+  trees: { group: GroupTree<ThermoValues>; ring: GroupTree<ThermoValues> },
+  mol: MolGraph,
+  contributions: Contribution[],
+  rdkitAromatic: ReadonlySet<string>,
+): WeakReason[] {
+  const groupTree = trees.group;
+  const copied = copiedRingLabels(trees.ring);
   const out: WeakReason[] = [];
   const add = (kind: WeakKind, text: string): void => {
     if (!out.some((r) => r.kind === kind)) out.push({ kind, text });
@@ -78,6 +104,9 @@ export function weakReasons(groupTree: GroupTree<ThermoValues>, mol: MolGraph, c
     }
     if ((c.file === 'ring' || c.file === 'polycyclic') && c.reached.children.length > 0 && c.reached.data !== null && 'ref' in (c.reached.data as object)) {
       add('generic-ring', `generic ring node ${c.reached.label} (data borrowed from ${c.label})`);
+    }
+    if (c.file === 'ring' && c.sign === 1 && copied.has(c.label)) {
+      add('copied-ring', `ring correction ${c.label} repeats another ring's numbers in the source data`);
     }
     if (c.via === 'bicyclic heuristic' || c.via === 'ring-pair heuristic') add('ring-heuristic', `ring system estimated by the ${c.via}`);
   }
