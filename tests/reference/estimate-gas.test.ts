@@ -141,6 +141,34 @@ describe('aggregate accuracy over these molecules (targets: MAE ≤ 6 kJ/mol, �
   });
 });
 
+// Coverage only (no published gas values needed): common drugs, solvents and reagents of
+// fine-chemical work, SMILES written here from memory.
+const COVERAGE: string[] = [
+  'CC(C)Cc1ccc(cc1)C(C)C(=O)O', 'CC(=O)Nc1ccc(O)cc1', 'CC(=O)Oc1ccccc1C(=O)O', 'Cn1cnc2c1c(=O)n(C)c(=O)n2C', 'COc1ccc2cc(ccc2c1)C(C)C(=O)O',
+  'OC(=O)Cc1ccccc1Nc1c(Cl)cccc1Cl', 'CCN(CC)CC(=O)Nc1c(C)cccc1C', 'CC(C)C1CCC(C)CC1O', 'CC1(C)C2CCC1(C)C(=O)C2', 'COc1cc(C=O)ccc1O',
+  'CN1CCCC1c1cccnc1', 'Nc1ccc(cc1)S(N)(=O)=O', 'O=C1NC(=O)C(N1)(c1ccccc1)c1ccccc1', 'CN1C(=O)CN=C(c2ccccc2)c2cc(Cl)ccc12',
+  'CNCCC(Oc1ccc(cc1)C(F)(F)F)c1ccccc1', 'CC(C)NCC(O)COc1cccc2ccccc12', 'CC12CCC3C(CCC4=CC(=O)CCC34C)C1CCC2O', 'CN1CCCC1=O',
+  'CC1CCCO1', 'CCOC(=O)C(C)O', 'CC(C)(C)OC(=O)OC(=O)OC(C)(C)C', 'CCN(CC)CC', 'CN(C)c1ccncc1', 'C1COCCN1', 'C1CCNCC1',
+  'Cc1ccc(cc1)S(=O)(=O)O', 'BrCc1ccccc1', 'CS(=O)(=O)Cl', 'O=Cc1ccccc1', 'COC(=O)c1ccccc1', 'O=C1OC(=O)c2ccccc12', 'O=C1CCC(=O)N1',
+  'O=C1CCCCCN1', 'c1ccc2[nH]ccc2c1', 'c1ccc2ncccc2c1', 'c1c[nH]cn1', 'OCC1OC(O)C(O)C(O)C1O', 'COC(=O)C=C', 'O=C1OCCO1',
+  'FC(F)(F)c1ccccc1', 'CSc1ccccc1', 'N#Cc1ccccc1', 'COc1ccc(cc1)-c1ccccc1C', 'CC(C)=NO', 'CCOC(N)=O', 'NC(N)=S',
+];
+
+describe('coverage of drug-like molecules, solvents and reagents (≥ 95 % estimated)', () => {
+  it(`estimates at least 95 % of ${COVERAGE.length}`, () => {
+    const db = loadRmgDatabase();
+    const failed = COVERAGE.filter((smiles) => {
+      try {
+        estimateGas(chem, smiles, db);
+        return false;
+      } catch {
+        return true;
+      }
+    });
+    expect(failed.length / COVERAGE.length, `not estimated: ${failed.join(' ')}`).toBeLessThanOrEqual(0.05);
+  });
+});
+
 describe('Cp(T) and H(T) − H(298.15) against NASA TM-4513 polynomials (organics heat-capacity.json)', () => {
   const R = 8.314462618;
   const nasaCp = (e: Nasa7Entry, T: number): number => {

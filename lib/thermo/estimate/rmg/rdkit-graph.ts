@@ -28,11 +28,27 @@ export interface BuiltMolecule {
 
 const bondKey = (a: number, b: number): string => (a < b ? `${a}-${b}` : `${b}-${a}`);
 
+function connected(graph: MolGraph): boolean {
+  if (graph.size === 0) return false;
+  const seen = new Uint8Array(graph.size);
+  const stack = [0];
+  seen[0] = 1;
+  let count = 1;
+  while (stack.length > 0) {
+    for (const j of graph.neighbours[stack.pop()!]!) {
+      if (seen[j]) continue;
+      seen[j] = 1;
+      count += 1;
+      stack.push(j);
+    }
+  }
+  return count === graph.size;
+}
+
 export function buildMolecule(chem: Chem, smiles: string, table: AtomTypeTable): BuiltMolecule {
   const json = chem.withMol(smiles, (mol) => JSON.parse(mol.get_json()) as RdkitJson);
-  if (json.molecules.length !== 1) {
-    throw new ThermoError('UNSUPPORTED_STRUCTURE', 'Give one molecule: the SMILES holds several disconnected parts.', { field: 'smiles' });
-  }
+  const mixture = (): ThermoError => new ThermoError('UNSUPPORTED_STRUCTURE', 'Give one molecule: the SMILES holds several disconnected parts.', { field: 'smiles' });
+  if (json.molecules.length !== 1) throw mixture();
   const mol = json.molecules[0]!;
   const d = json.defaults;
   const graph = new MolGraph();
@@ -58,6 +74,7 @@ export function buildMolecule(chem: Chem, smiles: string, table: AtomTypeTable):
   implicitH.forEach((n, i) => {
     for (let k = 0; k < n; k += 1) graph.addBond(i, graph.addAtom('H'), 1);
   });
+  if (!connected(graph)) throw mixture();
   graph.perceiveRings();
   applyRmgAromaticity(graph, rdkitAromatic);
   graph.assignTypes(table);
