@@ -30,6 +30,7 @@ export const SIGMA_MODEL: { base: Widths; perHeavyAtom: Widths; weak: Record<Wea
     'o-s-ring': { dH_kJ: 13, S_J_per_K: 26 },
     alcohol: { dH_kJ: 6, S_J_per_K: 5 },
     'copied-ring': { dH_kJ: 25, S_J_per_K: 15 },
+    nitro: { dH_kJ: 9, S_J_per_K: 25 },
   },
   calibration: 'organics species.csv gas rows, C2–C20, 245 estimated; 90th-percentile |error| / 2 per class',
 };

@@ -3,7 +3,7 @@
 import type { Contribution } from './contribution';
 import type { GroupTree } from './group-tree';
 import type { MolGraph } from './mol-graph';
-import type { ThermoValues } from './thermo-values';
+import { isZero, type ThermoValues } from './thermo-values';
 
 export type WeakKind =
   | 'n-heteroaromatic'
@@ -15,10 +15,11 @@ export type WeakKind =
   | 'cumulene'
   | 'o-s-ring'
   | 'alcohol'
-  | 'copied-ring';
+  | 'copied-ring'
+  | 'nitro';
 
 /** Kinds that only widen σ (a known, moderate offset); the others also mark the estimate "low". */
-export const WIDEN_ONLY: ReadonlySet<WeakKind> = new Set(['o-s-ring', 'alcohol']);
+export const WIDEN_ONLY: ReadonlySet<WeakKind> = new Set(['o-s-ring', 'alcohol', 'nitro']);
 
 export interface WeakReason {
   kind: WeakKind;
@@ -76,6 +77,7 @@ export function weakReasons(
     if (mol.atom(a).element === 'N' || mol.atom(b).element === 'N') add('n-heteroaromatic', 'N-heteroaromatic ring: kept as a Kekulé structure, so no aromatic stabilisation is counted');
   }
   for (let i = 0; i < mol.size; i += 1) {
+    if (mol.atom(i).type === 'N5dc') add('nitro', 'nitro or nitrate group: entropies of these groups fit published data loosely');
     if (mol.atom(i).type === 'N5dc' && mol.neighbours[i]!.some((n) => mol.atom(n).type === 'Cb' || mol.atom(n).type === 'Cbf')) {
       add('nitroarene', 'nitro group on an aromatic ring: no Cb–NO2 group, the generic Cb value is used');
     }
@@ -96,7 +98,8 @@ export function weakReasons(
     if (c.file === 'group' && OLD_CARBONYL.has(c.label)) {
       add('conjugated-carbonyl-oxygen', `aromatic or conjugated acid, ester or anhydride: ${c.label} is of older provenance than its oxygen neighbours`);
     }
-    if (c.file === 'group' && !spellsOutNeighbours(groupTree, c, mol)) {
+    // all-zero terminal groups (O2d, O0sc, N3t, halogens) are dummies by design: their value sits in the neighbour's group
+    if (c.file === 'group' && !isZero(c.values) && !spellsOutNeighbours(groupTree, c, mol)) {
       add('generic-group', `generic fallback group ${c.reached.label} for atom ${c.centres[0]! + 1} (${mol.atom(c.centres[0]!).element})`);
     }
     if ((c.file === 'ring' || c.file === 'polycyclic') && c.sign === 1 && c.reached.children.length > 0 && c.reached.data === null) {
