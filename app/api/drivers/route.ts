@@ -1,4 +1,5 @@
 // GET/POST /api/drivers: the team's driver reactions offered for coupling
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { DriverInput } from '@/lib/schemas/driver';
 import { createDriver } from '@/lib/services/drivers/create-driver';
@@ -12,3 +13,5 @@ export const GET = withRoute({ access: 'team', permission: 'route.read' }, async
 export const POST = withRoute({ access: 'team', permission: 'route.edit', body: DriverInput }, async ({ team, user, body }) =>
   Response.json(await createDriver({ teamId: team.id, userId: user.id, input: body }), { status: 201 }),
 );
+
+export const { PUT, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ GET, POST });

@@ -1,4 +1,5 @@
 // GET /api/health: liveness and database reachability for load balancers and tests
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { getDb } from '@/db';
 
@@ -9,3 +10,5 @@ export const GET = withRoute({ access: 'public' }, async () => {
   await getDb().sequelize.query('SELECT 1');
   return { ok: true };
 });
+
+export const { POST, PUT, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ GET });

@@ -1,4 +1,5 @@
 // GET /api/me: the signed-in user, their teams and unit preferences
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { AppError } from '@/lib/api/errors';
 import { getProfile } from '@/lib/services/users/get-profile';
@@ -11,3 +12,5 @@ export const GET = withRoute({ access: 'user' }, async ({ user }) => {
   if (!profile) throw new AppError('UNAUTHENTICATED', 'Sign in to continue.');
   return profile;
 });
+
+export const { POST, PUT, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ GET });

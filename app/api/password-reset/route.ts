@@ -1,4 +1,5 @@
 // POST /api/password-reset: mail a single-use reset link; the same 202 answer whether or not the address has an account
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { RequestPasswordResetInput, RESET_REQUESTED_MESSAGE } from '@/lib/schemas/password-reset';
 import { clientAddress } from '@/lib/security/client-address';
@@ -19,3 +20,5 @@ export const POST = withRoute({ access: 'public', body: RequestPasswordResetInpu
   startPasswordResetRequest({ email: body.email });
   return Response.json({ ok: true, message: RESET_REQUESTED_MESSAGE }, { status: 202 });
 });
+
+export const { GET, PUT, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ POST });

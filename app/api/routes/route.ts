@@ -1,5 +1,6 @@
 // GET/POST /api/routes: the team's routes (search, sort, pages; ?deleted=1 the recently deleted, leads only) and creating a new one
 import { AppError } from '@/lib/api/errors';
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { can } from '@/lib/auth/permissions';
 import { CreateRouteInput, ListRoutesQuery } from '@/lib/schemas/route';
@@ -19,3 +20,5 @@ export const GET = withRoute({ access: 'team', permission: 'route.read', query: 
 export const POST = withRoute({ access: 'team', permission: 'route.edit', body: CreateRouteInput }, async ({ team, user, body }) =>
   Response.json(await createRoute({ teamId: team.id, userId: user.id, input: body }), { status: 201 }),
 );
+
+export const { PUT, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ GET, POST });

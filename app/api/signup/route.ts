@@ -1,4 +1,5 @@
 // POST /api/signup: create an account and a new team led by it
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { SignUpInput } from '@/lib/schemas/auth';
 import { clientAddress } from '@/lib/security/client-address';
@@ -12,3 +13,5 @@ export const POST = withRoute({ access: 'public', body: SignUpInput }, async ({ 
   const result = await signUp(body);
   return Response.json(result, { status: 201 });
 });
+
+export const { GET, PUT, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ POST });

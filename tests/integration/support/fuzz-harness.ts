@@ -7,7 +7,7 @@ import { addMember, makeTeamWithLead } from './fixtures';
 import { edgeExamples, fuzzRequests, type FuzzRequest } from './fuzz-bodies';
 import { makeParams, missingParamMakers, SEED_BODIES, type FuzzWorld } from './fuzz-targets';
 import { callRoute } from './http';
-import { importRoute, listRouteFiles, type HTTP_METHODS } from './route-files';
+import { importRoute, listRouteFiles, servedMethods, type HTTP_METHODS } from './route-files';
 import { setupTestDb, teardownTestDb, TEST_SECRET } from './test-db';
 
 // 2,000 bodies per handler is the bar; FUZZ_RUNS lowers it for a quick local loop only.
@@ -16,7 +16,10 @@ const BODY_METHODS = ['POST', 'PUT', 'PATCH'] as const;
 // next-auth's own endpoints are not withRoute handlers; the e2e sign-in tests cover them.
 const NOT_OURS = new Set(['auth/[...nextauth]']);
 // Handlers that take no JSON body (none at all, or a raw upload): fuzzed all the same, but with no seed to mutate.
-const NO_JSON_BODY = new Set(['POST me/sign-out-everywhere', 'POST routes/[routeId]/undelete', 'POST species/imports']);
+// The catch-all answers 404 to any body.
+const NO_JSON_BODY = new Set([
+  'POST me/sign-out-everywhere', 'POST routes/[routeId]/undelete', 'POST species/imports', 'POST [...path]', 'PUT [...path]', 'PATCH [...path]',
+]);
 
 type Handler = Parameters<typeof callRoute>[0];
 interface Target {
@@ -32,7 +35,8 @@ async function jsonTargets(): Promise<Target[]> {
   for (const route of listRouteFiles()) {
     if (NOT_OURS.has(route)) continue;
     const mod = await importRoute<Record<string, Handler>>(route);
-    for (const method of BODY_METHODS) if (typeof mod[method] === 'function') targets.push({ key: `${method} ${route}`, route, method, handler: mod[method] });
+    const served = servedMethods(mod);
+    for (const method of BODY_METHODS) if (served.includes(method)) targets.push({ key: `${method} ${route}`, route, method, handler: mod[method]! });
   }
   return targets;
 }

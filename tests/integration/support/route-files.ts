@@ -1,7 +1,13 @@
 import fs from 'node:fs';
 import path from 'node:path';
+import { isRefusedMethod } from '@/lib/api/method-not-allowed';
 
 export const HTTP_METHODS = ['GET', 'POST', 'PUT', 'PATCH', 'DELETE'] as const;
+
+/** The methods a route module serves itself; every file also exports refuseOtherMethods' 405 answers for the rest. */
+export function servedMethods(mod: Record<string, unknown>): Array<(typeof HTTP_METHODS)[number]> {
+  return HTTP_METHODS.filter((method) => typeof mod[method] === 'function' && !isRefusedMethod(mod[method]));
+}
 
 // Every app/api/**/route.ts, as a path relative to app/api (e.g. "teams/[teamId]/members").
 export function listRouteFiles(root = path.resolve(__dirname, '../../../app/api')): string[] {

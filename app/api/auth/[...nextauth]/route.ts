@@ -1,6 +1,7 @@
-// GET/POST /api/auth/*: next-auth's own endpoints; credential sign-ins are rate limited per e-mail and IP first
+// GET/POST /api/auth/*: next-auth's own endpoints; credential sign-ins pass the rate limits of lib/auth/sign-in-guard.ts first
 import NextAuth from 'next-auth';
 import type { NextRequest } from 'next/server';
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { authOptions } from '@/lib/auth/options';
 import { guardCredentialSignIn } from '@/lib/auth/sign-in-guard';
 
@@ -20,3 +21,5 @@ export async function GET(req: NextRequest, ctx: Ctx) {
 export async function POST(req: NextRequest, ctx: Ctx) {
   return guardCredentialSignIn(req, () => handle(req, ctx));
 }
+
+export const { PUT, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ GET, POST });

@@ -1,4 +1,5 @@
 // PUT /api/me/active-team: switch the team the user works in
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { ActiveTeamInput } from '@/lib/schemas/preferences';
 import { setActiveTeam } from '@/lib/services/users/set-active-team';
@@ -8,3 +9,5 @@ export const runtime = 'nodejs';
 export const PUT = withRoute({ access: 'user', body: ActiveTeamInput }, async ({ user, body }) =>
   setActiveTeam({ userId: user.id, teamId: body.teamId }),
 );
+
+export const { GET, POST, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ PUT });

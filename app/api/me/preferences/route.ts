@@ -1,4 +1,5 @@
 // PATCH /api/me/preferences: the user's display units and e-mail mutes (any subset)
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { PreferencesPatch } from '@/lib/schemas/preferences';
 import { updatePreferences } from '@/lib/services/users/update-preferences';
@@ -8,3 +9,5 @@ export const runtime = 'nodejs';
 export const PATCH = withRoute({ access: 'user', body: PreferencesPatch }, async ({ user, body }) =>
   updatePreferences({ userId: user.id, preferences: body }),
 );
+
+export const { GET, POST, PUT, DELETE, OPTIONS } = refuseOtherMethods({ PATCH });

@@ -1,4 +1,5 @@
 // GET/PUT/DELETE /api/routes/[routeId]: read a route, save the whole document against its version (409 when stale), or delete it (soft)
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { SaveRouteInput } from '@/lib/schemas/route';
 import { deleteRoute } from '@/lib/services/routes/delete-route';
@@ -27,3 +28,5 @@ export const PUT = withRoute(
 export const DELETE = withRoute({ access: 'team', teamFrom: teamOfRoute, permission: 'route.delete' }, async ({ team, user, params }) =>
   deleteRoute({ teamId: team.id, userId: user.id, routeId: Number(params.routeId) }),
 );
+
+export const { POST, PATCH, OPTIONS } = refuseOtherMethods({ GET, PUT, DELETE });

@@ -1,5 +1,6 @@
 // GET/POST /api/species/imports: the team's species CSV imports; upload one (raw CSV body, ≤ 2 MB, ≤ 5,000 rows) for a preview
 import { z } from 'zod';
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { readCsvUpload } from '@/lib/services/species/read-csv-upload';
 import { listSpeciesImports, uploadSpeciesImport } from '@/lib/services/species/upload-species-import';
@@ -15,3 +16,5 @@ export const POST = withRoute({ access: 'team', permission: 'species.edit', quer
   const { bytes, text } = await readCsvUpload(req);
   return Response.json(await uploadSpeciesImport({ teamId: team.id, userId: user.id, fileName: query.fileName, bytes, text }), { status: 201 });
 });
+
+export const { PUT, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ GET, POST });

@@ -1,4 +1,5 @@
 // GET/PUT/DELETE /api/fits/data-sets/[dataSetId]: one data set; edit its rows and reaction; delete it while no fit is saved from it
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { DataSetUpdate } from '@/lib/schemas/fit-data';
 import { getDataSet } from '@/lib/services/fits/read-data-set';
@@ -18,3 +19,5 @@ export const PUT = withRoute({ access: 'team', permission: 'fit.edit', body: Dat
 export const DELETE = withRoute({ access: 'team', permission: 'fit.edit' }, async ({ team, user, params }) =>
   deleteDataSet({ teamId: team.id, userId: user.id, dataSetId: idOf(params) }),
 );
+
+export const { POST, PATCH, OPTIONS } = refuseOtherMethods({ GET, PUT, DELETE });

@@ -1,4 +1,5 @@
 // GET /api/routes/[routeId]/export: the route as JSON in the CLI's route request format, with a `stepwell` header for the board
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { exportRoute } from '@/lib/services/routes/export-route';
 import { teamOfRoute } from '@/lib/services/routes/route-team';
@@ -12,3 +13,5 @@ export const GET = withRoute({ access: 'team', teamFrom: teamOfRoute, permission
     headers: { 'content-type': 'application/json; charset=utf-8', 'content-disposition': `attachment; filename="${filename}"` },
   });
 });
+
+export const { POST, PUT, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ GET });

@@ -1,4 +1,5 @@
 // GET/POST /api/routes/[routeId]/flags: the route's open flags per step, or flag a step as weak
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { CreateFlagInput, ListFlagsQuery } from '@/lib/schemas/flag';
 import { createFlag } from '@/lib/services/flags/create-flag';
@@ -15,3 +16,5 @@ export const GET = withRoute({ access: 'team', teamFrom: teamOfRoute, permission
 export const POST = withRoute({ access: 'team', teamFrom: teamOfRoute, permission: 'route.flag', body: CreateFlagInput }, async ({ team, user, params, body }) =>
   Response.json(await createFlag({ teamId: team.id, routeId: Number(params.routeId), userId: user.id, input: body }), { status: 201 }),
 );
+
+export const { PUT, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ GET, POST });

@@ -1,4 +1,5 @@
 // GET/POST /api/routes/[routeId]/transitions: the route's review history, and moving it to another review status (then notifying)
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { ListTransitionsQuery, TransitionInput } from '@/lib/schemas/workflow';
 import { teamOfRoute } from '@/lib/services/routes/route-team';
@@ -20,3 +21,5 @@ export const POST = withRoute({ access: 'team', teamFrom: teamOfRoute, permissio
   await notifyTransition(outcome);
   return outcome;
 });
+
+export const { PUT, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ GET, POST });

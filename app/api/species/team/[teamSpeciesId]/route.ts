@@ -1,4 +1,5 @@
 // GET/PUT /api/species/team/[teamSpeciesId]: one team species as entered; save an edit (the answer lists routes whose ΔG changed)
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { TeamSpeciesUpdate } from '@/lib/schemas/species';
 import { getTeamSpecies } from '@/lib/services/species/get-team-species';
@@ -14,3 +15,5 @@ export const GET = withRoute({ access: 'team', permission: 'team.read' }, async 
 export const PUT = withRoute({ access: 'team', permission: 'species.edit', body: TeamSpeciesUpdate }, async ({ team, user, params, body }) =>
   updateTeamSpecies({ teamId: team.id, userId: user.id, id: Number(params.teamSpeciesId) || 0, version: body.version, input: body.species }),
 );
+
+export const { POST, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ GET, PUT });

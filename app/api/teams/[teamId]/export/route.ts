@@ -1,4 +1,5 @@
 // GET /api/teams/[teamId]/export: a lead downloads the whole team (routes with steps and links, revisions, review, decisions, drivers, species, fits) as one JSON file
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { exportTeam } from '@/lib/services/team-transfer/export-team';
 
@@ -16,3 +17,5 @@ export const GET = withRoute({ access: 'team', teamFrom: 'path', permission: 'te
     },
   });
 });
+
+export const { POST, PUT, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ GET });

@@ -1,4 +1,5 @@
 // POST /api/teams/[teamId]/import: a lead loads a team file into an empty team, all in one transaction (409 when the team has data)
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { TeamExportFile } from '@/lib/schemas/team-transfer';
 import { importTeam } from '@/lib/services/team-transfer/import-team';
@@ -15,3 +16,5 @@ export const POST = withRoute(
     return Response.json(result, { status: 201 });
   },
 );
+
+export const { GET, PUT, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ POST });

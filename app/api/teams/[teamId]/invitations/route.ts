@@ -1,4 +1,5 @@
 // GET/POST /api/teams/[teamId]/invitations: a lead lists invitations or invites an address with a role
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { InviteInput } from '@/lib/schemas/team';
 import { enforceLimits, inviteLimiter } from '@/lib/security/rate-limit';
@@ -20,3 +21,5 @@ export const POST = withRoute(
     return Response.json(result, { status: 201 });
   },
 );
+
+export const { PUT, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ GET, POST });

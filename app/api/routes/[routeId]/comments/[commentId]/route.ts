@@ -1,4 +1,5 @@
 // PATCH/DELETE /api/routes/[routeId]/comments/[commentId]: edit or delete one's own comment
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { EditCommentInput } from '@/lib/schemas/comment';
 import { deleteComment } from '@/lib/services/comments/delete-comment';
@@ -14,3 +15,5 @@ export const PATCH = withRoute({ access: 'team', teamFrom: teamOfRoute, permissi
 export const DELETE = withRoute({ access: 'team', teamFrom: teamOfRoute, permission: 'route.comment' }, async ({ team, user, params }) =>
   deleteComment({ teamId: team.id, routeId: Number(params.routeId), commentId: Number(params.commentId), userId: user.id }),
 );
+
+export const { GET, POST, PUT, OPTIONS } = refuseOtherMethods({ PATCH, DELETE });

@@ -1,4 +1,5 @@
 // GET /api/species/imports/[importId]/file: the original file exactly as uploaded, with its SHA-256
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { readImportFile } from '@/lib/services/species/upload-species-import';
 
@@ -15,3 +16,5 @@ export const GET = withRoute({ access: 'team', permission: 'team.read' }, async 
     },
   });
 });
+
+export const { POST, PUT, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ GET });

@@ -1,4 +1,5 @@
 // PATCH/DELETE /api/teams/[teamId]/members/[userId]: a lead changes a member's role or removes them
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { AppError } from '@/lib/api/errors';
 import { ChangeRoleInput } from '@/lib/schemas/team';
@@ -21,3 +22,5 @@ export const PATCH = withRoute(
 export const DELETE = withRoute({ access: 'team', teamFrom: 'path', permission: 'team.manage' }, async ({ team, user, params }) =>
   removeMember({ teamId: team.id, actorId: user.id, userId: memberId(params) }),
 );
+
+export const { GET, POST, PUT, OPTIONS } = refuseOtherMethods({ PATCH, DELETE });

@@ -1,4 +1,5 @@
 // POST /api/routes/[routeId]/revisions/[revisionId]/restore: save an old revision as the current document (409 when stale)
+import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { RestoreRevisionInput } from '@/lib/schemas/revision';
 import { positiveId } from '@/lib/services/revisions/path-id';
@@ -17,3 +18,5 @@ export const POST = withRoute(
     return saved;
   },
 );
+
+export const { GET, PUT, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ POST });
