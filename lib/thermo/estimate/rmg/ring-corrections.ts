@@ -1,6 +1,7 @@
 // Ring terms: one ring-tree correction per isolated ring; for fused, bridged or spiro clusters the
 // polycyclic tree, with the bicyclic heuristic for generic nodes and the ring-pair heuristic for
 // clusters the tree does not hold (the method described in rmg-groups/README.md, section 6).
+import { ThermoError } from '../../errors';
 import type { AtomTypeTable } from './atom-types';
 import type { Contribution } from './contribution';
 import type { GroupTree } from './group-tree';
@@ -40,7 +41,7 @@ export function ringClusters(rings: readonly number[][]): number[][][] {
 
 function lookupOrThrow(tree: Tree, graph: MolGraph, atoms: readonly number[]) {
   const found = lookupRing(tree, graph, atoms);
-  if (!found) throw new Error(`no ${tree.name} entry for a ring of ${atoms.length} atoms`);
+  if (!found) throw new ThermoError('UNSUPPORTED_STRUCTURE', `No ${tree.name} entry matches a ring of ${atoms.length} atoms.`, { field: 'smiles' });
   return found;
 }
 
