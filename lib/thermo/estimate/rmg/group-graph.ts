@@ -2,6 +2,7 @@
 // specific cases), allowed u/p/c, optional ring membership, and bond-order bit masks.
 import type { AtomTypeTable } from './atom-types';
 import type { BondCode, GraphGroupJson } from './group-json';
+import { cycleLengths, MAX_GROUP_CYCLE } from './cycle-lengths';
 import type { BondOrder } from './mol-graph';
 
 export interface GroupAtom {
@@ -19,6 +20,8 @@ export interface GroupAtom {
 export interface NeighbourNeeds {
   byElement: [string, number][];
   heavy: number;
+  /** lengths of the group's simple cycles through this atom */
+  cycles: number[];
 }
 
 export interface GroupGraph {
@@ -60,6 +63,11 @@ export function compileGroup(json: GraphGroupJson, table: AtomTypeTable): GroupG
   }
   const labels = new Map<string, number>();
   const needs = new Map<number, NeighbourNeeds>();
+  const groupCycles = cycleLengths(
+    adj.map((ns) => ns.map((e) => e.to)),
+    atoms.map((_, i) => i),
+    MAX_GROUP_CYCLE,
+  );
   atoms.forEach((a, i) => {
     if (!a.label) return;
     labels.set(a.label, i);
@@ -73,7 +81,7 @@ export function compileGroup(json: GraphGroupJson, table: AtomTypeTable): GroupG
         if (e !== 'H') heavy += 1;
       } else if (!elements.has('H')) heavy += 1;
     }
-    needs.set(i, { byElement: [...byElement], heavy });
+    needs.set(i, { byElement: [...byElement], heavy, cycles: groupCycles ? [...groupCycles[i]!] : [] });
   });
   return { atoms, adj, labels, needs };
 }

@@ -111,6 +111,10 @@ function neighboursSuffice(group: GroupGraph, g: number, mol: MolGraph, m: numbe
   const have = mol.neighbourElements(m);
   if ((have.get('heavy') ?? 0) < needs.heavy) return false;
   for (const [e, n] of needs.byElement) if ((have.get(e) ?? 0) < n) return false;
+  if (needs.cycles.length > 0) {
+    const through = mol.cycleLengthsThrough(m);
+    if (through && !needs.cycles.every((k) => through.has(k))) return false;
+  }
   return true;
 }
 

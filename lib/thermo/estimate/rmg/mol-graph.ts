@@ -1,6 +1,7 @@
 // Molecule graph in RMG's representation: every H an atom, bond orders 1, 2, 3 and 1.5 for the
 // benzene (B) bonds of RMG-aromatic rings, lone pairs from the electron count, RMG atom types.
 import type { AtomTypeTable, BondCounts } from './atom-types';
+import { cycleLengths, MAX_GROUP_CYCLE } from './cycle-lengths';
 import { smallestRings } from './sssr';
 
 export type BondOrder = 1 | 1.5 | 2 | 3;
@@ -30,6 +31,7 @@ export class MolGraph {
   rings: number[][] = [];
   inRing: boolean[] = [];
   private elementCounts: Map<string, number>[] | undefined;
+  private cycles: (Set<number>[] | null) | undefined;
 
   addAtom(element: string, charge = 0, radicals = 0): number {
     this.atoms.push({ element, charge, radicals, lonePairs: 0, type: undefined });
@@ -38,6 +40,8 @@ export class MolGraph {
   }
 
   addBond(a: number, b: number, order: BondOrder): void {
+    this.cycles = undefined;
+    this.elementCounts = undefined;
     this.neighbours[a]!.push(b);
     this.neighbours[b]!.push(a);
     this.orders.set(key(a, b), order);
@@ -77,6 +81,15 @@ export class MolGraph {
       });
     }
     return this.elementCounts[i]!;
+  }
+
+  /** Simple-cycle lengths (≤ 12) through atom i; undefined when too many cycles to list. */
+  cycleLengthsThrough(i: number): ReadonlySet<number> | undefined {
+    if (this.cycles === undefined) {
+      const ringAtoms = this.inRing.flatMap((r, k) => (r ? [k] : []));
+      this.cycles = cycleLengths(this.neighbours, ringAtoms, MAX_GROUP_CYCLE) ?? null;
+    }
+    return this.cycles === null ? undefined : this.cycles[i];
   }
 
   bondCounts(i: number): BondCounts {
@@ -123,6 +136,7 @@ export class MolGraph {
       for (const b of ns) if (a < b && this.isHeavy(a) && this.isHeavy(b)) edges.push([a, b]);
     });
     this.rings = smallestRings(this.size, edges);
+    this.cycles = undefined;
     this.inRing = this.atoms.map(() => false);
     for (const ring of this.rings) for (const a of ring) this.inRing[a] = true;
   }

@@ -1,6 +1,7 @@
 // Smallest set of smallest rings (a minimum cycle basis) of an undirected graph, by Horton's
 // candidate cycles (shortest path from a vertex to both ends of an edge) and GF(2) elimination.
-// Rings come back as ordered cycles, smallest first.
+// Rings come back as ordered cycles, smallest first, each from its lowest-numbered atom (the ring
+// look-up breaks ties between equally deep matches by atom order, as RMG does).
 
 interface Candidate {
   cycle: number[];
@@ -42,6 +43,14 @@ function components(adj: Map<number, Set<number>>): number {
   return count;
 }
 
+/** The cycle from its lowest-numbered atom, towards the lower-numbered of that atom's two ring neighbours. */
+function canonicalCycle(cycle: number[]): number[] {
+  const n = cycle.length;
+  const k = cycle.indexOf(Math.min(...cycle));
+  const forward = cycle[(k + 1) % n]! < cycle[(k - 1 + n) % n]!;
+  return cycle.map((_, i) => cycle[forward ? (k + i) % n : (k - i + n) % n]!);
+}
+
 export function smallestRings(vertexCount: number, edges: readonly (readonly [number, number])[]): number[][] {
   const adj = new Map<number, Set<number>>();
   for (const [a, b] of edges) {
@@ -69,43 +78,54 @@ export function smallestRings(vertexCount: number, edges: readonly (readonly [nu
   const candidates: Candidate[] = [];
   const seenCycles = new Set<string>();
   const vertices = [...adj.keys()].sort((x, y) => x - y);
+  const sortedAdj = new Map(vertices.map((v) => [v, [...adj.get(v)!].sort((x, y) => x - y)]));
+  const parent = new Int32Array(vertexCount);
+  const seen = new Int32Array(vertexCount).fill(-1);
+  const onX = new Int32Array(vertexCount).fill(-1);
   for (const root of vertices) {
     // BFS tree from root: parent pointers give one shortest path per vertex
-    const parent = new Map<number, number>([[root, -1]]);
-    const depth = new Map<number, number>([[root, 0]]);
+    parent[root] = -1;
+    seen[root] = root;
     const queue = [root];
     for (let qi = 0; qi < queue.length; qi += 1) {
       const v = queue[qi]!;
-      for (const w of [...adj.get(v)!].sort((x, y) => x - y)) {
-        if (!parent.has(w)) {
-          parent.set(w, v);
-          depth.set(w, depth.get(v)! + 1);
-          queue.push(w);
-        }
+      for (const w of sortedAdj.get(v)!) {
+        if (seen[w] === root) continue;
+        seen[w] = root;
+        parent[w] = v;
+        queue.push(w);
       }
     }
-    const pathTo = (v: number): number[] => {
-      const p: number[] = [];
-      for (let x = v; x !== -1; x = parent.get(x)!) p.push(x);
-      return p; // v ... root
-    };
-    for (const [x, y] of coreEdges) {
-      if (parent.get(x) === y || parent.get(y) === x) continue;
-      const px = pathTo(x);
-      const py = pathTo(y);
-      const onX = new Set(px);
-      if (py.some((v) => v !== root && onX.has(v))) continue;
-      const cycle = [...px.reverse(), ...py.slice(0, -1)].reverse();
-      // cycle: root ... y, x ... (back to root) — as an ordered ring
-      const canonical = [...cycle].sort((a, b) => a - b).join(',');
-      if (seenCycles.has(canonical)) continue;
-      seenCycles.add(canonical);
-      const bits = new Uint32Array(words);
-      for (let i = 0; i < cycle.length; i += 1) {
-        const e = edgeId(cycle[i]!, cycle[(i + 1) % cycle.length]!);
-        bits[e >> 5]! |= 1 << (e & 31);
+    for (let e = 0; e < coreEdges.length; e += 1) {
+      const [x, y] = coreEdges[e]!;
+      if (parent[x] === y || parent[y] === x) continue;
+      // the two tree paths must meet only at the root
+      for (let v = x; v !== -1; v = parent[v]!) onX[v] = e + root * coreEdges.length;
+      let disjoint = true;
+      for (let v = y; v !== root; v = parent[v]!) {
+        if (onX[v] === e + root * coreEdges.length) {
+          disjoint = false;
+          break;
+        }
       }
-      candidates.push({ cycle, bits });
+      if (!disjoint) continue;
+      const bits = new Uint32Array(words);
+      const mark = (a: number, b: number): void => {
+        const id = edgeId(a, b);
+        bits[id >> 5]! |= 1 << (id & 31);
+      };
+      mark(x, y);
+      for (let v = x; parent[v] !== -1; v = parent[v]!) mark(v, parent[v]!);
+      for (let v = y; parent[v] !== -1; v = parent[v]!) mark(v, parent[v]!);
+      const key = bits.join(',');
+      if (seenCycles.has(key)) continue;
+      seenCycles.add(key);
+      // ordered ring: root ... x, y ... (back to root)
+      const px: number[] = [];
+      for (let v = x; v !== -1; v = parent[v]!) px.push(v);
+      const py: number[] = [];
+      for (let v = y; v !== root; v = parent[v]!) py.push(v);
+      candidates.push({ cycle: [...px.reverse(), ...py], bits });
     }
   }
   candidates.sort((a, b) => a.cycle.length - b.cycle.length);
@@ -125,7 +145,7 @@ export function smallestRings(vertexCount: number, edges: readonly (readonly [nu
     }
     if (pivot < 0) continue;
     basis.push({ pivot, bits: v });
-    rings.push(cand.cycle);
+    rings.push(canonicalCycle(cand.cycle));
   }
   return rings;
 }
