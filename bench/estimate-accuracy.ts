@@ -6,6 +6,7 @@
 import Papa from 'papaparse';
 import { readDataText } from '../lib/thermo/data/data-files';
 import { estimateGas, type GasEstimate, loadRmgDatabase } from '../lib/thermo/estimate/gas-estimate';
+import { wilhoitCp } from '../lib/thermo/estimate/wilhoit';
 import { loadChem } from '../lib/thermo/structure/chem';
 
 interface Row {
@@ -19,6 +20,7 @@ interface Row {
   S_source: string;
   dfG_kJ_per_mol: string;
   dfG_source: string;
+  Cp298_J_per_mol_K: string;
 }
 
 interface Outcome {
@@ -107,10 +109,16 @@ async function main(): Promise<void> {
   const dH = quantity((o) => ({ ref: num(o.row.dfH_kJ_per_mol), est: o.est!.dfH_kJ, sigma: o.est!.sigma_dfH_kJ }));
   const S = quantity((o) => ({ ref: num(o.row.S_J_per_mol_K), est: o.est!.S_J_per_K, sigma: o.est!.sigma_S_J_per_K }));
   const dG = quantity((o) => ({ ref: num(o.row.dfG_kJ_per_mol), est: o.est!.dfG_kJ, sigma: o.est!.sigma_dfG_kJ }));
+  // Cp has no σ of its own; 5 % of Cp stands in so the 2σ column reads "within 10 %"
+  const cp = quantity((o) => {
+    const value = wilhoitCp(o.est!.wilhoit, 298.15);
+    return { ref: num(o.row.Cp298_J_per_mol_K), est: value, sigma: 0.05 * value };
+  });
   console.log('\nall estimated rows');
   stats('ΔfH° (kJ/mol)', dH);
   stats('S° (J/(mol K))', S);
   stats('ΔfG° (kJ/mol)', dG);
+  stats('Cp(298.15) (J/(mol K); "2σ" = 10 %)', cp);
   const normal = (p: { o: Outcome }): boolean => p.o.est!.confidence === 'normal';
   console.log('\nconfidence "normal"');
   stats('ΔfH° (kJ/mol)', dH.filter(normal));
