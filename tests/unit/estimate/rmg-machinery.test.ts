@@ -152,6 +152,25 @@ describe('estimateGas output', () => {
     expect(benzoic.sigma_dfH_kJ).toBeGreaterThan(30);
     expect(estimateGas(chem, 'CCCC', db).confidence).toBe('normal');
   });
+  it('names each weak class the rmg-groups README lists (and the measured ones)', () => {
+    const kinds = (smiles: string) => estimateGas(chem, smiles, db).weakKinds;
+    expect(kinds('O=[N+]([O-])c1ccccc1')).toEqual(expect.arrayContaining(['nitroarene', 'nitro']));
+    expect(kinds('C=C=C')).toContain('cumulene');
+    expect(kinds('C1CCNCC1')).toContain('copied-ring');
+    expect(kinds('O=C1CCCCCN1')).toContain('generic-ring');
+    expect(kinds('C1CC2CCC1C=C2')).toContain('ring-heuristic');
+    expect(kinds('CCCO')).toEqual(['alcohol']);
+  });
+  it('widen-only classes keep confidence "normal" but raise σ', () => {
+    const thf = estimateGas(chem, 'C1CCOC1', db);
+    const cyclopentane = estimateGas(chem, 'C1CCCC1', db);
+    expect(thf.confidence).toBe('normal');
+    expect(thf.weakKinds).toEqual(['o-s-ring']);
+    expect(thf.sigma_S_J_per_K).toBeGreaterThan(3 * cyclopentane.sigma_S_J_per_K);
+  });
+  it('explicit [H] atoms in the SMILES give the same estimate', () => {
+    expect(estimateGas(chem, '[H]C([H])([H])C([H])([H])[H]', db).dfH_kJ).toBeCloseTo(estimateGas(chem, 'CC', db).dfH_kJ, 9);
+  });
   it('chiral molecules gain R ln 2 and a stereo note', () => {
     const e = estimateGas(chem, 'CCC(C)O', db);
     expect(e.opticalIsomers).toBe(2);
