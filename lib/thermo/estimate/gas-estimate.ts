@@ -11,7 +11,7 @@ import { buildMolecule } from './rmg/rdkit-graph';
 import { loadRmgDatabase, type RmgDatabase } from './rmg/rmg-database';
 import { sigmaFor } from './rmg/sigma-model';
 import { CP_TEMPERATURES_K } from './rmg/thermo-values';
-import { type WeakKind, weakReasons, WIDEN_ONLY } from './rmg/weak-classes';
+import { PER_OCCURRENCE, type WeakKind, weakReasons, WIDEN_ONLY } from './rmg/weak-classes';
 import { molecularSymmetry } from './symmetry';
 import { fitWilhoit, type WilhoitCp, wilhoitStateAt } from './wilhoit';
 
@@ -103,10 +103,7 @@ export function estimateGas(chem: Chem, smiles: string, db: RmgDatabase): GasEst
   const wilhoit = fitWilhoit(CP_TEMPERATURES_K, sum.values.Cp, Cp0, CpInf, 1000);
 
   const reasons = weakReasons(db.trees, mol, sum.contributions, built.rdkitAromatic);
-  const sigma = sigmaFor(
-    reasons.map((r) => r.kind),
-    built.heavyCount,
-  );
+  const sigma = sigmaFor(reasons, built.heavyCount);
   const groups = new Map<string, EstimateGroup>();
   for (const c of sum.contributions) {
     const key = `${c.file}|${c.label}|${c.sign}`;
@@ -129,7 +126,7 @@ export function estimateGas(chem: Chem, smiles: string, db: RmgDatabase): GasEst
     sigma_S_J_per_K: sigma.S_J_per_K,
     sigma_dfG_kJ: sigma.dG_kJ,
     confidence: reasons.some((r) => !WIDEN_ONLY.has(r.kind)) ? 'low' : 'normal',
-    weakReasons: reasons.map((r) => r.text),
+    weakReasons: reasons.map((r) => (r.count > 1 && PER_OCCURRENCE.has(r.kind) ? `${r.text} (${r.count} occurrences)` : r.text)),
     weakKinds: reasons.map((r) => r.kind),
     groups: [...groups.values()],
     ...(/[@/\\]/.test(smiles) || sym.opticalIsomers === 2 ? { stereoNote: 'Stereoisomers are treated alike: the groups do not see configuration; one configuration sets σ, and a chiral molecule is taken as the racemate (+R ln 2).' } : {}),

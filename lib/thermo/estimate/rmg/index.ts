@@ -17,4 +17,4 @@ export { averagedValues, lookupRing, type RingLookup } from './ring-lookup';
 export { SIGMA_MODEL, sigmaFor } from './sigma-model';
 export { smallestRings } from './sssr';
 export { addThermo, averageThermo, CP_TEMPERATURES_K, type ThermoValues, zeroThermo } from './thermo-values';
-export { type WeakKind, type WeakReason, weakReasons, WIDEN_ONLY } from './weak-classes';
+export { PER_OCCURRENCE, type WeakKind, type WeakReason, weakReasons, WIDEN_ONLY } from './weak-classes';

@@ -3,7 +3,7 @@
 // bench/estimate-accuracy.ts. σ = sqrt(base² + n·perHeavyAtom² + Σ weak²) (errors of n groups add like a random walk), ΔfG combining
 // ΔfH and T·S as independent.
 import { T_REF } from '../../constants';
-import type { WeakKind } from './weak-classes';
+import { PER_OCCURRENCE, type WeakKind } from './weak-classes';
 
 interface Widths {
   dH_kJ: number;
@@ -35,13 +35,15 @@ export const SIGMA_MODEL: { base: Widths; perHeavyAtom: Widths; weak: Record<Wea
   calibration: 'organics species.csv gas rows, C2–C20, 245 estimated; 90th-percentile |error| / 2 per class',
 };
 
-export function sigmaFor(kinds: readonly WeakKind[], heavyAtoms: number): { dH_kJ: number; S_J_per_K: number; dG_kJ: number } {
+/** σ for a molecule; a per-occurrence class (one offset per N-heteroaromatic ring, ...) counts linearly. */
+export function sigmaFor(reasons: readonly { kind: WeakKind; count: number }[], heavyAtoms: number): { dH_kJ: number; S_J_per_K: number; dG_kJ: number } {
   const m = SIGMA_MODEL;
   let h2 = m.base.dH_kJ ** 2 + heavyAtoms * m.perHeavyAtom.dH_kJ ** 2;
   let s2 = m.base.S_J_per_K ** 2 + heavyAtoms * m.perHeavyAtom.S_J_per_K ** 2;
-  for (const k of new Set(kinds)) {
-    h2 += m.weak[k].dH_kJ ** 2;
-    s2 += m.weak[k].S_J_per_K ** 2;
+  for (const r of reasons) {
+    const times = PER_OCCURRENCE.has(r.kind) ? r.count : 1;
+    h2 += (times * m.weak[r.kind].dH_kJ) ** 2;
+    s2 += (times * m.weak[r.kind].S_J_per_K) ** 2;
   }
   const dH = Math.sqrt(h2);
   const S = Math.sqrt(s2);

@@ -21,9 +21,14 @@ export type WeakKind =
 /** Kinds that only widen σ (a known, moderate offset); the others also mark the estimate "low". */
 export const WIDEN_ONLY: ReadonlySet<WeakKind> = new Set(['o-s-ring', 'alcohol', 'nitro']);
 
+/** Kinds whose error is a systematic offset per occurrence: σ grows linearly with the count. */
+export const PER_OCCURRENCE: ReadonlySet<WeakKind> = new Set(['n-heteroaromatic', 'conjugated-carbonyl-oxygen']);
+
 export interface WeakReason {
   kind: WeakKind;
   text: string;
+  /** occurrences in the molecule (N-heteroaromatic rings, old carbonyl groups, ...) */
+  count: number;
 }
 
 /** Carbonyl-carbon groups of older provenance next to the Paraskevas oxygen groups (README, item 2). */
@@ -70,14 +75,19 @@ export function weakReasons(
   const copied = copiedRingLabels(trees.ring);
   const out: WeakReason[] = [];
   const add = (kind: WeakKind, text: string): void => {
-    if (!out.some((r) => r.kind === kind)) out.push({ kind, text });
+    const known = out.find((r) => r.kind === kind);
+    if (known) known.count += 1;
+    else out.push({ kind, text, count: 1 });
   };
-  for (const key of rdkitAromatic) {
-    const [a, b] = key.split('-').map(Number) as [number, number];
-    if (mol.atom(a).element === 'N' || mol.atom(b).element === 'N') add('n-heteroaromatic', 'N-heteroaromatic ring: kept as a Kekulé structure, so no aromatic stabilisation is counted');
+  const key = (a: number, b: number): string => (a < b ? `${a}-${b}` : `${b}-${a}`);
+  for (const ring of mol.rings) {
+    const aromatic = ring.every((a, i) => rdkitAromatic.has(key(a, ring[(i + 1) % ring.length]!)));
+    if (aromatic && ring.some((a) => mol.atom(a).element === 'N')) {
+      add('n-heteroaromatic', 'N-heteroaromatic ring: kept as a Kekulé structure, so no aromatic stabilisation is counted');
+    }
   }
   for (let i = 0; i < mol.size; i += 1) {
-    if (mol.atom(i).type === 'N5dc') add('nitro', 'nitro or nitrate group: entropies of these groups fit published data loosely');
+    if (mol.atom(i).type === 'N5dc' && !out.some((r) => r.kind === 'nitro')) add('nitro', 'nitro or nitrate group: entropies of these groups fit published data loosely');
     if (mol.atom(i).type === 'N5dc' && mol.neighbours[i]!.some((n) => mol.atom(n).type === 'Cb' || mol.atom(n).type === 'Cbf')) {
       add('nitroarene', 'nitro group on an aromatic ring: no Cb–NO2 group, the generic Cb value is used');
     }
