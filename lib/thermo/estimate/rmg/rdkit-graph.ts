@@ -1,6 +1,6 @@
 // Builds the RMG molecule graph from a SMILES through RDKit: explicit H, RDKit's Kekulé bond
 // orders, SSSR, RMG aromaticity, lone pairs and atom types.
-import type { Chem } from '../../structure/chem';
+import { type Chem, MAX_HEAVY_ATOMS } from '../../structure/chem';
 import { ELEMENT_SYMBOLS } from '../../formula';
 import { ThermoError } from '../../errors';
 import type { AtomTypeTable } from './atom-types';
@@ -51,6 +51,9 @@ export function buildMolecule(chem: Chem, smiles: string, table: AtomTypeTable):
   if (json.molecules.length !== 1) throw mixture();
   const mol = json.molecules[0]!;
   const d = json.defaults;
+  if (mol.atoms.length > MAX_HEAVY_ATOMS) {
+    throw new ThermoError('INVALID_STRUCTURE', `A structure may have at most ${MAX_HEAVY_ATOMS} heavy atoms; this one has ${mol.atoms.length}.`, { field: 'smiles' });
+  }
   const graph = new MolGraph();
   const implicitH: number[] = [];
   for (const a of mol.atoms) {
