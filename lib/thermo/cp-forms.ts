@@ -3,6 +3,7 @@
 // and S° anchor them, as for the NASA-9 records. Integrals by Gauss–Legendre quadrature, split at the form's
 // own segment boundaries so each piece is smooth.
 import { R_GAS, T_REF } from './constants';
+import { wilhoitCp } from './estimate/wilhoit';
 import type { CpForm, FormCp } from './species-types';
 
 // 16-point Gauss–Legendre nodes and weights on [−1, 1] (Abramowitz & Stegun, Table 25.4).
@@ -66,11 +67,8 @@ export function cpFromForm(form: CpForm, T: number): number {
       const c = form.coeffs;
       return (c[0]! + T * (c[1]! + T * (c[2]! + T * (c[3]! + T * c[4]!)))) / 1000;
     }
-    case 'Wilhoit': {
-      const y = T / (T + form.B);
-      const [a0, a1, a2, a3] = form.a;
-      return form.cp0 + (form.cpInf - form.cp0) * y * y * (1 + (y - 1) * (a0 + y * (a1 + y * (a2 + y * a3))));
-    }
+    case 'Wilhoit':
+      return wilhoitCp(form, T);
   }
 }
 

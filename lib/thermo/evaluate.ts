@@ -16,7 +16,8 @@ import { resolveReaction } from './resolve-reaction';
 import { assertFiniteNumbers } from './sanitise';
 import type { SpeciesLookup, SpeciesOrigin } from './species-library';
 import { makeSpeciesMatcher, type CanonicalKey } from './species-matcher';
-import { reactionUncertainty, type UncertaintyResult } from './uncertainty';
+import { isStructureLookup } from './structure/structure-lookup-type';
+import { reactionUncertainty, speciesSigma, type UncertaintyResult } from './uncertainty';
 import { parseTemperature } from './units';
 import { fmt, type EngineWarning } from './warnings';
 
@@ -25,14 +26,23 @@ export type Direction = 'forward' | 'reverse' | 'at equilibrium';
 export interface SpeciesProvenance {
   key: string;
   as_written: string;
+  name: string;
+  formula: string;
   nu: number;
   source: string;
   sourceRef: string;
   flags: string[];
-  /** whose value was used: the built-in library's or the team's own */
+  /** whose value was used: the built-in library's, the team's own, or a group-contribution estimate */
   origin: SpeciesOrigin;
   /** a team value used in place of a built-in one of the same key */
   override: boolean;
+  /** canonical SMILES and InChIKey, for species known by structure */
+  smiles: string | null;
+  inchikey: string | null;
+  /** the estimation method, for estimated species (then `source` says "Estimated: …" too) */
+  method?: string;
+  /** σ(ΔfG°) at 298.15 K used for the uncertainty, kJ/mol; null when none is known */
+  sigma_dfG_kJ: number | null;
 }
 
 export interface EvaluateResponse {
@@ -131,6 +141,26 @@ function canonicalKeyFor(lookup: SpeciesLookup): CanonicalKey {
   };
 }
 
+function speciesProvenance(s: ReactionSpecies, lookup: SpeciesLookup): SpeciesProvenance {
+  const r = s.record;
+  return {
+    key: s.key,
+    as_written: s.asWritten,
+    name: r.name,
+    formula: r.formula,
+    nu: s.nu,
+    source: r.source,
+    sourceRef: r.sourceRef,
+    flags: [...r.flags],
+    origin: r.estimate ? 'estimated' : (lookup.origin?.(s.key) ?? 'library'),
+    override: lookup.shadowed?.(s.key) !== undefined,
+    smiles: r.structure?.smiles ?? null,
+    inchikey: r.structure?.inchikey ?? null,
+    ...(r.estimate ? { method: r.estimate.method } : {}),
+    sigma_dfG_kJ: speciesSigma(r).sigma_kJ,
+  };
+}
+
 export interface EvaluateOptions {
   /** the library, team species and estimator to resolve species with; always given, never a default */
   lookup: SpeciesLookup;
@@ -138,8 +168,17 @@ export interface EvaluateOptions {
   checkFinite?: boolean;
 }
 
+/** The lookup with the request's labels resolved; a lookup that does not know structures cannot take them. */
+function lookupFor(request: EvaluateRequest, lookup: SpeciesLookup): SpeciesLookup {
+  if (!request.species || Object.keys(request.species).length === 0) return lookup;
+  if (!isStructureLookup(lookup)) {
+    throw new ThermoError('INVALID_VALUE', 'species definitions need the chemistry toolkit, which this caller did not load', { field: 'species' });
+  }
+  return lookup.withLabels(request.species);
+}
+
 export function evaluateStep(request: EvaluateRequest, opts: EvaluateOptions): EvaluateResponse {
-  const lookup = opts.lookup;
+  const lookup = lookupFor(request, opts.lookup);
   const T = readTemperature(request.temperature);
   const standardPressure_bar = readStandardPressure(request.standardPressure);
   const heatCapacity = request.heatCapacity ?? true;
@@ -189,16 +228,7 @@ export function evaluateStep(request: EvaluateRequest, opts: EvaluateOptions): E
     cellPotential_V: request.electrons === undefined ? null : (-decisive * 1000) / (request.electrons * FARADAY),
     uncertainty: fitted ? fitted.uncertainty(decisive) : reactionUncertainty(species, decisive),
     equilibrium: eq.result,
-    species: species.map((s) => ({
-      key: s.key,
-      as_written: s.asWritten,
-      nu: s.nu,
-      source: s.record.source,
-      sourceRef: s.record.sourceRef,
-      flags: [...s.record.flags],
-      origin: lookup.origin?.(s.key) ?? 'library',
-      override: lookup.shadowed?.(s.key) !== undefined,
-    })),
+    species: species.map((s) => speciesProvenance(s, lookup)),
     warnings,
     ...(fitted ? { override: fitted.summary } : {}),
   };

@@ -23,7 +23,7 @@ export interface SpeciesLookup {
   resolveLabel?(label: string): string | undefined;
 }
 
-export type SpeciesOrigin = 'library' | 'team';
+export type SpeciesOrigin = 'library' | 'team' | 'estimated';
 
 interface NameCandidate {
   /** as the user would write it: "ethanol(l)", or the key itself */

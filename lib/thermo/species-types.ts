@@ -52,7 +52,7 @@ export type CpForm =
   | (Range & { form: 'Zabransky_spline'; segments: Piece[] })
   | (Range & { form: 'Zabransky_quasipolynomial'; coeffs: number[]; Tc: number })
   | (Range & { form: 'DIPPR100_Perry'; coeffs: number[] })
-  | (Range & { form: 'Wilhoit'; cp0: number; cpInf: number; B: number; a: [number, number, number, number] });
+  | (Range & { form: 'Wilhoit'; Cp0: number; CpInf: number; B: number; a: [number, number, number, number] });
 
 export interface FormCp {
   kind: 'form';

@@ -9,6 +9,7 @@ import * as fits from '@/app/api/fits/route';
 import * as fitSpecies from '@/app/api/fits/[fitId]/species/route';
 import * as routeOne from '@/app/api/routes/[routeId]/route';
 import * as routeEvaluate from '@/app/api/routes/[routeId]/evaluate/route';
+import { builtinLookup } from '@/lib/thermo/species-library';
 import { makeRoleSet, makeRoute } from './support/fixtures';
 import { makeFit, N2O4_DH_KJ, N2O4_DS_J, N2O4_EQUATION, n2o4Csv } from './support/fit-fixtures';
 import { callRoute } from './support/http';
@@ -114,9 +115,11 @@ describe('a species from a fit, and a step on a fit', () => {
     expect(row!.fitId).toBe(fit.id);
     expect(row!.provenanceKind).toBe('measured');
     expect(row!.provenanceText).toContain(`fit #${fit.id}`);
-    // NBS 1982: ΔfH°(NO2, g) = 33.18 kJ/mol, S° = 240.06 J/(mol K); the fixture's reaction values were made from them.
-    expect(row!.dfhKj).toBeCloseTo(33.18, 6);
-    expect(row!.sJPerK).toBeCloseTo(240.06, 6);
+    // The fixture's reaction values were made from NBS 1982 (ΔfH°(NO2, g) = 33.18 kJ/mol, S° = 240.06 J/(mol K)); the
+    // solve takes N2O4(g) from the team's library, where ATcT 1.112's ΔfH° replaced NBS's: ΔfH°(NO2) = (ΔrH° + ΔfH°(N2O4)) / 2.
+    const n2o4 = builtinLookup.get('N2O4(g)')!;
+    expect(row!.dfhKj).toBeCloseTo((N2O4_DH_KJ + n2o4.dfH_kJ) / 2, 6);
+    expect(row!.sJPerK).toBeCloseTo((N2O4_DS_J + n2o4.S_J_per_K) / 2, 6);
     const again = await callRoute(fitSpecies.POST, { method: 'POST', userId: w.designerId, params: { fitId: String(fit.id) }, body: { species: 'NO2(g)', name: 'Twice' } });
     expect(again.status).toBe(409);
     await row!.destroy();

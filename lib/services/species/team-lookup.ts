@@ -2,12 +2,14 @@ import 'server-only';
 import { fn, col, type Transaction } from 'sequelize';
 import { getDb } from '../../../db';
 import { builtinLookup, layeredLookup, type SpeciesLookup } from '../../thermo/species-library';
+import { loadChem } from '../../thermo/structure/chem';
+import { structureLookup, type StructureLookup } from '../../thermo/structure/structure-lookup';
 import type { SpeciesRecord } from '../../thermo/species-types';
 import { toSpeciesRecord } from './team-species-record';
 
 interface Entry {
   stamp: string;
-  lookup: SpeciesLookup;
+  lookup: StructureLookup;
   records: readonly SpeciesRecord[];
 }
 
@@ -29,12 +31,14 @@ async function stampOf(teamId: number, transaction?: Transaction): Promise<strin
 async function load(teamId: number, stamp: string, transaction?: Transaction): Promise<Entry> {
   const rows = await getDb().models.TeamSpecies.findAll({ where: { teamId }, order: [['id', 'ASC']], transaction });
   const records = rows.map((r) => toSpeciesRecord(r));
-  // Lookups are treated as immutable by the engine's memos, so every change makes a new one.
-  return { stamp, records, lookup: records.length ? layeredLookup(records) : builtinLookup };
+  // Lookups are treated as immutable by the engine's memos, so every change makes a new one. The structure view
+  // adds names from the identifier table, SMILES through RDKit and estimates for what no table has.
+  const chem = await loadChem();
+  return { stamp, records, lookup: structureLookup(records.length ? layeredLookup(records) : builtinLookup, chem) };
 }
 
-/** The species lookup for one team's requests: its own species over the built-in library. */
-export async function teamLookup(teamId: number, transaction?: Transaction): Promise<SpeciesLookup> {
+/** The species lookup for one team's requests: its own species over the built-in library, known by structure. */
+export async function teamLookup(teamId: number, transaction?: Transaction): Promise<StructureLookup> {
   return (await teamEntry(teamId, transaction)).lookup;
 }
 

@@ -1,7 +1,8 @@
 import { balanceEquation, checkBalance, describeImbalance } from '../../thermo/balance';
 import { formatEquation, parseEquation } from '../../thermo/equation';
 import { isThermoError } from '../../thermo/errors';
-import { builtinLookup } from '../../thermo/species-library';
+import { lookupParseOptions } from '../../thermo/lookup-parse-options';
+import type { SpeciesLookup } from '../../thermo/species-library';
 
 export interface BalanceCheck {
   equation: string;
@@ -11,9 +12,9 @@ export interface BalanceCheck {
 }
 
 // Parse problems are answers here, not errors: the editor shows them while the user types.
-export function checkEquationBalance(text: string): BalanceCheck | { error: { code: string; message: string; position: number | null } } {
+export function checkEquationBalance(text: string, lookup: SpeciesLookup): BalanceCheck | { error: { code: string; message: string; position: number | null } } {
   try {
-    const parsed = parseEquation(text, { resolveAlias: (n, p) => builtinLookup.resolveAlias(n, p) });
+    const parsed = parseEquation(text, lookupParseOptions(lookup));
     const report = checkBalance(parsed);
     if (report.isBalanced) return { equation: formatEquation(parsed), isBalanced: true, message: 'Balanced.', balanced: formatEquation(parsed) };
     let balanced: string | null = null;

@@ -28,7 +28,7 @@ describe('remedy memo', () => {
     expect(b1.remedies.length).toBeGreaterThan(1);
     expect(b2.remedies).toBe(b1.remedies);
     // A lookup of its own has its own memo: the same numbers computed from scratch.
-    const fresh = evaluateRoute(route('700 K'), { lookup: layeredLookup([]) });
+    const fresh = evaluateRoute(route('700 K'), { lookup: layeredLookup([], nbsLookup) });
     expect(JSON.parse(JSON.stringify(fresh))).toEqual(JSON.parse(JSON.stringify(second)));
   });
 

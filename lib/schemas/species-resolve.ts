@@ -1,0 +1,21 @@
+// One species by structure, name or key: the `species` CLI command and GET /api/species/resolve.
+import { z } from 'zod';
+import { QuantityString } from './quantity';
+
+export const SpeciesResolveSchema = z
+  .strictObject({
+    smiles: z.string().trim().min(1).max(600).optional(),
+    name: z.string().trim().min(1).max(200).optional(),
+    key: z.string().trim().min(1).max(120).optional(),
+    phase: z.enum(['g', 'l', 's', 'aq'], { message: 'A phase is g, l, s or aq.' }).optional(),
+    /** default "298.15 K" */
+    temperature: QuantityString.optional(),
+    /** force the estimator even when the library has the species, for comparison */
+    estimate: z.union([z.boolean(), z.enum(['true', 'false']).transform((v) => v === 'true')]).optional(),
+  })
+  .superRefine((v, ctx) => {
+    const given = [v.smiles, v.name, v.key].filter((x) => x !== undefined).length;
+    if (given !== 1) ctx.addIssue({ code: 'custom', path: ['smiles'], message: 'Give exactly one of smiles, name or key.' });
+    if (v.key === undefined && v.phase === undefined) ctx.addIssue({ code: 'custom', path: ['phase'], message: 'Give the phase: g, l, s or aq.' });
+  });
+export type SpeciesResolveRequest = z.infer<typeof SpeciesResolveSchema>;
