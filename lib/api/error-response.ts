@@ -23,7 +23,9 @@ export function toErrorResponse(error: unknown): Response {
   if (isRouteTooLargeError(error)) return NextResponse.json(errorBody('PAYLOAD_TOO_LARGE', error.message), { status: 413 });
   if (error instanceof ThermoError) {
     const fields = error.field ? { [error.field]: error.message } : undefined;
-    return NextResponse.json(errorBody(error.code, error.message, fields), { status: 400 });
+    // Choices for an ambiguous name, and the atoms a structure left uncovered, are for the caller to show.
+    const details = error.code === 'AMBIGUOUS_NAME' || error.code === 'UNSUPPORTED_STRUCTURE' ? error.details : undefined;
+    return NextResponse.json(errorBody(error.code, error.message, fields, details), { status: 400 });
   }
   // Two requests creating the same thing at once: the unique index refused the later one, nothing was written.
   // A PostgreSQL deadlock or serialization failure likewise rolled one transaction back whole.

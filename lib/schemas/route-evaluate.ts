@@ -1,6 +1,6 @@
 // Request schema for evaluating a multi-step route; the step fields are those of one evaluate request.
 import { z } from 'zod';
-import { EvaluateRequestSchema } from './evaluate';
+import { EvaluateRequestSchema, SpeciesDefinitions } from './evaluate';
 import { QuantityString, SpeciesName } from './quantity';
 
 export const StepId = z.string().min(1).max(64);
@@ -25,6 +25,8 @@ export const RouteEvaluateRequestSchema = z.strictObject({
   // The step count limit lives in the engine (RouteTooLargeError), so the API can answer 413.
   steps: z.array(RouteStepSchema).min(1),
   links: z.array(RouteLinkSchema).optional(),
+  /** labels for the whole route (target, links and every step); a step's own map sits over it */
+  species: SpeciesDefinitions.optional(),
   /** default −17 kJ/mol (≈ K = 10^3 at 298 K, common practice) */
   marginalThreshold_kJ: z.number().finite().max(0).optional(),
   /** ignored by the engine: the board's name, positions and notes in an exported route file (lib/schemas/route-transfer.ts) */

@@ -137,15 +137,18 @@ function parseTerm(text: string, start: number, end: number, opts: ParseEquation
   return makeTerm(coefficient, species);
 }
 
-function formatSide(terms: readonly Term[]): string {
+function formatSide(terms: readonly Term[], label: (species: SpeciesRef) => string): string {
   return terms
-    .map((t) => (t.coefficient.equals(1) ? t.species.key : `${t.coefficient.toFraction()} ${t.species.key}`))
+    .map((t) => (t.coefficient.equals(1) ? label(t.species) : `${t.coefficient.toFraction()} ${label(t.species)}`))
     .join(' + ');
 }
 
-/** Normalised text: library keys, coefficient 1 left out, fractions as "1/2", always "⇌". */
-export function formatEquation(eq: ParsedEquation): string {
-  return `${formatSide(eq.reactants)} ⇌ ${formatSide(eq.products)}`;
+/**
+ * Normalised text: library keys, coefficient 1 left out, fractions as "1/2", always "⇌". `label` writes each species
+ * another way, e.g. by name for people to read, where a key is an InChIKey.
+ */
+export function formatEquation(eq: ParsedEquation, label: (species: SpeciesRef) => string = (s) => s.key): string {
+  return `${formatSide(eq.reactants, label)} ⇌ ${formatSide(eq.products, label)}`;
 }
 
 export function reverseEquation(eq: ParsedEquation): ParsedEquation {

@@ -47,6 +47,8 @@ export interface SpeciesProvenance {
 
 export interface EvaluateResponse {
   equation: string;
+  /** the equation with species known by structure written by name ("ethyl acetate(l)") */
+  equation_display: string;
   balanced: boolean;
   temperature_K: number;
   standardPressure_bar: number;
@@ -210,6 +212,7 @@ export function evaluateStep(request: EvaluateRequest, opts: EvaluateOptions): E
 
   const response: EvaluateResponse = {
     equation: reaction.equation,
+    equation_display: reaction.equationDisplay,
     balanced: true,
     temperature_K: T,
     standardPressure_bar,

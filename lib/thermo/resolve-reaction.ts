@@ -7,12 +7,15 @@ import { formatEquation, parseEquation, type ParsedEquation } from './equation';
 import { ThermoError, isThermoError } from './errors';
 import type { ReactionSpecies } from './reaction-thermo';
 import { lookupParseOptions } from './lookup-parse-options';
+import type { SpeciesRef } from './notation';
 import type { SpeciesLookup } from './species-library';
 
 export interface ResolvedReaction {
   parsed: ParsedEquation;
   /** normalised text with library keys and ⇌ */
   equation: string;
+  /** the same, species known by structure written by name, for people */
+  equationDisplay: string;
   /** frozen: memo hits share it */
   species: readonly ReactionSpecies[];
 }
@@ -34,12 +37,21 @@ function parse(text: string, lookup: SpeciesLookup): ParsedEquation {
   }
 }
 
-function unbalancedError(parsed: ParsedEquation): ThermoError {
+/** Species by name where their key is a structure key ({InChIKey}(phase)), as people read an equation. */
+export function readableLabel(lookup: SpeciesLookup): (species: SpeciesRef) => string {
+  return (s) => {
+    if (!s.key.startsWith('{')) return s.key;
+    const r = lookup.get(s.key);
+    return r ? `${r.name}(${r.phase})` : s.key;
+  };
+}
+
+function unbalancedError(parsed: ParsedEquation, lookup: SpeciesLookup): ThermoError {
   const report = checkBalance(parsed);
   let balanced: string | null = null;
   let why = '';
   try {
-    balanced = formatEquation(balanceEquation(parsed));
+    balanced = formatEquation(balanceEquation(parsed), readableLabel(lookup));
   } catch (err) {
     if (!isThermoError(err)) throw err;
     why = err.message;
@@ -94,7 +106,7 @@ function resolveUncached(text: string, lookup: SpeciesLookup): ResolvedReaction 
       details: { unknown: items },
     });
   }
-  if (!balanced) throw unbalancedError(parsed);
+  if (!balanced) throw unbalancedError(parsed, lookup);
 
   const byKey = new Map<string, ReactionSpecies>();
   for (const { t, sign } of terms) {
@@ -104,7 +116,8 @@ function resolveUncached(text: string, lookup: SpeciesLookup): ResolvedReaction 
   }
   // Shared by every later call with this text and lookup, so nobody may change it.
   const species = Object.freeze([...byKey.values()].map((s) => Object.freeze(s)));
-  return Object.freeze({ parsed, equation, species });
+  const equationDisplay = species.some((s) => s.key.startsWith('{')) ? formatEquation(parsed, readableLabel(lookup)) : equation;
+  return Object.freeze({ parsed, equation, equationDisplay, species });
 }
 
 /** Resolves the equation against the lookup; a repeat call with the same text and lookup object is a memo hit. */

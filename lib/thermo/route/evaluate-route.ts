@@ -6,6 +6,7 @@ import { ThermoError, isThermoError } from '../errors';
 import { evaluateStep, type EvaluateResponse } from '../evaluate';
 import { assertFiniteNumbers } from '../sanitise';
 import type { SpeciesLookup } from '../species-library';
+import { isStructureLookup } from '../structure/structure-lookup-type';
 import { parseAmount } from '../units';
 import { DEFAULT_DRIVERS, prepareDrivers } from './drivers';
 import { computeExtents } from './extents';
@@ -46,9 +47,24 @@ function errorInfo(err: ThermoError, index: number): StepErrorInfo {
   return { code: err.code, message: err.message, field: err.field ? `steps.${index}.${err.field}` : null };
 }
 
+/** The lookup with a species map's labels; only a lookup that knows structures can take one. */
+function labelled(lookup: SpeciesLookup, species: EvaluateRequest['species'], field: string): SpeciesLookup {
+  if (!species || Object.keys(species).length === 0) return lookup;
+  if (!isStructureLookup(lookup)) throw new ThermoError('INVALID_VALUE', 'species definitions need the chemistry toolkit, which this caller did not load', { field });
+  return lookup.withLabels(species, field);
+}
+
 function evaluateOne(step: RouteStep, index: number, lookup: SpeciesLookup): Evaluated {
   const request = stepRequest(step);
-  const { nu } = readStoichiometry(request.equation, lookup);
+  let stepLookup: SpeciesLookup;
+  try {
+    stepLookup = labelled(lookup, request.species, 'species');
+  } catch (err) {
+    if (!isThermoError(err)) throw err;
+    return { request, nu: null, result: null, error: errorInfo(err, index) };
+  }
+  // evaluateStep applies the step's labels again itself, so remedies that re-evaluate the request see them too.
+  const { nu } = readStoichiometry(request.equation, stepLookup);
   try {
     return { request, nu, result: evaluateStep(request, { lookup, checkFinite: false }), error: null };
   } catch (err) {
@@ -127,7 +143,7 @@ function remediesFor(e: Evaluated, goal_kJ: number, ctx: CouplingContext, driver
  * smallestDrivingForce_kJ use ΔG per mol of reaction as written; largestUphill_kJ uses ξ·ΔG.
  */
 export function evaluateRoute(request: RouteEvaluateRequest, opts: RouteOptions): RouteEvaluateResponse {
-  const lookup = opts.lookup;
+  const lookup = labelled(opts.lookup, request.species, 'species');
   const { amount, threshold, yields } = readInputs(request);
   checkTarget(request.target, lookup);
   const links = request.links ?? [];

@@ -81,6 +81,32 @@ function connectedTo(graph: RouteGraph, ends: readonly { from: number }[], final
   return seen;
 }
 
+const bodyOf = (key: string): string => key.replace(/\([^()]*\)$/, '');
+
+/** Another key of `nu` with the sign wanted that is the same substance as `key` in another phase. */
+function otherPhase(nu: Stoichiometry, key: string, sign: 1 | -1, lookup: SpeciesLookup): string | null {
+  const record = lookup.get(key);
+  for (const k of nu.keys()) {
+    if (k === key || Math.sign(nuOf(nu, k)) !== sign) continue;
+    const other = lookup.get(k);
+    const same = record?.structure && other?.structure ? record.structure.inchikey === other.structure.inchikey : bodyOf(k) === bodyOf(key);
+    if (same) return k;
+  }
+  return null;
+}
+
+function phaseChangeWarning(l: RouteLink, made: string, used: string, lookup: SpeciesLookup): RouteWarning {
+  const a = lookup.get(made);
+  const b = lookup.get(used);
+  const dG = a && b ? ` (ΔG° at 298.15 K: ${(b.dfG_kJ - a.dfG_kJ).toFixed(1)} kJ/mol)` : '';
+  return {
+    code: 'LINK_PHASE',
+    message: `Link ${l.from} → ${l.to}: ${l.from} makes ${made} but ${l.to} uses ${used}. A phase change sits between them${dG}; add it as a step (${made} -> ${used}) or write one phase in both. The link is refused, so ${l.from} and the steps before it carry no extent and are not in the totals.`,
+    steps: [l.from, l.to],
+    species: [made, used],
+  };
+}
+
 /** A link carries extent only when its species is made by `from` and used by `to`. */
 function linkValidity(input: ExtentInput, keys: readonly (string | null)[], warnings: RouteWarning[]): boolean[] {
   const { links, nu, graph } = input;
@@ -94,9 +120,18 @@ function linkValidity(input: ExtentInput, keys: readonly (string | null)[], warn
     }
     if (nu[from] === null || nu[to] === null) return false;
     const problems: string[] = [];
-    if (nuOf(nu[from]!, key) <= 0) problems.push(`${l.from} does not produce it`);
-    if (nuOf(nu[to]!, key) >= 0) problems.push(`${l.to} does not consume it`);
-    if (problems.length === 0) return true;
+    const made = nuOf(nu[from]!, key) > 0;
+    const used = nuOf(nu[to]!, key) < 0;
+    if (made && used) return true;
+    // The same substance in another phase on one side: say so, never drop the link silently.
+    const madeAs = made ? key : otherPhase(nu[from]!, key, 1, input.lookup);
+    const usedAs = used ? key : otherPhase(nu[to]!, key, -1, input.lookup);
+    if (madeAs && usedAs && madeAs !== usedAs) {
+      warnings.push(phaseChangeWarning(l, madeAs, usedAs, input.lookup));
+      return false;
+    }
+    if (!made) problems.push(`${l.from} does not produce it`);
+    if (!used) problems.push(`${l.to} does not consume it`);
     warnings.push({
       code: 'LINK_SPECIES',
       message: `Link ${l.from} → ${l.to} carries ${key}, but ${problems.join(' and ')}; the link is ignored for extents`,

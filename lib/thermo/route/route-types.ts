@@ -6,6 +6,8 @@ export type StepClass = 'downhill' | 'marginal' | 'uphill' | 'error';
 
 export type RouteWarningCode =
   | 'LINK_SPECIES'
+  /** a link whose species is made in one phase and used in another: refused, with the phase change to add */
+  | 'LINK_PHASE'
   | 'DISCONNECTED'
   | 'EXTENT_UNKNOWN'
   | 'STEP_ERROR'

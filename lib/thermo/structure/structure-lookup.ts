@@ -24,6 +24,7 @@ const forcedKey = (inchikey: string, phase: string) => `{${inchikey}|estimate}($
 
 class StructureAwareLookup implements StructureLookup {
   private readonly own = new Map<string, SpeciesRecord>();
+  resolveLabel?: (label: string) => string | undefined;
 
   constructor(
     private readonly base: SpeciesLookup,
@@ -98,7 +99,9 @@ class StructureAwareLookup implements StructureLookup {
   withLabels(defs: Readonly<Record<string, SpeciesDefinition>>, fieldPrefix = 'species'): SpeciesLookup {
     const labels = new Map<string, string>();
     for (const [label, def] of Object.entries(defs)) labels.set(label.trim(), this.resolveDefinition(def, `${fieldPrefix}.${label}`));
-    const resolveLabel = (label: string) => labels.get(label.trim());
+    // A step's labels sit over the route's: a label the step does not define is looked up in the route's.
+    const parent = this.resolveLabel?.bind(this);
+    const resolveLabel = (label: string) => labels.get(label.trim()) ?? parent?.(label);
     return Object.assign(Object.create(this) as StructureAwareLookup, { resolveLabel });
   }
 

@@ -60,6 +60,23 @@ describe('extents', () => {
 });
 
 describe('links and connectivity', () => {
+  it('refuses a link across phases by name, with the phase change and its ΔG°, instead of dropping it silently (NBS 1982: ΔfG° CH3OH(g) −161.96, (l) −166.27 kJ/mol)', () => {
+    const r = evaluateRoute({
+      target: 'CH3OCH3(g)',
+      steps: [
+        { id: 'make', equation: 'CO(g) + 2 H2(g) -> CH3OH(g)' },
+        { id: 'use', equation: '2 CH3OH(l) -> CH3OCH3(g) + H2O(l)' },
+      ],
+      links: [{ from: 'make', to: 'use', species: 'CH3OH(g)' }],
+    }, { lookup: nbsLookup });
+    const w = r.warnings.find((x) => x.code === 'LINK_PHASE')!;
+    expect(w.steps).toEqual(['make', 'use']);
+    expect(w.species).toEqual(['CH3OH(g)', 'CH3OH(l)']);
+    expect(w.message).toMatch(/phase change/);
+    expect(w.message).toContain(`${(-166.27 - -161.96).toFixed(1)} kJ/mol`);
+    expect(r.warnings.some((x) => x.code === 'LINK_SPECIES')).toBe(false);
+  });
+
   it('warns LINK_SPECIES when the link species is not made upstream or not used downstream, and goes on', () => {
     const req = chain('NH4Cl(s)', [NH3_SYNTHESIS, NH4CL_FORMATION], ['N2(g)']);
     const r = evaluateRoute(req, { lookup: nbsLookup });

@@ -92,4 +92,36 @@ describe('thermo CLI', () => {
     expect(ok.overall.deltaG0_kJ).toBeCloseTo(ok.steps[1]!.cumulative0_kJ, 9);
     expect(bad.error.message).toMatch(/s1/);
   });
+
+  it('answers the species command array-in, array-out: a library species with its source, an estimate with its groups, an error in place', () => {
+    const r = run(['species'], JSON.stringify([
+      { name: 'aniline', phase: 'l' },
+      { smiles: 'O=C(OC(C)(C)C)N1CCCC1', phase: 'g', temperature: '400 K' },
+      { smiles: 'C1CC', phase: 'g' },
+    ]));
+    expect(r.status).toBe(0);
+    const [aniline, boc, bad] = JSON.parse(r.stdout) as Record<string, unknown>[];
+    // NIST WebBook: ΔfH°(aniline, l) = 31.142 kJ/mol (organic library row).
+    expect(aniline).toMatchObject({ origin: 'library', inchikey: 'PAYRUJLWNCNPSJ-UHFFFAOYSA-N', formula: 'C6H7N', phase: 'l', temperature_K: 298.15 });
+    expect(aniline!.dfH_kJ).toBeCloseTo(31.142, 3);
+    expect(aniline!.source).toMatch(/WebBook/);
+    expect(boc).toMatchObject({ origin: 'estimated', phase: 'g', temperature_K: 400 });
+    expect((boc!.groups as unknown[]).length).toBeGreaterThan(3);
+    expect(boc!.method).toMatch(/group additivity/);
+    for (const field of ['smiles', 'inchikey', 'formula', 'charge', 'name', 'dfH_kJ', 'dfG_kJ', 'S_J_per_K', 'Cp_J_per_K', 'sigma_dfH_kJ', 'sigma_dfG_kJ', 'cpRange_K']) expect(boc, field).toHaveProperty(field);
+    expect(bad).toMatchObject({ error: { code: 'INVALID_STRUCTURE', field: 'smiles' } });
+  });
+
+  it('evaluates route steps with species maps, estimating what no table has', () => {
+    const r = run(['route'], JSON.stringify({
+      target: 'alcohol',
+      species: { alcohol: { smiles: 'CC(O)c1ccc(F)cc1', phase: 'l' } },
+      steps: [{ id: 'reduce', equation: 'ketone + IPA -> alcohol + acetone(l)', species: { ketone: { smiles: 'CC(=O)c1ccc(F)cc1', phase: 'l' }, IPA: { name: 'isopropanol', phase: 'l' } } }],
+    }));
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout) as { error?: unknown; steps?: { result: { species: { as_written: string; origin: string }[] } | null; error: unknown }[] };
+    expect(out.error ?? out.steps![0]!.error ?? null).toBeNull();
+    const origins = Object.fromEntries(out.steps![0]!.result!.species.map((s) => [s.as_written, s.origin]));
+    expect(origins).toEqual({ ketone: 'estimated', IPA: 'library', alcohol: 'estimated', 'acetone(l)': 'library' });
+  });
 });
