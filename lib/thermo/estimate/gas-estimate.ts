@@ -6,7 +6,10 @@ import type { Chem } from '../structure/chem';
 import { elementEntropySum } from './gani/element-entropy';
 import { cpLimits } from './rmg/cp-limits';
 import { entrySource } from './rmg/entry-source';
-import { groupAdditivity } from './rmg/group-sum';
+import { bensonAlcoholEnthalpies } from './rmg/alcohol-enthalpy';
+import { groupAdditivity, type GroupSum } from './rmg/group-sum';
+import type { MolGraph } from './rmg/mol-graph';
+import { addThermo, zeroThermo } from './rmg/thermo-values';
 import { buildMolecule } from './rmg/rdkit-graph';
 import { loadRmgDatabase, type RmgDatabase } from './rmg/rmg-database';
 import { sigmaFor } from './rmg/sigma-model';
@@ -73,6 +76,13 @@ function composition(atoms: readonly { element: string }[]): { formula: string; 
   return { formula: order.map((e) => (elements[e] === 1 ? e : `${e}${elements[e]}`)).join(''), elements };
 }
 
+function withBensonAlcohols(mol: MolGraph, sum: GroupSum): GroupSum {
+  const contributions = bensonAlcoholEnthalpies(mol, sum.contributions);
+  const values = zeroThermo();
+  for (const c of contributions) addThermo(values, c.values, c.sign);
+  return { ...sum, contributions, values };
+}
+
 export function estimateGas(chem: Chem, smiles: string, db: RmgDatabase): GasEstimate {
   // RDKit's parse is not called: its InChI step costs more than the whole estimate
   const built = buildMolecule(chem, smiles, db.atomTypes);
@@ -87,7 +97,9 @@ export function estimateGas(chem: Chem, smiles: string, db: RmgDatabase): GasEst
     const atoms = outside.map(({ i, e }) => `atom ${i + 1} (${e})`);
     throw unsupported(`No group covers ${atoms.join(', ')}.`, { atoms });
   }
-  const sum = groupAdditivity(db, mol);
+  const tree = groupAdditivity(db, mol);
+  // Thermochemistry only (the solvation code sums other quantities on the same machinery).
+  const sum = withBensonAlcohols(mol, tree);
   if (sum.unplaced.length > 0 || !sum.contributions.some((c) => c.file === 'group')) {
     const atoms = sum.unplaced.map((u) => `atom ${u.atom + 1} (${u.element}): ${u.reason}`);
     throw unsupported(atoms.length > 0 ? `No group can centre ${atoms.join('; ')}.` : `${formula} has no atom a group can centre.`, { atoms });
@@ -109,7 +121,7 @@ export function estimateGas(chem: Chem, smiles: string, db: RmgDatabase): GasEst
     const key = `${c.file}|${c.label}|${c.sign}`;
     const known = groups.get(key);
     if (known) known.count += c.sign;
-    else groups.set(key, { file: c.file, label: c.label, count: c.sign, dH_kJ: c.values.H, dS_J_per_K: c.values.S, source: entrySource(c.entry) });
+    else groups.set(key, { file: c.file, label: c.label, count: c.sign, dH_kJ: c.values.H, dS_J_per_K: c.values.S, source: c.sourceOverride ?? entrySource(c.entry) });
   }
   return {
     method: 'group-additivity (RMG tree)',

@@ -133,7 +133,12 @@ describe('estimateGas output', () => {
     const e = estimateGas(chem, 'CCO', db);
     expect(e.method).toBe('group-additivity (RMG tree)');
     expect(e.groups.map((g) => g.label).sort()).toEqual(['Cs-CsHHH', 'Cs-CsOsHH', 'O2s-CsH']);
-    expect(e.groups.find((g) => g.label === 'O2s-CsH')!.source).toBe('Paraskevas et al. 2013');
+    // The hydroxyl O and its carbon take Benson's ΔfH° pair (Thermochemical Kinetics, 1976: O-(C)(H) −37.9,
+    // C-(C)(O)(H)2 −8.1 kcal/mol); S° and Cp stay the tree's (Paraskevas et al. 2013).
+    const oxygen = e.groups.find((g) => g.label === 'O2s-CsH')!;
+    expect(oxygen.source).toMatch(/^Benson 1976/);
+    expect(oxygen.dH_kJ).toBeCloseTo(-37.9 * 4.184, 9);
+    expect(e.groups.find((g) => g.label === 'Cs-CsOsHH')!.dH_kJ).toBeCloseTo(-8.1 * 4.184, 9);
     expect(e.symmetryNumber).toBe(3);
     expect(e.S_J_per_K).toBeCloseTo(e.intrinsicS_J_per_K - 8.314462618 * Math.log(3), 9);
     // C 5.74, H2 130.680, O2 205.152 (CODATA, per atom for the diatomics)

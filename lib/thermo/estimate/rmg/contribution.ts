@@ -16,4 +16,6 @@ export interface Contribution {
   centres: number[];
   /** how a ring term was obtained, when not by a direct match */
   via?: 'averaged children' | 'bicyclic heuristic' | 'ring-pair heuristic';
+  /** set where a value comes from outside the tree (Benson's alcohol pair) */
+  sourceOverride?: string;
 }
