@@ -57,12 +57,26 @@ class StructureAwareLookup implements StructureLookup {
   }
 
   suggest(key: string, limit = 5, elements?: Record<string, number>): string[] {
-    const fromBase = this.base.suggest(key, limit, elements);
     const phase = /\(([a-z]+)\)$/.exec(key)?.[1] ?? 'g';
+    // Species known by structure are offered by name, as people can write them; the phase asked for first.
+    const writable = (k: string): string => {
+      const r = k.startsWith('{') ? this.get(k) : undefined;
+      return r ? `${r.name}(${r.phase})` : k;
+    };
+    const fromBase = this.base.suggest(key, 3 * limit, elements);
     const formula = elements ? hill(elements) : null;
-    // Isomers first: compounds of the same formula, written by name with the phase asked for.
+    const isIsomer = (k: string) => formula !== null && this.get(k) !== undefined && hill(this.get(k)!.elements) === formula;
+    const inPhase = (k: string) => k.endsWith(`(${phase})`);
+    // Isomers first: the library's in the phase asked for, then same-formula compounds of the identifier table in
+    // that phase (they would be estimated), then the library's in other phases, then spellings close to the key.
     const isomers = formula ? identifierIndex().withFormula(formula).slice(0, limit).map((c) => `${c.name}(${phase})`) : [];
-    return [...new Set([...fromBase.filter((k) => elements && this.get(k)), ...isomers, ...fromBase])].slice(0, limit);
+    const ordered = [
+      ...fromBase.filter((k) => isIsomer(k) && inPhase(k)).map(writable),
+      ...isomers,
+      ...fromBase.filter((k) => isIsomer(k) && !inPhase(k)).map(writable),
+      ...fromBase.filter((k) => !isIsomer(k)).map(writable),
+    ];
+    return [...new Set(ordered)].slice(0, limit);
   }
 
   suggestName(name: string, phaseOrForm: string, limit = 5): string[] {
