@@ -1,12 +1,10 @@
 // Cp°(T) and ΔfG°(T) of one species over its data range, for the detail plot. ΔfG°(T) is the engine's
 // ΔrG°(T) of the formation reaction from the elements in their reference states (ions against H+(aq) and H2(g)),
 // so it meets the tabulated ΔfG° at 298.15 K exactly.
-import { cpFromForm } from '../thermo/cp-forms';
 import { T_REF } from '../thermo/constants';
-import { nasa9At } from '../thermo/nasa9';
 import { reactionThermoAt, type ReactionSpecies } from '../thermo/reaction-thermo';
 import type { SpeciesLookup } from '../thermo/species-library';
-import { speciesRange } from '../thermo/species-state';
+import { cpAtTemperature as cpAt, speciesRange } from '../thermo/species-state';
 import type { SpeciesRecord } from '../thermo/species-types';
 import { elementEntropies } from './consistency';
 
@@ -49,13 +47,6 @@ function formationTerms(record: SpeciesRecord, lookup: SpeciesLookup): ReactionS
   return terms;
 }
 
-function cpAt(record: SpeciesRecord, T: number): number | null {
-  const cp = record.cp;
-  if (cp?.kind === 'nasa9') return nasa9At(cp, T).Cp_J_per_K;
-  if (cp?.kind === 'constant') return cp.value;
-  if (cp?.kind === 'form') return cpFromForm(cp.model, T);
-  return record.Cp_J_per_K;
-}
 
 export function formationSeries(record: SpeciesRecord, lookup: SpeciesLookup, count = 41): FormationSeries {
   const [lo, hi] = speciesRange(record);

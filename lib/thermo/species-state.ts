@@ -1,7 +1,7 @@
 // H°(T) and S°(T) of one species, anchored on the library's 298.15 K row so that at 298.15 K
 // the tabulated values come back exactly (the polynomial's own offsets never leak in).
 import { T_REF } from './constants';
-import { formIncrements } from './cp-forms';
+import { cpFromForm, formIncrements } from './cp-forms';
 import { nasa9At, nasa9HSInto, nasa9Range } from './nasa9';
 import type { Nasa9Cp, SpeciesRecord } from './species-types';
 
@@ -57,6 +57,15 @@ export function speciesRange(record: SpeciesRecord): [number, number] {
 export const rangeLow = (record: SpeciesRecord): number => rangeOf(record)[0];
 /** Upper end of the data range, without allocating. */
 export const rangeHigh = (record: SpeciesRecord): number => rangeOf(record)[1];
+
+/** Cp° at T from the record's Cp model; the tabulated 298.15 K value where it has none (null if neither). */
+export function cpAtTemperature(record: SpeciesRecord, T: number): number | null {
+  const cp = record.cp;
+  if (cp?.kind === 'nasa9') return nasa9At(cp, T).Cp_J_per_K;
+  if (cp?.kind === 'constant') return cp.value;
+  if (cp?.kind === 'form') return cpFromForm(cp.model, T);
+  return record.Cp_J_per_K;
+}
 
 export function cpBasis(record: SpeciesRecord): CpBasis {
   return record.cp?.kind ?? 'none';

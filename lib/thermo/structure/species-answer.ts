@@ -1,12 +1,10 @@
 // One species as the `species` command and GET /api/species/resolve answer it: identity, where the numbers come
 // from, and ΔfH°, ΔfG°, S°, Cp at the temperature asked (standard state 1 bar), with σ.
 import { T_REF } from '../constants';
-import { cpFromForm } from '../cp-forms';
 import { ThermoError } from '../errors';
-import { nasa9At } from '../nasa9';
 import { reactionThermoAt, type ReactionSpecies } from '../reaction-thermo';
 import { nbsSpecies } from '../species-library';
-import { speciesRange, speciesStateAt } from '../species-state';
+import { cpAtTemperature, speciesRange, speciesStateAt } from '../species-state';
 import type { LibraryPhase, SpeciesRecord } from '../species-types';
 import { speciesSigma } from '../uncertainty';
 import { parseTemperature } from '../units';
@@ -65,13 +63,6 @@ function formationTerms(record: SpeciesRecord, lookup: StructureLookup): Reactio
   return terms;
 }
 
-function cpAt(record: SpeciesRecord, T: number): number | null {
-  const cp = record.cp;
-  if (cp?.kind === 'nasa9') return nasa9At(cp, T).Cp_J_per_K;
-  if (cp?.kind === 'constant') return cp.value;
-  if (cp?.kind === 'form') return cpFromForm(cp.model, T);
-  return T === T_REF ? record.Cp_J_per_K : null;
-}
 
 function definitionOf(req: SpeciesRequest): SpeciesDefinition {
   const given = [req.smiles, req.name, req.key].filter((v) => v !== undefined).length;
@@ -111,7 +102,8 @@ export function describeSpecies(lookup: StructureLookup, req: SpeciesRequest): S
     dfH_kJ: formation.deltaH0_kJ,
     dfG_kJ: formation.deltaG0_kJ,
     S_J_per_K: state.S_J_per_K,
-    Cp_J_per_K: cpAt(record, T),
+    // Without a Cp model, the 298.15 K value says nothing about other temperatures.
+    Cp_J_per_K: record.cp === null && T !== T_REF ? null : cpAtTemperature(record, T),
     sigma_dfH_kJ: estimated ? record.uncertainty.dfH_kJ : (sigma.from === 'none' ? null : Math.max(record.uncertainty.dfH_kJ ?? 0, record.compilationDifference?.dfH_kJ ?? 0, record.sourceSpread?.dfH_kJ ?? 0) || null),
     sigma_dfG_kJ: sigma.sigma_kJ,
     cpRange_K: [lo, hi],
