@@ -13,7 +13,8 @@ const common = [
 const nextConfig = {
   reactStrictMode: true,
   poweredByHeader: false,
-  serverExternalPackages: ['sequelize', 'sqlite3', 'pg', 'pg-hstore', 'umzug', 'nodemailer', 'bcryptjs'],
+  // @rdkit/rdkit loads its WebAssembly file from beside its own script, so it must stay in node_modules, not the bundle.
+  serverExternalPackages: ['sequelize', 'sqlite3', 'pg', 'pg-hstore', 'umzug', 'nodemailer', 'bcryptjs', '@rdkit/rdkit'],
   async headers() {
     return [
       { source: '/:path*', headers: common },

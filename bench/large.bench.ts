@@ -7,10 +7,11 @@ import path from 'node:path';
 import { DEMO_PASSWORD, DEMO_USERS } from '../db/seeders/demo-team';
 import { startOwnServer } from '../tests/e2e/support/own-server';
 import { signInSession, type Session } from './support/http-session';
+import { freePort } from '../scripts/support/free-port';
 import { percentile, round } from './support/stats';
 import { timedRequests } from './support/timed-requests';
 
-const LARGE_PORT = 3120;
+
 const LIST_TARGET_MS = 100;
 const SEARCH_TARGET_MS = 50;
 const ROOT = path.resolve(__dirname, '..');
@@ -44,7 +45,7 @@ export async function runLargeBench(smallBaseUrl: string, { requests = 200 } = {
   const lead = DEMO_USERS.find((u) => u.role === 'lead')!;
   const file = path.join(ROOT, 'var/bench-large/stepwell.sqlite');
   seedLargeDb(file);
-  const server = await startOwnServer({ port: LARGE_PORT, dbFile: file });
+  const server = await startOwnServer({ port: await freePort(), dbFile: file });
   try {
     const large = await measure(await signInSession(server.url, lead.email, DEMO_PASSWORD), requests);
     const small = await measure(await signInSession(smallBaseUrl, lead.email, DEMO_PASSWORD), requests);

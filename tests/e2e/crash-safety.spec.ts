@@ -9,8 +9,8 @@ import { DEMO_PASSWORD, DEMO_USERS } from '../../db/seeders/demo-team';
 import { signInSession } from '../../bench/support/http-session';
 import { prepareDatabase, startOwnServer } from './support/own-server';
 import { createRoute, saveRoute } from './support/route-saves';
+import { freePort } from '../../scripts/support/free-port';
 
-const PORT = 3107;
 const WRITERS = 4;
 
 function query<T>(file: string, sql: string, params: unknown[] = []): Promise<T[]> {
@@ -25,7 +25,9 @@ test('a SIGKILL mid-write loses no acknowledged save and leaves the database int
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'stepwell-crash-'));
   const dbFile = path.join(dir, 'stepwell.sqlite');
   prepareDatabase(dbFile);
-  let server = await startOwnServer({ port: PORT, dbFile });
+  // A free port, never a fixed one another program (or a server left over) might hold.
+  const port = await freePort();
+  let server = await startOwnServer({ port, dbFile });
   try {
     const designer = DEMO_USERS.find((u) => u.role === 'designer')!;
     const session = await signInSession(server.url, designer.email, DEMO_PASSWORD);
@@ -52,7 +54,7 @@ test('a SIGKILL mid-write loses no acknowledged save and leaves the database int
 
     // The file as the crash left it (WAL and all), before anything opens it cleanly.
     expect(await query<{ integrity_check: string }>(dbFile, 'PRAGMA integrity_check')).toEqual([{ integrity_check: 'ok' }]);
-    server = await startOwnServer({ port: PORT, dbFile });
+    server = await startOwnServer({ port, dbFile });
     const after = await signInSession(server.url, designer.email, DEMO_PASSWORD);
     for (const [w, route] of routes.entries()) {
       const res = await after.fetch(`/api/routes/${route.id}`);
