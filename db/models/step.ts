@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import type { SpeciesDefinition } from '../../lib/thermo/structure/structure-lookup-type';
 
 /** Every condition field of an engine evaluate request, stored together so the two never drift apart. */
 export interface StepConditions {
@@ -8,6 +9,8 @@ export interface StepConditions {
   pressures?: Record<string, string>;
   concentrations?: Record<string, string>;
   initial?: Record<string, string>;
+  /** labels in the equation → { smiles, phase } | { name, phase } | { key } (validated by the route schema) */
+  species?: Record<string, SpeciesDefinition>;
   totalPressure?: string;
   electrons?: number;
   /** a saved fit whose ΔH° and ΔS° the step uses instead of the library */

@@ -3,6 +3,7 @@
 import { z } from 'zod';
 import { MAX_ROUTE_LINKS, MAX_ROUTE_STEPS } from '../thermo/route/route-limits';
 import { PositiveFinite, QuantityString, SpeciesName, safeRecord, speciesMap } from './quantity';
+import { SpeciesDefinitions } from './evaluate';
 import { StepKey } from './route';
 
 export const ROUTE_FILE_FORMAT = 'stepwell.route/1';
@@ -29,6 +30,7 @@ const ImportStep = z.strictObject({
   pressures: speciesMap(QuantityString).optional(),
   concentrations: speciesMap(QuantityString).optional(),
   initial: speciesMap(QuantityString).optional(),
+  species: SpeciesDefinitions.optional(),
   totalPressure: QuantityString.optional(),
   electrons: PositiveFinite.max(1000).optional(),
   yield: z.number().finite().gt(0, { message: 'A yield is above 0.' }).max(1, { message: 'A yield is a fraction, at most 1.' }).optional(),

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { DEFAULT_MARGINAL_THRESHOLD_KJ, MAX_ROUTE_LINKS, MAX_ROUTE_STEPS, MIN_YIELD_FRACTION } from '../thermo/route/route-limits';
+import { SpeciesDefinitions } from './evaluate';
 import { PositiveFinite, QuantityString, SpeciesName, isReservedKey, speciesMap } from './quantity';
 
 export { ROUTE_STATUSES } from './workflow';
@@ -21,6 +22,8 @@ export const StepInput = z.strictObject({
   pressures: speciesMap(QuantityString).optional(),
   concentrations: speciesMap(QuantityString).optional(),
   initial: speciesMap(QuantityString).optional(),
+  /** labels in the equation bound to a structure, name or key (lib/thermo/README.md, "Species by structure") */
+  species: SpeciesDefinitions.optional(),
   totalPressure: Quantity.optional(),
   electrons: PositiveFinite.max(1000).optional(),
   /** a saved fit of the team whose ΔH° and ΔS° this step uses instead of the library */

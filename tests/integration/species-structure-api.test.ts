@@ -6,7 +6,12 @@ import { POST as balance } from '@/app/api/balance/route';
 import { POST as evaluate } from '@/app/api/evaluate/route';
 import { POST as createSpecies } from '@/app/api/species/route';
 import { GET as resolve } from '@/app/api/species/resolve/route';
+import { POST as evaluateSavedRoute } from '@/app/api/routes/[routeId]/evaluate/route';
+import { GET as exportRoute } from '@/app/api/routes/[routeId]/export/route';
+import { createRoute } from '@/lib/services/routes/create-route';
+import { saveRoute } from '@/lib/services/routes/save-route';
 import { makeTeamWithLead } from './support/fixtures';
+import { getDb } from '@/db';
 import { callRoute, errorOf } from './support/http';
 import { setupTestDb, teardownTestDb } from './support/test-db';
 
@@ -136,5 +141,30 @@ describe('POST /api/balance', () => {
     const res = await callRoute(balance, { method: 'POST', userId, body: { equation: 'kr henicosane(g) + 32 O2(g) -> 21 CO2(g) + 22 H2O(g)' } });
     expect(res.status, JSON.stringify(res.body)).toBe(200);
     expect(res.body).toMatchObject({ isBalanced: true });
+  });
+});
+
+describe('a saved route step with a species map', () => {
+  it('keeps the labels, evaluates them (estimating what no table has) and exports them in the route file', async () => {
+    const { teamId } = (await getDb().models.Membership.findOne({ where: { userId } }))!;
+    const route = await createRoute({ teamId, userId, input: { name: 'KRED reduction, IPA-coupled', target: 'acetone(l)', targetAmount: '1 mol' } });
+    const species = { ketone: { smiles: 'CC(=O)c1ccc(F)cc1', phase: 'l' as const }, IPA: { name: 'isopropanol', phase: 'l' as const }, alcohol: { smiles: 'C[C@@H](O)c1ccc(F)cc1', phase: 'l' as const } };
+    const saved = await saveRoute({
+      teamId, userId, routeId: route.id,
+      input: {
+        version: route.version, name: route.name, target: 'acetone(l)', targetAmount: '1 mol', marginalThreshold_kJ: -17,
+        steps: [{ id: 'reduce', equation: 'ketone + IPA -> alcohol + acetone(l)', species, temperature: '303 K', yieldPct: 100, notes: '', position: { x: 0, y: 0 } }],
+        links: [],
+      },
+    });
+    expect(saved.route.steps[0]?.species, JSON.stringify(saved)).toEqual(species);
+    const res = await callRoute(evaluateSavedRoute, { method: 'POST', userId, params: { routeId: String(route.id) } });
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    const body = res.body as { evaluation?: { steps: { result: { species: { as_written: string; origin: string }[] } | null }[] } };
+    expect(body.evaluation, JSON.stringify(res.body).slice(0, 400)).toBeDefined();
+    const step = body.evaluation!.steps[0]!;
+    expect(Object.fromEntries(step.result!.species.map((s) => [s.as_written, s.origin]))).toEqual({ ketone: 'estimated', IPA: 'library', alcohol: 'estimated', 'acetone(l)': 'library' });
+    const file = await callRoute(exportRoute, { userId, params: { routeId: String(route.id) } });
+    expect((file.body as { steps: { species?: unknown }[] }).steps[0]!.species).toEqual(species);
   });
 });
