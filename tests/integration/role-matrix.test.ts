@@ -232,6 +232,7 @@ const TABLE: Row[] = [
   { route: 'species', method: 'POST', expect: editorsOwnTeam(201), prepare: async () => ({ body: speciesInput() }) },
   { route: 'species/[key]', method: 'GET', expect: signedIn(200), prepare: async () => ({ params: { key: 'H2O(l)' } }) },
   { route: 'species/resolve', method: 'GET', expect: signedIn(200), prepare: async () => ({ path: '/api/species/resolve?smiles=CCOC(C)%3DO&phase=l' }) },
+  { route: 'structures/svg', method: 'GET', expect: signedIn(200), prepare: async () => ({ path: '/api/structures/svg?smiles=CCO&w=120&h=90' }) },
   { route: 'species/impact', method: 'POST', expect: editorsOwnTeam(200), prepare: async () => ({ body: { species: speciesInput() } }) },
   { route: 'species/team/[teamSpeciesId]', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: { teamSpeciesId: String((await makeTeamSpecies(w)).id) } }) },
   {
