@@ -19,7 +19,7 @@ beforeAll(async () => {
 });
 afterAll(async () => teardownTestDb(dir));
 
-const CATCH_ALL = '[...path]';
+const CATCH_ALL = '[[...path]]';
 const routes = listRouteFiles().filter((r) => r !== CATCH_ALL);
 
 function expectedAllow(served: readonly string[]): string {

@@ -49,7 +49,7 @@ const everyone = (code: number) => ({ anonymous: code, reviewer: code, designer:
 const TABLE: Row[] = [
   // Any /api path no other handler serves: 404 in the error shape for everybody.
   ...(['GET', 'POST', 'PUT', 'PATCH', 'DELETE'] as const).map((method): Row => ({
-    route: '[...path]', method, expect: everyone(404), prepare: async () => ({ path: '/api/no/such/endpoint', params: { path: 'no/such/endpoint' } }),
+    route: '[[...path]]', method, expect: everyone(404), prepare: async () => ({ path: '/api/no/such/endpoint', params: { path: 'no/such/endpoint' } }),
   })),
   { route: 'auth/[...nextauth]', method: 'GET', expect: 'next-auth' },
   { route: 'auth/[...nextauth]', method: 'POST', expect: 'next-auth' },

@@ -18,7 +18,7 @@ const NOT_OURS = new Set(['auth/[...nextauth]']);
 // Handlers that take no JSON body (none at all, or a raw upload): fuzzed all the same, but with no seed to mutate.
 // The catch-all answers 404 to any body.
 const NO_JSON_BODY = new Set([
-  'POST me/sign-out-everywhere', 'POST routes/[routeId]/undelete', 'POST species/imports', 'POST [...path]', 'PUT [...path]', 'PATCH [...path]',
+  'POST me/sign-out-everywhere', 'POST routes/[routeId]/undelete', 'POST species/imports', 'POST [[...path]]', 'PUT [[...path]]', 'PATCH [[...path]]',
 ]);
 
 type Handler = Parameters<typeof callRoute>[0];

@@ -1,4 +1,4 @@
-// ANY /api/<unknown>: no handler serves this path; 404 in the app's error shape (Next's own answer is an HTML page).
+// ANY /api and /api/<unknown>: no handler serves this path; 404 in the app's error shape (Next's own answer is an HTML page).
 // Every more specific route under app/api wins over this catch-all.
 import { AppError } from '@/lib/api/errors';
 import { withRoute } from '@/lib/api/with-route';
