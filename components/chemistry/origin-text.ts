@@ -27,7 +27,7 @@ function sigmaWords(sigma_kJ: number | null | undefined): string {
 
 /** One sentence: whose value it is, from where, and how far to trust it. */
 export function describeOrigin(f: OriginFacts): string {
-  const source = f.source?.trim();
+  const source = f.source?.trim().replace(/\.+$/, '');
   if (f.origin === 'estimated') {
     const method = f.method?.trim() || source?.replace(/^Estimated:?\s*/i, '') || 'group contribution';
     return `Estimated from the structure by ${method}, not measured; ${sigmaWords(f.sigma_kJ)}.`;

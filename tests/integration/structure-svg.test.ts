@@ -76,7 +76,8 @@ describe('GET /api/structures/svg', () => {
   });
 
   it('refuses sizes outside 24–640 px and unknown parameters with 400 VALIDATION', async () => {
-    for (const query of [{ smiles: 'CCO', w: '5000' }, { smiles: 'CCO', h: '3' }, { smiles: 'CCO', w: 'wide' }, { smiles: '' }, { smiles: 'CCO', colour: 'red' }]) {
+    const queries: Record<string, string>[] = [{ smiles: 'CCO', w: '5000' }, { smiles: 'CCO', h: '3' }, { smiles: 'CCO', w: 'wide' }, { smiles: '' }, { smiles: 'CCO', colour: 'red' }];
+    for (const query of queries) {
       const res = await get(query);
       expect(res.status, JSON.stringify(query)).toBe(400);
       expect(errorOf(res.body).code).toBe('VALIDATION');

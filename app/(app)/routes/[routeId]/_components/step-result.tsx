@@ -2,14 +2,17 @@ import { ClassBadge } from '@/components/ladder/class-badge';
 import { formatEnergy, formatNumber, formatTemperature, type EnergyUnit, type TemperatureUnit } from '@/components/ladder/energy-format';
 import type { EvaluateResponse } from '@/lib/thermo';
 import type { RouteStepResult } from '@/lib/thermo/route';
+import { StepSpecies } from './step-species';
+import { estimateSentence, SIGN_UNCERTAIN_SENTENCE, speciesLabel, withSpeciesNames } from './step-species-notes';
 
-/** Where the step's ΔH° and ΔS° came from: a saved fit, the team's own species, or the built-in library. */
+/** Where the step's ΔH° and ΔS° came from: a saved fit, the team's own species, the built-in library, estimates. */
 export function dataSourceText(engine: EvaluateResponse): string {
   if (engine.override) return engine.override.source;
   const team = engine.species.filter((s) => s.origin === 'team');
-  if (team.length === 0) return 'the species library';
-  const names = team.map((s) => `${s.key}${s.override ? ', overriding the library,' : ''} (${s.source})`).join('; ');
-  return `team species ${names}; the rest from the library`;
+  const estimates = engine.species.some((s) => s.origin === 'estimated') ? ' and estimates from structure' : '';
+  if (team.length === 0) return `the species library${estimates}`;
+  const names = team.map((s) => `${speciesLabel(s)}${s.override ? ', overriding the library,' : ''} (${s.source})`).join('; ');
+  return `team species ${names}; the rest from the library${estimates}`;
 }
 
 function Fact({ term, value }: { term: string; value: string }) {
@@ -25,6 +28,7 @@ function Fact({ term, value }: { term: string; value: string }) {
 export function StepResult({ result, energyUnit, temperatureUnit }: { result: RouteStepResult | undefined; energyUnit: EnergyUnit; temperatureUnit: TemperatureUnit }) {
   if (!result) return <p className="text-xs text-ink-faint">Not evaluated yet.</p>;
   const engine = result.result;
+  const estimates = engine ? estimateSentence(engine, energyUnit) : null;
   return (
     <section aria-label="Evaluation of this step" className="flex flex-col gap-1.5 text-xs" data-testid="step-result">
       <div>
@@ -50,10 +54,13 @@ export function StepResult({ result, energyUnit, temperatureUnit }: { result: Ro
           ΔH° and ΔS° from {dataSourceText(engine)}.
         </p>
       ) : null}
+      {engine && estimates ? <p className="text-ink-soft" data-testid="step-estimates">{estimates}</p> : null}
+      {result.signUncertain ? <p className="text-brass-700">{SIGN_UNCERTAIN_SENTENCE}</p> : null}
+      {engine ? <StepSpecies species={engine.species} energyUnit={energyUnit} /> : null}
       {engine?.warnings.length ? (
         <ul className="list-disc pl-4 text-marginal" aria-label="Engine notes on this step">
           {engine.warnings.map((w, i) => (
-            <li key={`${w.code}-${i}`}>{w.message}</li>
+            <li key={`${w.code}-${i}`}>{withSpeciesNames(w.message, engine.species)}</li>
           ))}
         </ul>
       ) : null}
