@@ -17,6 +17,8 @@ import { temperatureRemedy } from './remedy-temperature';
 import { MAX_ROUTE_LINKS, MAX_ROUTE_STEPS, RouteTooLargeError, routeError } from './route-errors';
 import { DEFAULT_MARGINAL_THRESHOLD_KJ, MAX_TARGET_AMOUNT_MOL, MIN_YIELD_FRACTION } from './route-limits';
 import { buildRouteGraph } from './route-graph';
+import { withStepLabels } from './route-labels';
+import { routeSigma } from './route-sigma';
 import type { DriverReaction, Remedy, RouteEvaluateResponse, RouteStepResult, RouteWarning, StepErrorInfo } from './route-types';
 import { classify, stepNotes } from './step-notes';
 import { readStoichiometry, speciesKey, type Stoichiometry } from './stoichiometry';
@@ -145,7 +147,9 @@ function remediesFor(e: Evaluated, goal_kJ: number, ctx: CouplingContext, driver
 export function evaluateRoute(request: RouteEvaluateRequest, opts: RouteOptions): RouteEvaluateResponse {
   const lookup = labelled(opts.lookup, request.species, 'species');
   const { amount, threshold, yields } = readInputs(request);
-  checkTarget(request.target, lookup);
+  // The target and links may name a label the steps define; each step still evaluates with its own map only.
+  const routeLookup = withStepLabels(lookup, request.steps);
+  checkTarget(request.target, routeLookup);
   const links = request.links ?? [];
   const graph = buildRouteGraph(
     request.steps.map((s) => s.id),
@@ -159,7 +163,7 @@ export function evaluateRoute(request: RouteEvaluateRequest, opts: RouteOptions)
     yields,
     target: request.target,
     targetAmount_mol: amount,
-    lookup,
+    lookup: routeLookup,
   });
   const drivers = prepareDrivers(opts.drivers ?? DEFAULT_DRIVERS, lookup);
   const ctx: CouplingContext = { drivers: drivers.prepared, lookup, cache: new Map(), failed: new Map() };
@@ -204,6 +208,7 @@ export function evaluateRoute(request: RouteEvaluateRequest, opts: RouteOptions)
     warnings.push({ code: 'STEP_ERROR', message: `Could not evaluate ${failedSteps.join(', ')}; the totals leave ${failedSteps.length === 1 ? 'it' : 'them'} out`, steps: failedSteps });
   }
   for (const [id, why] of ctx.failed) warnings.push({ code: 'DRIVER_INVALID', message: `Driver ${id}: ${why}; not used`, steps: [] });
+  const sigma = routeSigma(steps, cumulative);
 
   return assertFiniteNumbers({
     order: graph.order.map((i) => graph.ids[i]!),
@@ -215,6 +220,9 @@ export function evaluateRoute(request: RouteEvaluateRequest, opts: RouteOptions)
       marginalSteps: steps.filter((s) => s.class === 'marginal').length,
       largestUphill_kJ: uphillScaled.length ? Math.max(...uphillScaled) : null,
       smallestDrivingForce_kJ: perMolAll.length ? Math.min(...perMolAll.map((g) => -g)) : null,
+      overallSigma_kJ: sigma.sigma_kJ,
+      overallSignUncertain: sigma.signUncertain,
+      overallSigmaUpperBound: sigma.upperBound,
     },
     warnings,
   });

@@ -141,6 +141,12 @@ export interface RouteOverall {
   marginalSteps: number;
   largestUphill_kJ: number | null;
   smallestDrivingForce_kJ: number | null;
+  /** σ of deltaG_kJ: the counted steps' ξ·σ(ΔrG°) in quadrature (route-sigma.ts); null when no step has a σ */
+  overallSigma_kJ: number | null;
+  /** |deltaG_kJ| ≤ overallSigma_kJ: within the data uncertainty the total could have either sign */
+  overallSignUncertain: boolean;
+  /** the quadrature sum over-states σ (shared intermediates partly cancel, or a step's σ is an upper bound) */
+  overallSigmaUpperBound: boolean;
 }
 
 export interface RouteEvaluateResponse {
