@@ -8,7 +8,7 @@ export interface OriginFacts {
   source?: string | null;
   /** the estimation method (estimated) */
   method?: string | null;
-  /** σ(ΔfG°) at 298.15 K, kJ/mol */
+  /** σ(ΔfG°) at 298.15 K, kJ/mol; null when none is known, left out when the caller has no σ to say */
   sigma_kJ?: number | null;
 }
 
@@ -20,9 +20,10 @@ export function formatSigma(sigma_kJ: number): string {
 }
 
 function sigmaWords(sigma_kJ: number | null | undefined): string {
-  if (sigma_kJ === null || sigma_kJ === undefined || !Number.isFinite(sigma_kJ)) return 'no uncertainty is known';
-  if (sigma_kJ === 0) return 'exact by definition (a reference state)';
-  return `uncertain by about ${formatSigma(sigma_kJ)} (one standard deviation of ΔfG°)`;
+  if (sigma_kJ === undefined) return '';
+  if (sigma_kJ === null || !Number.isFinite(sigma_kJ)) return '; no uncertainty is known';
+  if (sigma_kJ === 0) return '; exact by definition (a reference state)';
+  return `; uncertain by about ${formatSigma(sigma_kJ)} (one standard deviation of ΔfG°)`;
 }
 
 /** One sentence: whose value it is, from where, and how far to trust it. */
@@ -30,8 +31,8 @@ export function describeOrigin(f: OriginFacts): string {
   const source = f.source?.trim().replace(/\.+$/, '');
   if (f.origin === 'estimated') {
     const method = f.method?.trim() || source?.replace(/^Estimated:?\s*/i, '') || 'group contribution';
-    return `Estimated from the structure by ${method}, not measured; ${sigmaWords(f.sigma_kJ)}.`;
+    return `Estimated from the structure by ${method}, not measured${sigmaWords(f.sigma_kJ)}.`;
   }
-  if (f.origin === 'team') return `Your team’s value${source ? `: ${source}` : ''}; ${sigmaWords(f.sigma_kJ)}.`;
-  return `Published value from ${source || 'the built-in library'}; ${sigmaWords(f.sigma_kJ)}.`;
+  if (f.origin === 'team') return `Your team’s value${source ? `: ${source}` : ''}${sigmaWords(f.sigma_kJ)}.`;
+  return `Published value from ${source || 'the built-in library'}${sigmaWords(f.sigma_kJ)}.`;
 }

@@ -2,6 +2,8 @@
 
 import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
+import { FormulaText, formulaPlain } from '@/components/chemistry/formula-text';
+import { OriginMark } from '@/components/chemistry/origin-mark';
 import type { SpeciesRowDto } from '@/lib/services/species/species-dto';
 
 export const PHASE_WORDS: Record<string, string> = { g: 'gas', l: 'liquid', s: 'solid', aq: 'aqueous' };
@@ -13,20 +15,13 @@ export function formatNumber(x: number | null | undefined, digits = 2): string {
 
 export const speciesHref = (key: string) => `/species/${encodeURIComponent(key)}`;
 
-/** Built-in or the team's, always in words as well as colour. */
-export function OriginBadge({ row }: { row: Pick<SpeciesRowDto, 'origin' | 'overridesBuiltin' | 'shadowedByTeam'> }) {
-  if (row.origin === 'team') {
-    return (
-      <span className="flex flex-col items-start gap-0.5">
-        <span className="rounded bg-brass-100 px-1.5 py-0.5 text-xs font-medium text-brass-700">Team</span>
-        {row.overridesBuiltin ? <span className="text-xs font-medium text-marginal">overrides built-in</span> : null}
-      </span>
-    );
-  }
+/** Built-in or the team's: the origin mark (glyph and word, source in its title), plus whether one replaces the other. */
+export function OriginBadge({ row }: { row: Pick<SpeciesRowDto, 'origin' | 'overridesBuiltin' | 'shadowedByTeam'> & { source?: string } }) {
   return (
     <span className="flex flex-col items-start gap-0.5">
-      <span className="rounded bg-paper-deep px-1.5 py-0.5 text-xs text-ink-soft">Built-in</span>
-      {row.shadowedByTeam ? <span className="text-xs text-ink-faint">replaced by your team’s</span> : null}
+      <OriginMark facts={{ origin: row.origin, source: row.source ?? null }} />
+      {row.origin === 'team' && row.overridesBuiltin ? <span className="text-xs font-medium text-marginal">overrides built-in</span> : null}
+      {row.origin === 'library' && row.shadowedByTeam ? <span className="text-xs text-ink-faint">replaced by your team’s</span> : null}
     </span>
   );
 }
@@ -39,8 +34,12 @@ export function speciesColumns(): ColumnDef<SpeciesRowDto>[] {
       header: 'Formula',
       enableSorting: false,
       cell: ({ row }) => (
-        <Link href={speciesHref(row.original.key)} className="font-medium text-pine-700 underline-offset-2 hover:underline" aria-label={`${row.original.key}: values, plot and routes`}>
-          {row.original.key}
+        <Link
+          href={speciesHref(row.original.key)}
+          className="font-medium text-pine-700 underline-offset-2 hover:underline"
+          aria-label={`${formulaPlain(row.original.key, { name: row.original.name })}: values, plot and routes`}
+        >
+          <FormulaText value={row.original.key} formula={row.original.formula} />
         </Link>
       ),
     },

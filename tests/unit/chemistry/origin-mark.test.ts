@@ -19,6 +19,8 @@ describe('describeOrigin', () => {
       'Estimated from the structure by RMG group additivity, not measured; uncertain by about 12 kJ/mol (one standard deviation of ΔfG°).',
     );
     expect(describeOrigin({ origin: 'library', source: 'CODATA', sigma_kJ: 0 })).toMatch(/exact by definition/);
+    // no σ given at all (the species list has none to say): no claim either way
+    expect(describeOrigin({ origin: 'library', source: 'NASA Glenn.' })).toBe('Published value from NASA Glenn.');
   });
 
   it('rounds σ to what it can say', () => {

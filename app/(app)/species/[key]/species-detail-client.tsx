@@ -2,7 +2,8 @@
 
 import { useQuery } from '@tanstack/react-query';
 import Link from 'next/link';
-import { formatNumber, OriginBadge } from '@/components/tables/species-columns';
+import { formulaPlain, isStructureKey } from '@/components/chemistry/formula-text';
+import { formatNumber } from '@/components/tables/species-columns';
 import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page-header';
 import { can } from '@/lib/auth/permissions';
@@ -11,6 +12,7 @@ import { activeMembership, useProfile } from '@/lib/queries/me';
 import { speciesDetailQuery } from '@/lib/queries/species';
 import type { SpeciesDetailDto } from '@/lib/services/species/get-species';
 import { SeriesPlot } from '../_components/series-plot';
+import { SpeciesIdentity } from '../_components/species-identity';
 import { SpeciesValues } from '../_components/species-values';
 
 export function SpeciesDetailClient({ speciesKey }: { speciesKey: string }) {
@@ -33,6 +35,8 @@ export function SpeciesDetailClient({ speciesKey }: { speciesKey: string }) {
 export function SpeciesDetail({ detail, canEdit }: { detail: SpeciesDetailDto; canEdit: boolean }) {
   const { team, builtin } = detail;
   const name = team?.name ?? builtin?.name ?? detail.key;
+  // A structure key ("{InChIKey}(l)") is never shown; the name stands in.
+  const label = formulaPlain(detail.key, { name });
   const lines = (label: string) => [
     { label, points: detail.series.points },
     ...(detail.builtinSeries ? [{ label: 'built-in values', points: detail.builtinSeries.points, dashed: true }] : []),
@@ -40,9 +44,9 @@ export function SpeciesDetail({ detail, canEdit }: { detail: SpeciesDetailDto; c
   const [lo, hi] = detail.series.range_K;
   return (
     <div className="flex flex-col gap-4">
-      <PageHeader title={`${detail.key} · ${name}`} lead={detail.inUse === 'team' ? 'Your team’s values are used in its evaluations.' : 'Built-in values from the library.'} />
+      <PageHeader title={isStructureKey(detail.key) ? label : `${detail.key} · ${name}`} lead={detail.inUse === 'team' ? 'Your team’s values are used in its evaluations.' : 'Built-in values from the library.'} />
+      <SpeciesIdentity detail={detail} />
       <div className="flex flex-wrap items-center gap-3">
-        <OriginBadge row={{ origin: detail.inUse, overridesBuiltin: Boolean(team && builtin), shadowedByTeam: false }} />
         <Link href="/species" className="text-sm text-pine-700 underline-offset-2 hover:underline">All species</Link>
         {team && canEdit ? (
           <Link href={`/species/team/${team.id}/edit`} className="rounded-md border border-paper-edge bg-white px-3 py-1.5 text-sm font-medium hover:bg-paper-deep">Edit team values</Link>
@@ -63,7 +67,7 @@ export function SpeciesDetail({ detail, canEdit }: { detail: SpeciesDetailDto; c
       <section aria-labelledby="uses" className="flex flex-col gap-2">
         <h2 id="uses" className="text-base font-semibold">Routes of your team that use it</h2>
         {detail.routes.length === 0 ? (
-          <p className="text-sm text-ink-soft">No route of your team uses {detail.key} yet.</p>
+          <p className="text-sm text-ink-soft">No route of your team uses {label} yet.</p>
         ) : (
           <ul className="flex flex-col gap-1 text-sm">
             {detail.routes.map((r) => (

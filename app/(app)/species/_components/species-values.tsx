@@ -4,7 +4,7 @@ import type { SpeciesRecord } from '@/lib/thermo/species-types';
 
 const sigma = (x: number | null, digits = 2) => (x === null ? <span className="text-ink-faint">none published</span> : <>± {formatNumber(x, digits)}</>);
 
-function provenanceText(team: TeamSpeciesDto): string {
+export function provenanceText(team: TeamSpeciesDto): string {
   const p = team.provenance;
   if (p.kind === 'citation') return `Cited: ${p.citation}`;
   if (p.kind === 'measured') return `Measured: ${p.reference}${p.fitId ? ` (fit #${p.fitId})` : ''}`;
