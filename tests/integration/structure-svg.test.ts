@@ -3,7 +3,8 @@
 // (any organic chemistry text); InChIKey of ethanol LFQSCWFLJHTTHZ-UHFFFAOYSA-N (PubChem CID 702).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { GET as svgRoute } from '@/app/api/structures/svg/route';
-import { drawStructure } from '@/lib/services/structures/draw-structure';
+import { pageCsp } from '@/lib/security/csp';
+import { drawStructure, styleToAttributes } from '@/lib/services/structures/draw-structure';
 import { makeTeamWithLead } from './support/fixtures';
 import { callRoute, errorOf } from './support/http';
 import { setupTestDb, teardownTestDb } from './support/test-db';
@@ -21,6 +22,16 @@ const get = (query: Record<string, string>, who: number | null = userId) =>
 
 const bondsIn = (svg: string) => new Set([...svg.matchAll(/class='bond-(\d+)/g)].map((m) => m[1])).size;
 
+describe('styleToAttributes', () => {
+  it('turns each style declaration into an attribute, the style winning over an attribute of the same name', () => {
+    expect(styleToAttributes("<path d='M 1,2 L 3,4' fill='#000' style='fill:none;stroke:#4A5853;stroke-width:2.0px' />")).toBe(
+      "<path d='M 1,2 L 3,4' fill='none' stroke='#4A5853' stroke-width='2.0px' />",
+    );
+    expect(styleToAttributes("<rect style='opacity:1.0;fill:#FFFFFF' width='10'> </rect>")).toBe("<rect width='10' opacity='1.0' fill='#FFFFFF'> </rect>");
+    expect(styleToAttributes("<?xml version='1.0'?><g class='x'/>")).toBe("<?xml version='1.0'?><g class='x'/>");
+  });
+});
+
 describe('GET /api/structures/svg', () => {
   it('answers an SVG image of the structure at the size asked, without a background, in our ink, cacheable', async () => {
     const res = await get({ smiles: 'CCO', w: '120', h: '90' });
@@ -36,6 +47,13 @@ describe('GET /api/structures/svg', () => {
     expect(svg).toMatch(/#4A5853/i);
     expect(svg).not.toMatch(/#FF0000/i);
     expect(svg).not.toMatch(/<script/i);
+    // paint as attributes, not styles, so a strict CSP on the image cannot strip it; no tag repeats an attribute
+    expect(svg).not.toMatch(/style=/);
+    expect(svg).toMatch(/<path class='bond-0[^>]* stroke='#4A5853'/);
+    for (const tag of svg.match(/<[a-z][^<>]*>/g) ?? []) {
+      const names = [...tag.matchAll(/\s([a-zA-Z:-]+)='/g)].map((m) => m[1]);
+      expect(new Set(names).size, tag).toBe(names.length);
+    }
   });
 
   it('draws benzene with its six ring bonds', async () => {
@@ -82,6 +100,10 @@ describe('GET /api/structures/svg', () => {
       expect(res.status, JSON.stringify(query)).toBe(400);
       expect(errorOf(res.body).code).toBe('VALIDATION');
     }
+  });
+
+  it('is allowed as an image by the pages’ CSP (same origin)', () => {
+    for (const isDev of [false, true]) expect(pageCsp({ nonce: 'n', isDev }).split('; ')).toContain("img-src 'self' blob: data:");
   });
 
   it('answers 401 to a caller who is not signed in', async () => {

@@ -19,6 +19,24 @@ function drawOptions(width: number, height: number): string {
   return JSON.stringify({ width, height, clearBackground: false, atomColourPalette: PALETTE });
 }
 
+/**
+ * RDKit writes paint as style attributes. API answers carry `default-src 'none'` (next.config.mjs), and a browser
+ * that applies an image's own CSP would then drop them and paint every bond black; presentation attributes (fill,
+ * stroke, …) are not styles, so the drawing looks the same under any policy.
+ */
+export function styleToAttributes(svg: string): string {
+  return svg.replace(/<[a-zA-Z][^<>]*?\sstyle='([^']*)'[^<>]*>/g, (tag: string, style: string) => {
+    const declarations = style
+      .split(';')
+      .map((d) => d.split(':').map((x) => x.trim()))
+      .filter((d): d is [string, string] => d.length === 2 && /^[a-z-]+$/.test(d[0]!) && d[1] !== '');
+    let out = tag.replace(/\sstyle='[^']*'/, '');
+    for (const [name] of declarations) out = out.replace(new RegExp(`\\s${name}='[^']*'`), '');
+    const attributes = declarations.map(([name, value]) => ` ${name}='${value.replace(/'/g, '')}'`).join('');
+    return out.replace(/\s*(\/?)>$/, `${attributes} $1>`).replace(/ >$/, '>');
+  });
+}
+
 export interface StructureDrawing {
   svg: string;
   /** RDKit canonical SMILES of what was drawn */
@@ -45,7 +63,7 @@ export async function drawStructure({ smiles, width, height }: { smiles: string;
   const key = `${parsed.inchikey || parsed.smiles} ${width}x${height}`;
   const hit = cache.get(key);
   if (hit && hit.smiles === parsed.smiles) return { svg: hit.svg, smiles: parsed.smiles, inchikey: parsed.inchikey, cached: true };
-  const svg = chem.withMol(parsed.smiles, (mol) => mol.get_svg_with_highlights(drawOptions(width, height)));
+  const svg = styleToAttributes(chem.withMol(parsed.smiles, (mol) => mol.get_svg_with_highlights(drawOptions(width, height))));
   if (!hit) cache.set(key, { svg, smiles: parsed.smiles });
   return { svg, smiles: parsed.smiles, inchikey: parsed.inchikey, cached: false };
 }
