@@ -17,13 +17,15 @@ import { SpeciesValues } from '../_components/species-values';
 
 export function SpeciesDetailClient({ speciesKey }: { speciesKey: string }) {
   const detail = useQuery(speciesDetailQuery(speciesKey));
+  // The name is not known before the answer, and a structure key is never shown.
+  const shown = isStructureKey(speciesKey) ? 'this species' : speciesKey;
   const { data: profile } = useProfile();
   const canEdit = can(activeMembership(profile)?.role, 'species.edit');
-  if (detail.isPending) return <p className="py-6 text-sm text-ink-soft" role="status">Loading {speciesKey}…</p>;
+  if (detail.isPending) return <p className="py-6 text-sm text-ink-soft" role="status">Loading {shown}…</p>;
   if (detail.isError) {
     const missing = detail.error instanceof ApiError && detail.error.status === 404;
     return (
-      <Notice tone="error" title={missing ? `No species ${speciesKey}` : 'The species could not be loaded'}>
+      <Notice tone="error" title={missing ? `No species ${shown}` : 'The species could not be loaded'}>
         {missing ? 'Neither the built-in library nor your team has it. ' : `${detail.error.message} `}
         <Link href="/species" className="underline">Back to the species list</Link>
       </Notice>
