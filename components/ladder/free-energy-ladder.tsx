@@ -6,13 +6,14 @@ import type { RouteEvaluateResponse, RouteStepResult } from '@/lib/thermo/route'
 import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { formatEnergy, type EnergyUnit } from './energy-format';
-import { axisTitle, ladderSummary, stepLabelOf } from './ladder-describe';
+import { axisTitle, estimatedStepsNote, ladderSummary, stepLabelOf } from './ladder-describe';
 import { downloadBlob, exportFileName, serializeLadderSvg, svgBlob, svgToPngBlob } from './ladder-export';
-import { LadderAxes, LadderLegend, LadderPatterns, LadderStepLabels, LadderZeroAndStart } from './ladder-frame';
+import { LadderAxes, LadderLegend, LadderNotes, LadderPatterns, LadderStepLabels, LadderZeroAndStart } from './ladder-frame';
 import { buildLadder, layoutLadder } from './ladder-geometry';
 import { LADDER_COLOURS as C } from './ladder-palette';
 import { LadderStepMark } from './ladder-step-mark';
 import { LadderTooltip } from './ladder-tooltip';
+import { totalSigmaText } from './ladder-uncertainty';
 import { useElementWidth } from './use-element-width';
 import type { ReviewMarksByStep } from '../review/review-marks';
 
@@ -57,8 +58,17 @@ export function FreeEnergyLadder({
   const order = useMemo(() => evaluation?.order ?? [], [evaluation]);
   const byId = useMemo(() => new Map<string, RouteStepResult>((evaluation?.steps ?? []).map((s) => [s.id, s])), [evaluation]);
   const model = useMemo(() => buildLadder(order, evaluation?.steps ?? [], energyUnit), [order, evaluation, energyUnit]);
-  const layout = useMemo(() => layoutLadder(model, { width, height }), [model, width, height]);
   const labelOf = useCallback((id: string) => stepLabelOf(id, stepLabels), [stepLabels]);
+  const totalSigma = totalSigmaText(evaluation?.overall, energyUnit, basisLabel);
+  // Drawn into the chart (and so into its exports) as well as said near the total and in the <desc>.
+  const notes = useMemo(() => {
+    const out: string[] = [];
+    const estimated = estimatedStepsNote(model.steps, labelOf);
+    if (estimated) out.push(estimated);
+    if (evaluation?.overall.overallSignUncertain && totalSigma) out.push(`Route total: ${totalSigma}`);
+    return out;
+  }, [model, labelOf, evaluation, totalSigma]);
+  const layout = useMemo(() => layoutLadder(model, { width, height, noteLines: notes.length }), [model, width, height, notes.length]);
 
   const activeId = isTipDismissed ? null : (hoverId ?? focus?.id ?? null);
   const activeRiser = activeId ? layout.risers.find((r) => r.step.id === activeId) : undefined;
@@ -136,6 +146,14 @@ export function FreeEnergyLadder({
           <span className="mx-1 text-ink-faint">·</span>
           standard ΔG° <span className="font-semibold text-ink">{formatEnergy(evaluation.overall.deltaG0_kJ, energyUnit)}</span>
           <span className="ml-1 text-ink-faint">({basisLabel})</span>
+          {totalSigma ? (
+            <span
+              className={evaluation.overall.overallSignUncertain ? 'ml-2 rounded border border-ink-soft border-dashed px-1 font-medium text-ink' : 'ml-2 text-ink-faint'}
+              data-testid="ladder-total-sigma"
+            >
+              {evaluation.overall.overallSignUncertain ? `± ${totalSigma}` : totalSigma}
+            </span>
+          ) : null}
         </figcaption>
         <div className="flex gap-2">
           <Button variant="secondary" onClick={handleExportSvg}>
@@ -162,7 +180,7 @@ export function FreeEnergyLadder({
           viewBox={`0 0 ${layout.width} ${layout.height}`}
           className="block max-w-full select-none"
         >
-          <desc id={`${prefix}-desc`}>{ladderSummary(model.steps, model.end, model.end0, energyUnit)}</desc>
+          <desc id={`${prefix}-desc`}>{ladderSummary(model.steps, model.end, model.end0, energyUnit, notes)}</desc>
           <LadderPatterns prefix={prefix} />
           <LadderLegend items={layout.legend} prefix={prefix} />
           {selectedRiser ? (
@@ -199,6 +217,7 @@ export function FreeEnergyLadder({
             />
           ))}
           <LadderStepLabels layout={layout} labelOf={labelOf} selectedId={selectedStepId} />
+          <LadderNotes layout={layout} notes={notes} />
         </svg>
         {activeRiser ? (
           <LadderTooltip

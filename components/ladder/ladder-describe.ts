@@ -4,6 +4,7 @@ import type { RouteStepResult, StepClass } from '@/lib/thermo/route';
 import { formatEnergy, formatNumber, formatSigned, type EnergyUnit } from './energy-format';
 import type { LadderStep } from './ladder-geometry';
 import { CLASS_STYLES } from './ladder-palette';
+import { ESTIMATE_GLYPH, ESTIMATE_WORD, estimateFacts, stepSignUncertainText } from './ladder-uncertainty';
 
 export const CLASS_TEXT: Record<StepClass, string> = {
   downhill: 'Downhill',
@@ -38,7 +39,9 @@ export function stepAriaLabel(step: LadderStep, label: string, unit: EnergyUnit,
     parts.push(CLASS_TEXT[step.cls].toLowerCase());
     if (step.gap === 'not-counted') parts.push('no extent, not in the totals');
     else parts.push(`ΔG ${formatSigned(step.to - step.from, 1)} ${unit}, running total ${formatSigned(step.to, 1)} ${unit}`);
+    if (step.signUncertain) parts.push(stepSignUncertainText(step.sigma_kJ, unit));
   }
+  if (step.estimated) parts.push(`uses ${ESTIMATE_WORD} values`);
   if (isSelected) parts.push('selected');
   return parts.join('; ');
 }
@@ -64,11 +67,21 @@ export function stepFacts(step: RouteStepResult | undefined, unit: EnergyUnit): 
   facts.push({ term: 'Extent', value: step.extent_mol === null ? 'none (not in the totals)' : `${formatNumber(step.extent_mol)} mol` });
   if (step.deltaG_kJ !== null) facts.push({ term: 'ΔG for the route', value: formatEnergy(step.deltaG_kJ, unit) });
   facts.push({ term: 'Class', value: `${CLASS_STYLES[step.class].glyph} ${CLASS_TEXT[step.class]}${step.signUncertain ? ' (sign uncertain)' : ''}` });
+  if (step.signUncertain) facts.push({ term: 'Sign', value: stepSignUncertainText(r.uncertainty.deltaG0_kJ, unit) });
+  facts.push(...estimateFacts(r, unit));
   return facts;
 }
 
-/** The SVG's <desc>: the whole ladder in one sentence. */
-export function ladderSummary(steps: readonly LadderStep[], end: number, end0: number, unit: EnergyUnit): string {
+/** "◇ estimated values in steps 1 Reduce, 3 Boc" for the exported notes; null when no step uses any. */
+export function estimatedStepsNote(steps: readonly LadderStep[], labelOf: (id: string) => string): string | null {
+  const marked = steps.filter((s) => s.estimated);
+  if (marked.length === 0) return null;
+  const which = marked.map((s) => `${s.slot} ${labelOf(s.id)}`).join(', ');
+  return `${ESTIMATE_GLYPH} ${ESTIMATE_WORD} values (group contribution, not measured) in ${marked.length === 1 ? 'step' : 'steps'} ${which}`;
+}
+
+/** The SVG's <desc>: the whole ladder in a few sentences. `notes` are the estimate and total-σ notes, as shown. */
+export function ladderSummary(steps: readonly LadderStep[], end: number, end0: number, unit: EnergyUnit, notes: readonly string[] = []): string {
   const count = (cls: StepClass): number => steps.filter((s) => s.cls === cls && s.gap !== 'error').length;
   const errors = steps.filter((s) => s.gap === 'error').length;
   const bits = [
@@ -78,7 +91,9 @@ export function ladderSummary(steps: readonly LadderStep[], end: number, end0: n
     `${count('downhill')} downhill`,
     ...(errors ? [`${errors} not evaluated`] : []),
   ];
-  return `${bits.join(', ')}. Route total ΔG ${formatSigned(end, 1)} ${unit}, standard ΔG° ${formatSigned(end0, 1)} ${unit}.`;
+  const uncertain = steps.filter((s) => s.signUncertain).map((s) => `step ${s.slot} ${stepSignUncertainText(s.sigma_kJ, unit)}`);
+  const tail = [...uncertain, ...notes].map((t) => ` ${t.charAt(0).toUpperCase()}${t.slice(1)}.`).join('');
+  return `${bits.join(', ')}. Route total ΔG ${formatSigned(end, 1)} ${unit}, standard ΔG° ${formatSigned(end0, 1)} ${unit}.${tail}`;
 }
 
 /** Axis title, e.g. "Cumulative ΔG / kJ per mol of target". */

@@ -21,6 +21,9 @@ function LegendSwatch({ item, prefix }: { item: LegendItemLayout; prefix: string
   const y = item.y;
   if (item.key === 'conditions') return <line x1={item.x} x2={item.x + 18} y1={y} y2={y} stroke={C.ink} strokeWidth={2} />;
   if (item.key === 'standard') return <line x1={item.x} x2={item.x + 18} y1={y} y2={y} stroke={C.inkSoft} strokeWidth={1.5} strokeDasharray="5 4" />;
+  if (item.key === 'estimated') {
+    return <rect x={item.x + 3} y={y - 7} width={12} height={14} fill="none" stroke={C.ink} strokeWidth={1.25} strokeDasharray="1 2.5" strokeLinecap="round" />;
+  }
   if (item.key === 'error') {
     return (
       <g>
@@ -108,6 +111,26 @@ export function LadderStepLabels({ layout, labelOf, selectedId }: { layout: Ladd
       {layout.labelXs.map(({ id, x }) =>
         id === selectedId ? <path key={`${id}-mark`} data-export-skip d={`M${x - 5},${y + 12}h10l-5,-6z`} fill={C.brassDeep} /> : null,
       )}
+    </g>
+  );
+}
+
+/** Notes under the step labels (estimated values, the total's σ): part of the picture, so exports carry them. */
+export function LadderNotes({ layout, notes }: { layout: LadderLayout; notes: readonly string[] }) {
+  const room = layout.plot.right - layout.plot.left;
+  return (
+    <g data-testid="ladder-notes">
+      {notes.map((note, i) => {
+        const y = layout.noteYs[i];
+        if (y === undefined) return null;
+        // SVG text does not wrap: a note too long for the chart is shortened here and said whole in the <desc>.
+        return (
+          <text key={note} x={layout.plot.left} y={y} fontSize={11} fill={C.ink}>
+            <title>{note}</title>
+            {fitLabel(note, room + 6, 6)}
+          </text>
+        );
+      })}
     </g>
   );
 }

@@ -2,9 +2,11 @@
 // layout (bands, risers, treads, the dashed standard ladder, ticks). No React, no DOM, so it is unit-tested.
 import { scaleBand, scaleLinear } from 'd3-scale';
 import type { RouteStepResult, StepClass } from '@/lib/thermo/route';
+import { stepEstimates } from '@/lib/thermo/route/step-estimates';
 import { energyFromKJ, type EnergyUnit } from './energy-format';
 
-export type LadderStepInput = Pick<RouteStepResult, 'id' | 'class' | 'cumulative_kJ' | 'cumulative0_kJ' | 'extent_mol'>;
+export type LadderStepInput = Pick<RouteStepResult, 'id' | 'class' | 'cumulative_kJ' | 'cumulative0_kJ' | 'extent_mol'> &
+  Partial<Pick<RouteStepResult, 'result' | 'signUncertain'>>;
 
 /** Why a step has no riser: the engine could not evaluate it, or it has no extent and is left out of the totals. */
 export type GapReason = 'error' | 'not-counted';
@@ -21,10 +23,18 @@ export interface LadderStep {
   /** the same for the standard ladder (ΔG°) */
   from0: number;
   to0: number;
+  /** ΔG uses at least one estimated species (a group-contribution value, not a measured one) */
+  estimated: boolean;
+  /** |ΔG| ≤ σ per mol of reaction: the data cannot decide the sign */
+  signUncertain: boolean;
+  /** σ(ΔrG°) per mol of reaction in kJ (the engine's unit); null when none is known */
+  sigma_kJ: number | null;
 }
 
 export interface LadderModel {
   steps: LadderStep[];
+  /** some step uses estimated values: the legend explains the mark */
+  hasEstimates: boolean;
   /** where each ladder ends, in the display unit */
   end: number;
   end0: number;
@@ -53,9 +63,15 @@ export function buildLadder(order: readonly string[], steps: readonly LadderStep
       level = energyFromKJ(s.cumulative_kJ, unit);
       level0 = energyFromKJ(s.cumulative0_kJ, unit);
     }
-    return { id, slot: i + 1, cls: s?.class ?? 'error', gap, from, to: level, from0, to0: level0 };
+    const sigma = s?.result?.uncertainty.deltaG0_kJ ?? null;
+    return {
+      id, slot: i + 1, cls: s?.class ?? 'error', gap, from, to: level, from0, to0: level0,
+      estimated: stepEstimates(s?.result) !== null,
+      signUncertain: s?.signUncertain === true && gap !== 'error',
+      sigma_kJ: sigma !== null && Number.isFinite(sigma) ? sigma : null,
+    };
   });
-  return { steps: out, end: level, end0: level0, domain: ladderDomain(out) };
+  return { steps: out, hasEstimates: out.some((s) => s.estimated), end: level, end0: level0, domain: ladderDomain(out) };
 }
 
 export function ladderDomain(steps: readonly LadderStep[]): [number, number] {
@@ -79,7 +95,7 @@ export function niceTicks(domain: readonly [number, number], count: number): num
   return scaleLinear().domain(domain).nice(count).ticks(count);
 }
 
-export type LegendKey = 'conditions' | 'standard' | 'downhill' | 'marginal' | 'uphill' | 'error';
+export type LegendKey = 'conditions' | 'standard' | 'downhill' | 'marginal' | 'uphill' | 'error' | 'estimated';
 
 export const LEGEND_ITEMS: readonly { key: LegendKey; label: string }[] = [
   { key: 'conditions', label: 'ΔG at conditions' },
@@ -88,6 +104,7 @@ export const LEGEND_ITEMS: readonly { key: LegendKey; label: string }[] = [
   { key: 'marginal', label: '≈ marginal' },
   { key: 'uphill', label: '↑ uphill' },
   { key: 'error', label: 'check equation' },
+  { key: 'estimated', label: '◇ estimated values' },
 ];
 
 export interface LegendItemLayout {
@@ -100,12 +117,16 @@ export interface LegendItemLayout {
 const LEGEND_SWATCH = 18;
 const LEGEND_ROW = 18;
 
-/** Flows the legend into rows that fit the width (text width estimated per glyph; SVG text does not wrap). */
-export function layoutLegend(width: number, left: number, pxPerChar = 5.6): { items: LegendItemLayout[]; rows: number } {
+/**
+ * Flows the legend into rows that fit the width (text width estimated per glyph; SVG text does not wrap). The
+ * estimated-values entry shows only when some step has the mark.
+ */
+export function layoutLegend(width: number, left: number, pxPerChar = 5.6, withEstimates = false): { items: LegendItemLayout[]; rows: number } {
   const items: LegendItemLayout[] = [];
   let x = left;
   let row = 0;
   for (const item of LEGEND_ITEMS) {
+    if (item.key === 'estimated' && !withEstimates) continue;
     const w = LEGEND_SWATCH + 6 + item.label.length * pxPerChar + 10;
     if (x > left && x + w > width) {
       row += 1;
@@ -121,6 +142,8 @@ export interface LayoutOptions {
   width: number;
   height: number;
   margin?: { top: number; right: number; bottom: number; left: number };
+  /** lines of notes under the step labels (estimated values, a sign-uncertain total), exported with the chart */
+  noteLines?: number;
 }
 
 export interface RiserLayout {
@@ -160,17 +183,21 @@ export interface LadderLayout {
   /** x of the centre of each band, for the step labels */
   labelXs: { id: string; x: number }[];
   legend: LegendItemLayout[];
+  /** baseline of each note line, left-aligned at plot.left */
+  noteYs: number[];
 }
 
 export const DEFAULT_MARGIN = { top: 14, right: 16, bottom: 44, left: 68 };
 const MIN_RISER_PX = 2;
+const NOTE_LINE_PX = 15;
 
 export function layoutLadder(model: LadderModel, opts: LayoutOptions): LadderLayout {
   const base = opts.margin ?? DEFAULT_MARGIN;
   const width = Math.max(opts.width, base.left + base.right + 40);
-  const legend = layoutLegend(width - base.right, 8);
-  // The legend sits in the top margin, so the plot starts below its last row.
-  const m = { ...base, top: base.top + legend.rows * LEGEND_ROW };
+  const legend = layoutLegend(width - base.right, 8, undefined, model.hasEstimates);
+  const notes = Math.max(0, opts.noteLines ?? 0);
+  // The legend sits in the top margin, so the plot starts below its last row; notes add to the bottom margin.
+  const m = { ...base, top: base.top + legend.rows * LEGEND_ROW, bottom: base.bottom + notes * NOTE_LINE_PX };
   const height = Math.max(opts.height, m.top + m.bottom + 40);
   const plot = { left: m.left, right: width - m.right, top: m.top, bottom: height - m.bottom };
   const tickCount = Math.max(2, Math.floor((plot.bottom - plot.top) / 44));
@@ -234,6 +261,8 @@ export function layoutLadder(model: LadderModel, opts: LayoutOptions): LadderLay
     standardPath: parts.join(''),
     labelXs: model.steps.map((s) => ({ id: s.id, x: round(band(s.id) + bw / 2) })),
     legend: legend.items,
+    // Below the step labels and the selection marker (plot.bottom + 28).
+    noteYs: Array.from({ length: notes }, (_, i) => round(plot.bottom + 40 + i * NOTE_LINE_PX)),
   };
 }
 

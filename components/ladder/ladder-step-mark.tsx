@@ -1,11 +1,12 @@
 'use client';
 // One step on the ladder: a riser (class colour, glyph and, for uphill, hatching) with its tread, or a
-// gap marker when the step has no riser. Each is a focusable button; the parent owns selection and tooltips.
+// gap marker when the step has no riser. A step on estimated values gets a dotted frame and "◇ est." as well. Each is a focusable button; the parent owns selection and tooltips.
 import type { FocusEvent, KeyboardEvent } from 'react';
 import type { EnergyUnit } from './energy-format';
 import { riserText, stepAriaLabel } from './ladder-describe';
 import type { RiserLayout } from './ladder-geometry';
 import { CLASS_STYLES, LADDER_COLOURS as C } from './ladder-palette';
+import { ESTIMATE_GLYPH, ESTIMATE_WORD } from './ladder-uncertainty';
 import { compactReviewMarkText, reviewMarkText, type StepReviewMarks } from '../review/review-marks';
 
 export interface StepMarkHandlers {
@@ -30,6 +31,33 @@ interface StepMarkProps extends StepMarkHandlers {
 
 const HIT_PAD = 8;
 const GLYPH_PX = 6.6;
+/** the dotted frame of an estimated step stands this far outside its riser */
+const FRAME_GAP = 3;
+
+/** The estimate mark: a dotted frame around the riser, and the glyph with a word under the ΔG text. */
+function EstimateMark({ r, room }: { r: RiserLayout; room: number }) {
+  const words = `${ESTIMATE_GLYPH} est.`;
+  return (
+    <g data-testid="ladder-estimate-mark">
+      <rect
+        x={r.x - FRAME_GAP}
+        y={r.y - FRAME_GAP}
+        width={r.w + 2 * FRAME_GAP}
+        height={r.h + 2 * FRAME_GAP}
+        fill="none"
+        stroke={C.ink}
+        strokeWidth={1.25}
+        strokeDasharray="1 2.5"
+        strokeLinecap="round"
+        pointerEvents="none"
+      />
+      <text x={r.labelX} y={r.labelY + 13} dominantBaseline="middle" fontSize={10} fontWeight={600} fill={C.inkSoft} stroke={C.paper} strokeWidth={3} paintOrder="stroke">
+        <title>{`${ESTIMATE_WORD} values: group contribution, not measured`}</title>
+        {words.length * GLYPH_PX <= room ? words : ESTIMATE_GLYPH}
+      </text>
+    </g>
+  );
+}
 
 export function LadderStepMark(props: StepMarkProps) {
   const { layout: r, label, unit, isSelected, hasFocusRing, tooltipId, plotBottom } = props;
@@ -120,6 +148,7 @@ export function LadderStepMark(props: StepMarkProps) {
       >
         {shown}
       </text>
+      {r.step.estimated ? <EstimateMark r={r} room={room} /> : null}
       {reviewShort ? (
         <text x={r.bandX + r.bandWidth / 2} y={Math.max(10, hitTop - 2)} textAnchor="middle" fontSize={10} fontWeight={700} fill={C.brassDeep} data-testid="ladder-review-marks">
           {reviewShort}

@@ -1,7 +1,9 @@
 // A real route evaluation for the ladder and panel tests: an uphill step linked to a downhill one,
-// a step the engine cannot read, and a step with no path to the target (no extent).
+// a step the engine cannot read, and a step with no path to the target (no extent); and a step on estimated values.
 import { evaluateRoute, type RouteEvaluateResponse } from '@/lib/thermo/route';
-import { nbsLookup } from '@/lib/thermo/species-library';
+import { builtinLookup, nbsLookup } from '@/lib/thermo/species-library';
+import { loadChem } from '@/lib/thermo/structure/chem';
+import { structureLookup } from '@/lib/thermo/structure/structure-lookup';
 
 export function sampleEvaluation(): RouteEvaluateResponse {
   return evaluateRoute({
@@ -14,4 +16,31 @@ export function sampleEvaluation(): RouteEvaluateResponse {
     ],
     links: [{ from: 'reform', to: 'synth', species: 'H2(g)' }],
   }, { lookup: nbsLookup });
+}
+
+/**
+ * A route on estimated values: an isopropanol-coupled ketone reduction in water at 30 °C (acetophenone to
+ * (S)-1-phenylethanol; every organic solute estimated), evaluated at 90 % conversion. ΔG° is a few kJ/mol either
+ * way of zero (K of order 1 is common practice for this coupled reduction), well inside its σ of ~14 kJ/mol.
+ */
+export async function estimatedEvaluation(): Promise<RouteEvaluateResponse> {
+  const lookup = structureLookup(builtinLookup, await loadChem());
+  return evaluateRoute({
+    target: 'alcohol',
+    steps: [
+      {
+        id: 'kred',
+        equation: 'ketone + IPA -> alcohol + acetone',
+        species: {
+          ketone: { smiles: 'CC(=O)c1ccccc1', phase: 'aq' },
+          IPA: { smiles: 'CC(C)O', phase: 'aq' },
+          alcohol: { smiles: 'C[C@H](O)c1ccccc1', phase: 'aq' },
+          acetone: { smiles: 'CC(C)=O', phase: 'aq' },
+        },
+        temperature: '303.15 K',
+        concentrations: { ketone: '10 mmol/L', IPA: '1.3 mol/L', alcohol: '90 mmol/L', acetone: '90 mmol/L' },
+      },
+    ],
+    links: [],
+  }, { lookup, remedies: false });
 }

@@ -145,6 +145,20 @@ describe('layoutLadder', () => {
     expect(layoutLadder(flat, { width: 400, height: 300 }).risers[0]!.h).toBe(2);
   });
 
+  it('makes room for note lines under the step labels, one below the other', () => {
+    const plain = layoutLadder(model, { width: 720, height: 340 });
+    const noted = layoutLadder(model, { width: 720, height: 340, noteLines: 2 });
+    expect(plain.noteYs).toEqual([]);
+    expect(plain.plot.bottom - noted.plot.bottom).toBe(30);
+    expect(noted.noteYs).toEqual([noted.plot.bottom + 40, noted.plot.bottom + 55]);
+    expect(noted.noteYs[1]!).toBeLessThan(noted.height);
+  });
+
+  it('lists the estimated-values entry in the legend only when asked', () => {
+    expect(layoutLegend(1200, 8).items.map((i) => i.key)).not.toContain('estimated');
+    expect(layoutLegend(1200, 8, undefined, true).items.map((i) => i.key)).toContain('estimated');
+  });
+
   it('wraps the legend into more rows on a narrow chart and moves the plot down', () => {
     expect(layoutLegend(1200, 8).rows).toBe(1);
     expect(layoutLegend(320, 8).rows).toBeGreaterThan(1);
