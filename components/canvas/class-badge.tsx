@@ -9,7 +9,7 @@ export const CLASS_BADGE_TONES: Record<StepClass, string> = {
   error: 'bg-paper-deep text-ink-soft border-paper-edge',
 };
 
-export function NodeClassBadge({ cls, signUncertain = false }: { cls: StepClass | null; signUncertain?: boolean }) {
+export function NodeClassBadge({ cls, signUncertain = false, signUncertainText = '' }: { cls: StepClass | null; signUncertain?: boolean; signUncertainText?: string }) {
   if (!cls) return <span className="rounded border border-paper-edge px-1.5 text-[11px] text-ink-faint">not evaluated</span>;
   const style = CLASS_STYLES[cls];
   return (
@@ -19,8 +19,10 @@ export function NodeClassBadge({ cls, signUncertain = false }: { cls: StepClass 
         {style.label}
       </span>
       {signUncertain && cls !== 'error' ? (
-        <span className="rounded border border-brass-500/50 bg-brass-100 px-1 text-[11px] text-brass-700" title="Within the data uncertainty ΔG could have either sign">
+        <span className="rounded border border-dashed border-brass-700 bg-brass-100 px-1 text-[11px] text-brass-700" title={signUncertainText || 'Within the data uncertainty ΔG could have either sign'}>
           ± sign uncertain
+          {/* The σ for screen readers; the badge stays short on the node. */}
+          {signUncertainText.startsWith('sign uncertain') ? <span className="sr-only">{signUncertainText.slice('sign uncertain'.length)}</span> : null}
         </span>
       ) : null}
     </span>

@@ -3,6 +3,7 @@
 import { memo, useEffect } from 'react';
 import { Handle, Position, useUpdateNodeInternals, type NodeProps } from 'reactflow';
 import type { StepClass } from '@/lib/thermo/route';
+import { ESTIMATE_GLYPH } from '../ladder/ladder-uncertainty';
 import { NodeClassBadge } from './class-badge';
 
 export interface StepNodeData {
@@ -16,6 +17,10 @@ export interface StepNodeData {
   deltaGText: string;
   cls: StepClass | null;
   signUncertain: boolean;
+  /** "sign uncertain: |ΔG| ≤ σ = … kJ/mol" when the data cannot decide the sign ("" otherwise) */
+  signUncertainText: string;
+  /** "uses estimated values for … (method); σ(ΔrG°) …" ("" when every value is tabulated) */
+  estimatedText: string;
   /** open flags and unresolved comments, in words ("" when none) */
   reviewText: string;
   hasFlags: boolean;
@@ -49,7 +54,7 @@ function StepNodeView({ id, data, selected }: NodeProps<StepNodeData>) {
     >
       <div className="flex items-center justify-between gap-2 border-b border-paper-edge px-2 py-1">
         <span className="font-semibold text-ink-soft">{data.label}</span>
-        <NodeClassBadge cls={data.cls} signUncertain={data.signUncertain} />
+        <NodeClassBadge cls={data.cls} signUncertain={data.signUncertain} signUncertainText={data.signUncertainText} />
       </div>
       {data.reviewText ? (
         <p className={`border-b border-paper-edge px-2 py-0.5 text-[11px] font-medium ${data.hasFlags ? 'bg-brass-100 text-brass-700' : 'text-pine-700'}`} data-testid="step-review-marks">
@@ -61,6 +66,13 @@ function StepNodeView({ id, data, selected }: NodeProps<StepNodeData>) {
         <span>T {data.temperatureText}</span>
         <span className="tabular-nums">
           {data.deltaGName} {data.deltaGText}
+          {data.estimatedText ? (
+            // The glyph qualifies the number it follows; the words are for screen readers and the hover title.
+            <span className="ml-1 rounded-sm border border-dotted border-ink px-0.5 font-semibold text-ink" title={data.estimatedText} data-testid="step-estimate-mark">
+              <span aria-hidden="true">{ESTIMATE_GLYPH}</span>
+              <span className="sr-only">{`; ${data.estimatedText}`}</span>
+            </span>
+          ) : null}
         </span>
       </div>
       {data.reactants.length + data.products.length > 0 ? (

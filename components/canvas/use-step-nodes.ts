@@ -8,6 +8,7 @@ import type { LinkInput, StepInput } from '@/lib/schemas/route';
 import type { RouteStepResult } from '@/lib/thermo/route';
 import { reviewMarkText, type ReviewMarksByStep, type StepReviewMarks } from '../review/review-marks';
 import { formatEnergy, formatTemperature, type EnergyUnit, type TemperatureUnit } from '../ladder/energy-format';
+import { estimateSpoken, stepSignUncertainText } from '../ladder/ladder-uncertainty';
 import { productHandleId, reactantHandleId, type StepNodeData } from './step-node';
 
 export type NodeSize = { width: number; height: number };
@@ -27,6 +28,8 @@ function nodeData(step: StepInput, label: string, result: RouteStepResult | unde
     deltaGText: formatEnergy(deltaG, energyUnit, { perMol: true }),
     cls: result?.class ?? null,
     signUncertain: result?.signUncertain ?? false,
+    signUncertainText: result?.signUncertain && engine ? stepSignUncertainText(engine.uncertainty.deltaG0_kJ, energyUnit) : '',
+    estimatedText: estimateSpoken(engine, energyUnit) ?? '',
     reviewText: reviewMarkText(marks),
     hasFlags: (marks?.flags ?? 0) > 0,
   };
@@ -41,6 +44,8 @@ function sameData(a: StepNodeData, b: StepNodeData): boolean {
     a.deltaGText === b.deltaGText &&
     a.cls === b.cls &&
     a.signUncertain === b.signUncertain &&
+    a.signUncertainText === b.signUncertainText &&
+    a.estimatedText === b.estimatedText &&
     a.reviewText === b.reviewText &&
     a.reactants.join('|') === b.reactants.join('|') &&
     a.products.join('|') === b.products.join('|')
@@ -100,7 +105,7 @@ export function useStepNodes({
         data,
         selected: step.id === selectedStepId,
         deletable: false,
-        ariaLabel: `${data.label}: ${step.equation || 'blank'}${data.reviewText ? ` (${data.reviewText})` : ''}`,
+        ariaLabel: `${data.label}: ${step.equation || 'blank'}${data.estimatedText ? `; ${data.estimatedText}` : ''}${data.reviewText ? ` (${data.reviewText})` : ''}`,
         ...(size ? { width: size.width, height: size.height } : {}),
       } satisfies Node<StepNodeData>;
     });
