@@ -10,7 +10,7 @@ export interface MetricUnits {
 }
 
 const ENERGY_KEYS = new Set<MetricKey>(['overallDeltaG_kJ', 'overallDeltaG0_kJ', 'largestUphill_kJ', 'smallestDrivingForce_kJ']);
-const COUNT_KEYS = new Set<MetricKey>(['stepCount', 'uphillSteps', 'marginalSteps', 'openFlags', 'unresolvedComments']);
+const COUNT_KEYS = new Set<MetricKey>(['stepCount', 'uphillSteps', 'marginalSteps', 'estimatedSteps', 'openFlags', 'unresolvedComments']);
 
 export function metricText(key: MetricKey, m: RouteMetrics, units: MetricUnits): string {
   if (ENERGY_KEYS.has(key)) {
@@ -19,8 +19,10 @@ export function metricText(key: MetricKey, m: RouteMetrics, units: MetricUnits):
     return formatEnergy(v, units.energyUnit);
   }
   if (COUNT_KEYS.has(key)) {
-    const v = m[key as 'stepCount'];
-    return v === null ? '—' : String(v);
+    // A decision recorded before a row existed has no value for it: '—', as for a route the engine refused.
+    const v = m[key as 'estimatedSteps'];
+    if (v === null || v === undefined) return '—';
+    return String(v);
   }
   switch (key) {
     case 'temperatureSpan':
@@ -47,7 +49,7 @@ export function metricText(key: MetricKey, m: RouteMetrics, units: MetricUnits):
 /** A number to order routes by for a row (null sorts last), or a string for the text rows. */
 export function metricSortValue(key: MetricKey, m: RouteMetrics): number | string | null {
   if (ENERGY_KEYS.has(key)) return m[key as 'overallDeltaG_kJ'];
-  if (COUNT_KEYS.has(key)) return m[key as 'stepCount'];
+  if (COUNT_KEYS.has(key)) return m[key as 'estimatedSteps'] ?? null;
   switch (key) {
     case 'temperatureSpan':
       return m.temperatureMin_K === null || m.temperatureMax_K === null ? null : m.temperatureMax_K - m.temperatureMin_K;

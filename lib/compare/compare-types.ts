@@ -45,6 +45,11 @@ export interface RouteMetrics {
   driversNeeded: string[];
   /** uphill steps for which no driver gives a coupling remedy */
   uncoupledUphillSteps: number | null;
+  /**
+   * steps whose ΔG uses at least one estimated species (group contribution, not measured); null when the route
+   * could not be evaluated, absent from decisions recorded before the row existed
+   */
+  estimatedSteps?: number | null;
   openFlags: number;
   unresolvedComments: number;
   status: string;
@@ -60,6 +65,7 @@ export type MetricKey =
   | 'marginalSteps'
   | 'largestUphill_kJ'
   | 'smallestDrivingForce_kJ'
+  | 'estimatedSteps'
   | 'temperatureSpan'
   | 'driversNeeded'
   | 'openFlags'

@@ -21,6 +21,8 @@ export const METRIC_ROWS: readonly MetricRow[] = [
   { key: 'marginalSteps', label: 'Marginal steps', basis: 'count', best: 'lowest', bestMeans: 'fewest' },
   { key: 'largestUphill_kJ', label: 'Largest uphill ΔG', basis: 'per mol of target', best: 'lowest', bestMeans: 'smallest climb; no uphill step beats any' },
   { key: 'smallestDrivingForce_kJ', label: 'Smallest driving force (−ΔG)', basis: 'per mol of reaction as written', best: 'highest', bestMeans: 'largest weakest link' },
+  // Not ranked: an estimate is less certain, not worse chemistry; each step's σ is on the ladder.
+  { key: 'estimatedSteps', label: 'Estimated values used', basis: 'steps', best: 'none', bestMeans: 'not ranked: steps whose ΔG uses group-contribution estimates, not measured values; their σ is on each ladder' },
   { key: 'temperatureSpan', label: 'Temperature span', basis: 'K', best: 'none', bestMeans: 'not ranked: a wide span is neither better nor worse in itself' },
   { key: 'driversNeeded', label: 'Drivers needed for coupling', basis: 'names', best: 'fewest-drivers', bestMeans: 'fewest drivers, among routes whose every uphill step has a coupling remedy' },
   { key: 'openFlags', label: 'Open flags', basis: 'count', best: 'lowest', bestMeans: 'fewest' },

@@ -1,5 +1,6 @@
 // One route's ladder essentials and metric column, from its evaluation. Pure.
 import type { RouteEvaluateRequest, RouteEvaluateResponse } from '../thermo/route';
+import { countEstimatedSteps } from '../thermo/route/step-estimates';
 import type { SpeciesLookup } from '../thermo/species-library';
 import { parseTemperature } from '../thermo/units';
 import type { LadderStep, RouteLadder, RouteMetrics } from './compare-types';
@@ -81,7 +82,7 @@ export function metricsOf(facts: RouteFacts, evaluated: { evaluation: RouteEvalu
       ...base,
       overallDeltaG_kJ: null, overallDeltaG0_kJ: null, uphillSteps: null, marginalSteps: null, errorSteps: null,
       largestUphill_kJ: null, smallestDrivingForce_kJ: null, temperatureMin_K: null, temperatureMax_K: null,
-      driversNeeded: [], uncoupledUphillSteps: null,
+      driversNeeded: [], uncoupledUphillSteps: null, estimatedSteps: null,
     };
   }
   const { evaluation: e, ladder, targetMol } = evaluated;
@@ -100,5 +101,6 @@ export function metricsOf(facts: RouteFacts, evaluated: { evaluation: RouteEvalu
     temperatureMax_K: t.max,
     driversNeeded: drivers.names,
     uncoupledUphillSteps: drivers.uncoupled,
+    estimatedSteps: countEstimatedSteps(e.steps),
   };
 }

@@ -2,9 +2,14 @@
 // ΔfG° values at 298.15 K, quoted from memory: CO2(g) −394.359, CaCO3(calcite) −1128.79, CaO −604.03,
 // NO2 51.31, N2O4 97.89, NH3(g) −16.45, CH4 −50.72, H2O(g) −228.572, CO −137.168 kJ/mol.
 import { describe, expect, it } from 'vitest';
+import { metricText } from '@/components/compare/metric-format';
+import { metricsCsv } from '@/components/compare/metrics-csv';
 import { buildComparison } from '@/lib/compare/build-comparison';
-import { DEFAULT_DRIVERS } from '@/lib/thermo/route';
-import { nbsLookup } from '@/lib/thermo/species-library';
+import { METRIC_ROWS } from '@/lib/compare/metric-rows';
+import { DEFAULT_DRIVERS, evaluateRoute, type RouteEvaluateRequest } from '@/lib/thermo/route';
+import { builtinLookup, nbsLookup } from '@/lib/thermo/species-library';
+import { loadChem } from '@/lib/thermo/structure/chem';
+import { structureLookup } from '@/lib/thermo/structure/structure-lookup';
 import {
   CALCINATION, CARBON_BURN, NH3_SYNTHESIS, NO2_DIMER, forComparison, oneStep, reformingThenShift,
 } from './compare-fixtures';
@@ -21,7 +26,7 @@ describe('route metrics', () => {
     const { metrics: m } = metricsOf(oneStep('CO2(g)', CARBON_BURN));
     expect(Math.abs(m.overallDeltaG0_kJ! - -394.359)).toBeLessThanOrEqual(TOL);
     expect(Math.abs(m.overallDeltaG_kJ! - -394.359)).toBeLessThanOrEqual(TOL); // no pressures given: ΔG = ΔG°
-    expect(m).toMatchObject({ stepCount: 1, uphillSteps: 0, marginalSteps: 0, errorSteps: 0, largestUphill_kJ: null, driversNeeded: [], uncoupledUphillSteps: 0 });
+    expect(m).toMatchObject({ stepCount: 1, uphillSteps: 0, marginalSteps: 0, errorSteps: 0, largestUphill_kJ: null, driversNeeded: [], uncoupledUphillSteps: 0, estimatedSteps: 0 });
     expect(Math.abs(m.smallestDrivingForce_kJ! - 394.359)).toBeLessThanOrEqual(TOL);
     expect(m.temperatureMin_K).toBe(298.15);
     expect(m.temperatureMax_K).toBe(298.15);
@@ -110,5 +115,34 @@ describe('route metrics', () => {
       overallDeltaG_kJ: null, overallDeltaG0_kJ: null, uphillSteps: null, largestUphill_kJ: null, smallestDrivingForce_kJ: null,
       stepCount: 1, openFlags: 2, unresolvedComments: 3, status: 'in_review', updatedBy: 'Hanne Vasquez-Lind', updatedAt: '2026-12-01T09:00:00.000Z',
     });
+  });
+});
+
+describe('the "Estimated values used" row', () => {
+  it('counts the steps whose ΔG uses an estimated species, and is the same number in the table text and the CSV', async () => {
+    // Ethyl acetate forced through the estimator in one step; the other step is all library values.
+    const lookup = structureLookup(builtinLookup, await loadChem());
+    const request: RouteEvaluateRequest = {
+      target: 'EtOAc',
+      steps: [
+        { id: 'hydrogenate', equation: 'MeCHO + H2(g) -> EtOH', species: { MeCHO: { name: 'acetaldehyde', phase: 'l' as const }, EtOH: { name: 'ethanol', phase: 'l' as const } } },
+        { id: 'esterify', equation: 'EtOH + AcOH -> EtOAc + H2O(l)', species: { EtOH: { name: 'ethanol', phase: 'l' as const }, AcOH: { smiles: 'CC(=O)O', phase: 'l' as const }, EtOAc: { smiles: 'CCOC(C)=O', phase: 'l' as const, estimate: true } } },
+      ],
+      links: [{ from: 'hydrogenate', to: 'esterify', species: 'EtOH' }],
+    };
+    const route = { ...forComparison(oneStep('CO2(g)', CARBON_BURN)), name: 'Estimated ester', request, stepCount: 2, outcome: { evaluation: evaluateRoute(request, { lookup }) } };
+    const plain = { ...forComparison(oneStep('CO2(g)', CARBON_BURN)), name: 'Plain' };
+    const comparison = buildComparison([route, plain], {}, lookup);
+    const [m, p] = comparison.routes.map((r) => r.metrics);
+    expect(m!.estimatedSteps).toBe(1);
+    expect(p!.estimatedSteps).toBe(0);
+    expect(comparison.best.estimatedSteps).toEqual([]); // not ranked
+    const units = { energyUnit: 'kJ', temperatureUnit: 'K' } as const;
+    expect(metricText('estimatedSteps', m!, units)).toBe('1');
+    // A decision recorded before the row existed has no value: a dash, never "undefined".
+    const { estimatedSteps: _gone, ...old } = m!;
+    expect(metricText('estimatedSteps', old, units)).toBe('—');
+    const csvRow = metricsCsv(comparison, units, new Set(METRIC_ROWS.map((r) => r.key))).split('\r\n').find((l) => l.startsWith('Estimated values used'));
+    expect(csvRow).toBe('Estimated values used,steps,1,0,');
   });
 });

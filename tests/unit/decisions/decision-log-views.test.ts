@@ -29,7 +29,7 @@ const SUMMARY: DecisionSummaryDto = {
 
 const metrics = (over: Partial<RouteMetrics>): RouteMetrics => ({
   overallDeltaG_kJ: -90, overallDeltaG0_kJ: -80, stepCount: 2, uphillSteps: 0, marginalSteps: 0, errorSteps: 0, largestUphill_kJ: null,
-  smallestDrivingForce_kJ: 25, temperatureMin_K: 500, temperatureMax_K: 500, driversNeeded: [], uncoupledUphillSteps: 0, openFlags: 0,
+  smallestDrivingForce_kJ: 25, temperatureMin_K: 500, temperatureMax_K: 500, driversNeeded: [], uncoupledUphillSteps: 0, estimatedSteps: 2, openFlags: 0,
   unresolvedComments: 1, status: 'draft', updatedAt: '2026-12-01T10:00:00.000Z', updatedBy: 'Baptiste Osei', ...over,
 });
 const best = Object.fromEntries(METRIC_ROWS.map((r) => [r.key, [] as number[]])) as Record<MetricKey, number[]>;
@@ -81,6 +81,15 @@ describe('one decision', () => {
     expect(html).toContain('−90.0 kJ');
     expect(html).toContain('Hydrogen burn');
     expect(html).toContain('>chosen</span>');
+  });
+
+  it('shows the estimated-values count, and a dash for a decision recorded before that row existed', () => {
+    const { estimatedSteps: _gone, ...old } = metrics({});
+    const snapshot = { ...DETAIL.snapshot, routes: [DETAIL.snapshot.routes[0]!, { ...DETAIL.snapshot.routes[1]!, metrics: old }] };
+    const html = renderToStaticMarkup(createElement(SnapshotMetrics, { snapshot, units, chosenRouteId: 21 }));
+    const row = html.slice(html.indexOf('Estimated values used'), html.indexOf('</tr>', html.indexOf('Estimated values used')));
+    expect(row).toMatch(/>2<\/span>[\s\S]*>—<\/span>/);
+    expect(row).not.toContain('undefined');
   });
 
   it('says what-if in words', () => {
