@@ -3,12 +3,16 @@ import type { LinkInput, StepInput } from '../../lib/schemas/route';
 import { evaluateRouteDocument, summariseEvaluation } from '../../lib/services/routes/evaluate-route-document';
 import { stepRow } from '../../lib/services/routes/route-dto';
 import { builtinLookup } from '../../lib/thermo/species-library';
+import { loadChem } from '../../lib/thermo/structure/chem';
+import { structureLookup } from '../../lib/thermo/structure/structure-lookup';
 import type { Models } from '../models';
+import { BOC_BUILDING_BLOCK, KRED_REDUCTION, type DemoRoutePlan } from './demo-estimated-routes';
 import { DEMO_TEAM_NAME, DEMO_USERS } from './demo-team';
 
 // Two invented alternatives to one target for the demo team; all numbers come from the species library.
-const STEAM_REFORMING: { name: string; steps: StepInput[]; links: LinkInput[] } = {
+const STEAM_REFORMING: DemoRoutePlan = {
   name: 'Methanol via steam reforming (Line 2 proposal)',
+  target: 'CH3OH(g)',
   steps: [
     { id: 'reform', equation: 'CH4(g) + H2O(g) -> CO(g) + 3 H2(g)', temperature: '750 K', yieldPct: 95, notes: 'Tube reformer; temperature still to be fixed.', position: { x: 0, y: 0 } },
     {
@@ -27,8 +31,9 @@ const STEAM_REFORMING: { name: string; steps: StepInput[]; links: LinkInput[] } 
   ],
 };
 
-const PARTIAL_OXIDATION: typeof STEAM_REFORMING = {
+const PARTIAL_OXIDATION: DemoRoutePlan = {
   name: 'Methanol via partial oxidation (alternative)',
+  target: 'CH3OH(g)',
   steps: [
     { id: 'pox', equation: 'CH4(g) + 1/2 O2(g) -> CO(g) + 2 H2(g)', temperature: '1100 K', yieldPct: 92, notes: 'Oxygen-blown; needs an air separation unit.', position: { x: 0, y: 0 } },
     { ...STEAM_REFORMING.steps[1]!, position: { x: 360, y: 0 } },
@@ -39,19 +44,28 @@ const PARTIAL_OXIDATION: typeof STEAM_REFORMING = {
   ],
 };
 
+/** Every demo route in the order seeded; the second methanol route is an alternative of the first. */
+export const DEMO_ROUTES: readonly DemoRoutePlan[] = [STEAM_REFORMING, PARTIAL_OXIDATION, BOC_BUILDING_BLOCK, KRED_REDUCTION];
+const ALTERNATIVE_OF_FIRST = new Set([PARTIAL_OXIDATION.name]);
+
 export async function seedDemoRoutes({ sequelize, models }: { sequelize: Sequelize; models: Models }): Promise<{ created: boolean }> {
   const team = await models.Team.findOne({ where: { name: DEMO_TEAM_NAME } });
   if (!team) return { created: false };
   if ((await models.Route.count({ where: { teamId: team.id } })) > 0) return { created: false };
   const designer = await models.User.findOne({ where: { email: DEMO_USERS.find((u) => u.role === 'designer')!.email } });
   if (!designer) return { created: false };
+  // Structures (species maps) need RDKit; it loads only when there is something to seed, so a re-run stays quick.
+  const lookup = structureLookup(builtinLookup, await loadChem());
   await sequelize.transaction(async (transaction) => {
     let originId: number | null = null;
-    for (const plan of [STEAM_REFORMING, PARTIAL_OXIDATION]) {
-      const doc = { target: 'CH3OH(g)', targetAmount: '1 mol', marginalThreshold_kJ: -17, steps: plan.steps, links: plan.links };
-      const summary = summariseEvaluation(doc, evaluateRouteDocument(doc, builtinLookup));
+    for (const plan of DEMO_ROUTES) {
+      const doc = demoRouteDocument(plan);
+      const summary = summariseEvaluation(doc, evaluateRouteDocument(doc, lookup));
       const route: { id: number } = await models.Route.create(
-        { teamId: team.id, name: plan.name, target: doc.target, targetAmount: doc.targetAmount, originRouteId: originId, createdById: designer.id, updatedById: designer.id, ...summary },
+        {
+          teamId: team.id, name: plan.name, target: doc.target, targetAmount: doc.targetAmount,
+          originRouteId: ALTERNATIVE_OF_FIRST.has(plan.name) ? originId : null, createdById: designer.id, updatedById: designer.id, ...summary,
+        },
         { transaction },
       );
       await models.Step.bulkCreate(plan.steps.map((s, i) => stepRow(s, route.id, i)), { transaction });
@@ -60,4 +74,9 @@ export async function seedDemoRoutes({ sequelize, models }: { sequelize: Sequeli
     }
   });
   return { created: true };
+}
+
+/** A plan as the route document the services evaluate and save. */
+export function demoRouteDocument(plan: DemoRoutePlan): { target: string; targetAmount: string; marginalThreshold_kJ: number; steps: StepInput[]; links: LinkInput[] } {
+  return { target: plan.target, targetAmount: '1 mol', marginalThreshold_kJ: -17, steps: plan.steps, links: plan.links };
 }

@@ -4,6 +4,7 @@ import { getDb } from '@/db';
 import { migrateDownAll, migrateUp } from '@/db/migrate';
 import { MIGRATIONS } from '@/db/migrations';
 import { runSeeders } from '@/db/seeders';
+import { DEMO_ROUTES } from '@/db/seeders/demo-routes';
 import { DEMO_USERS } from '@/db/seeders/demo-team';
 import { tableNames } from './support/schema';
 import { onPostgres, setupTestDb, teardownTestDb } from './support/test-db';
@@ -48,10 +49,13 @@ describe('migrations', () => {
     expect(getDb().target.dialect).toBe('postgres');
   });
 
-  it('seed the demo team once, with one user per role', async () => {
+  it('seed the demo team once, with one user per role and the four demo routes', async () => {
     expect(await runSeeders(getDb())).toEqual(['demo-team', 'demo-routes']);
     expect(await runSeeders(getDb())).toEqual([]);
     const roles = await getDb().models.Membership.findAll();
     expect(roles.map((m) => m.role).sort()).toEqual(DEMO_USERS.map((u) => u.role).sort());
+    // Two methanol alternatives, and two routes on estimated values (tests/integration/demo-routes.test.ts).
+    expect(DEMO_ROUTES).toHaveLength(4);
+    expect((await getDb().models.Route.findAll()).map((r) => r.name).sort()).toEqual(DEMO_ROUTES.map((r) => r.name).sort());
   });
 });
