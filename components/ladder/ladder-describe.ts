@@ -5,6 +5,7 @@ import { formatEnergy, formatNumber, formatSigned, type EnergyUnit } from './ene
 import type { LadderStep } from './ladder-geometry';
 import { CLASS_STYLES } from './ladder-palette';
 import { ESTIMATE_GLYPH, ESTIMATE_WORD, estimateFacts, stepSignUncertainText } from './ladder-uncertainty';
+import { textAsWritten } from './remedy-names';
 
 export const CLASS_TEXT: Record<StepClass, string> = {
   downhill: 'Downhill',
@@ -56,7 +57,7 @@ export function stepFacts(step: RouteStepResult | undefined, unit: EnergyUnit): 
   if (!step) return [{ term: 'Status', value: 'missing from the evaluation' }];
   const facts: Fact[] = [];
   const r = step.result;
-  if (r) facts.push({ term: 'Equation', value: r.equation });
+  if (r) facts.push({ term: 'Equation', value: textAsWritten(r.equation, r) });
   if (!r) {
     facts.push({ term: 'Status', value: step.error?.message ?? 'could not be evaluated' });
     return facts;

@@ -8,6 +8,8 @@ import { ClassBadge } from './class-badge';
 import { formatEnergy, formatNumber, temperatureQuantity, type EnergyUnit, type TemperatureUnit } from './energy-format';
 import { perMolDeltaG, stepLabelOf } from './ladder-describe';
 import { groupRemedies, hasAnyRemedy, stepCautions } from './remedy-groups';
+import { remediesAsWritten, textAsWritten } from './remedy-names';
+import { stepSignUncertainText } from './ladder-uncertainty';
 import { ConditionsSection, CouplingSection, TemperatureSection, type Units } from './remedy-sections';
 
 export const SAFETY_NOTE =
@@ -42,7 +44,7 @@ function StepHeader({ step, label, unit }: { step: RouteStepResult; label: strin
         <h2 className="text-base font-semibold text-ink">{label}</h2>
         <ClassBadge cls={step.class} isSignUncertain={step.signUncertain} />
       </div>
-      {r ? <p className="break-words font-mono text-xs text-ink-soft">{r.equation}</p> : null}
+      {r ? <p className="break-words font-mono text-xs text-ink-soft">{textAsWritten(r.equation, r)}</p> : null}
       {r ? (
         <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 text-xs">
           <dt className="text-ink-faint">{r.deltaG_kJ === null ? 'ΔG (standard state)' : 'ΔG at conditions'}</dt>
@@ -58,7 +60,9 @@ function StepHeader({ step, label, unit }: { step: RouteStepResult; label: strin
         </dl>
       ) : null}
       {step.signUncertain ? (
-        <p className="text-xs text-brass-700">The sign of ΔG is within the data’s uncertainty; treat the class with care.</p>
+        <p className="text-xs text-brass-700">
+          The sign of ΔG is within the data’s uncertainty ({r ? stepSignUncertainText(r.uncertainty.deltaG0_kJ, unit) : 'sign uncertain'}); treat the class with care.
+        </p>
       ) : null}
     </header>
   );
@@ -83,7 +87,7 @@ export function RemediesPanel({
   }
   const units: Units = { energy: energyUnit, temperature: temperatureUnit };
   const label = stepLabelOf(step.id, stepLabels);
-  const groups = groupRemedies(step.remedies);
+  const groups = groupRemedies(remediesAsWritten(step));
   const cautions = stepCautions(step);
   const needsRemedy = step.class === 'uphill' || step.class === 'marginal';
   const T_K = step.result?.temperature_K;
@@ -141,7 +145,7 @@ export function RemediesPanel({
             {cautions.map((c) => (
               <li key={c.key}>
                 <Notice tone="caution" title={c.title}>
-                  {c.message}
+                  {textAsWritten(c.message, step.result)}
                 </Notice>
               </li>
             ))}

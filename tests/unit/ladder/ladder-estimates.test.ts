@@ -103,6 +103,7 @@ describe('the ladder with estimated values', () => {
   it('names the estimated species, the method and σ(ΔrG°) in the tooltip', () => {
     const step = estimated.steps[0]!;
     const facts = Object.fromEntries(stepFacts(step, 'kJ').map((f) => [f.term, f.value]));
+    expect(facts.Equation).toBe('ketone + IPA ⇌ alcohol + acetone');
     expect(facts.Values).toMatch(/^◇ estimated: acetophenone, .*acetone/);
     expect(facts.Method).toBe('Benson-type group additivity, then hydration');
     expect(facts['σ(ΔrG°)']).toMatch(/^\d+\.\d kJ\/mol \(an upper bound/);
