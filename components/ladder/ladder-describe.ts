@@ -73,7 +73,7 @@ export function stepFacts(step: RouteStepResult | undefined, unit: EnergyUnit): 
   return facts;
 }
 
-/** "◇ estimated values in steps 1 Reduce, 3 Boc" for the exported notes; null when no step uses any. */
+/** "◌ estimated values in steps 1 Reduce, 3 Boc" for the exported notes; null when no step uses any. */
 export function estimatedStepsNote(steps: readonly LadderStep[], labelOf: (id: string) => string): string | null {
   const marked = steps.filter((s) => s.estimated);
   if (marked.length === 0) return null;

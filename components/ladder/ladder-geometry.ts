@@ -104,7 +104,7 @@ export const LEGEND_ITEMS: readonly { key: LegendKey; label: string }[] = [
   { key: 'marginal', label: '≈ marginal' },
   { key: 'uphill', label: '↑ uphill' },
   { key: 'error', label: 'check equation' },
-  { key: 'estimated', label: '◇ estimated values' },
+  { key: 'estimated', label: '◌ estimated values' },
 ];
 
 export interface LegendItemLayout {

@@ -1,6 +1,6 @@
 'use client';
 // One step on the ladder: a riser (class colour, glyph and, for uphill, hatching) with its tread, or a
-// gap marker when the step has no riser. A step on estimated values gets a dotted frame and "◇ est." as well. Each is a focusable button; the parent owns selection and tooltips.
+// gap marker when the step has no riser. A step on estimated values gets a dotted frame and "◌ est." as well. Each is a focusable button; the parent owns selection and tooltips.
 import type { FocusEvent, KeyboardEvent } from 'react';
 import type { EnergyUnit } from './energy-format';
 import { riserText, stepAriaLabel } from './ladder-describe';

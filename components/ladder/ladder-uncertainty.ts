@@ -5,8 +5,8 @@ import type { RouteOverall, RouteStepResult } from '@/lib/thermo/route';
 import { stepEstimates } from '@/lib/thermo/route/step-estimates';
 import { energyFromKJ, energyUnitLabel, type EnergyUnit } from './energy-format';
 
-/** Our mark for "uses estimated values": an open diamond, always with the word beside or behind it. */
-export const ESTIMATE_GLYPH = '◇';
+/** Our mark for "uses estimated values": a dotted ring (the species panels mark an estimate with a dashed ring), always with the word beside or behind it. */
+export const ESTIMATE_GLYPH = '◌';
 export const ESTIMATE_WORD = 'estimated';
 
 /** σ as a size: "14.4 kJ/mol" (per mol of reaction) or "39.4 kJ" (for the route). */
@@ -28,7 +28,7 @@ export function totalSigmaText(overall: Pick<RouteOverall, 'overallSigma_kJ' | '
   return overall!.overallSignUncertain ? `sign uncertain: |ΔG| ≤ σ = ${size}${bound}` : `σ = ${size}${bound}`;
 }
 
-/** "◇ estimated: acetophenone, acetone" — the step's estimated species; null when it uses none. */
+/** "◌ estimated: acetophenone, acetone" — the step's estimated species; null when it uses none. */
 export function estimatedSpeciesText(result: RouteStepResult['result']): string | null {
   const e = stepEstimates(result);
   if (!e) return null;

@@ -21,17 +21,17 @@ function node(data: Partial<StepNodeData>): string {
 }
 
 describe('step node marks', () => {
-  it('shows ◇ after ΔG with the words hidden for screen readers and in the title when values are estimated', () => {
+  it('shows ◌ after ΔG with the words hidden for screen readers and in the title when values are estimated', () => {
     const words = 'uses estimated values for acetophenone, acetone (Benson-type group additivity, then hydration); σ(ΔrG°) 14.4 kJ/mol';
     const html = node({ estimatedText: words });
     expect(html).toContain('data-testid="step-estimate-mark"');
     expect(html).toContain(`title="${words}"`);
-    expect(html).toMatch(/<span aria-hidden="true">◇<\/span><span class="sr-only">; uses estimated values for acetophenone/);
+    expect(html).toMatch(/<span aria-hidden="true">◌<\/span><span class="sr-only">; uses estimated values for acetophenone/);
   });
 
   it('has no estimate mark when every value is tabulated', () => {
     const html = node({});
-    expect(html).not.toContain('◇');
+    expect(html).not.toContain('◌');
     expect(html).not.toContain('step-estimate-mark');
   });
 

@@ -1,4 +1,4 @@
-// Estimated values and undecided signs on the ladder: a mark that is a dotted frame plus "◇ est." (never colour
+// Estimated values and undecided signs on the ladder: a mark that is a dotted frame plus "◌ est." (never colour
 // alone), the words in the tooltip, the accessible names, the exported notes and the <desc>; and none of it on a
 // route whose values are all tabulated. The estimated route is a real evaluation (RDKit and the estimators).
 import { createElement } from 'react';
@@ -78,12 +78,12 @@ describe('words', () => {
 });
 
 describe('the ladder with estimated values', () => {
-  it('frames the riser with dots and writes "◇ est." beside it, with the legend entry', () => {
+  it('frames the riser with dots and writes "◌ est." beside it, with the legend entry', () => {
     const html = ladder(estimated);
     expect(html).toContain('data-testid="ladder-estimate-mark"');
     expect(html).toContain('stroke-dasharray="1 2.5"');
-    expect(html).toMatch(/◇ est\.|>◇</);
-    expect(html).toContain('◇ estimated values');
+    expect(html).toMatch(/◌ est\.|>◌</);
+    expect(html).toContain('◌ estimated values');
   });
 
   it('says "estimated" and the undecided sign in the riser’s accessible name', () => {
@@ -95,7 +95,7 @@ describe('the ladder with estimated values', () => {
   it('writes the notes into the picture and the <desc>, and the total’s words by the total', () => {
     const html = ladder(estimated);
     expect(html).toContain('data-testid="ladder-notes"');
-    expect(html).toContain('◇ estimated values (group contribution, not measured) in step 1 KRED reduction');
+    expect(html).toContain('◌ estimated values (group contribution, not measured) in step 1 KRED reduction');
     expect(html).toMatch(/<desc[^>]*>[^<]*Route total: sign uncertain: \|ΔG\| ≤ σ = [\d.]+ kJ per mol of target/);
     expect(html).toMatch(/data-testid="ladder-total-sigma"[^>]*>± sign uncertain: \|ΔG\| ≤ σ = /);
   });
@@ -104,20 +104,20 @@ describe('the ladder with estimated values', () => {
     const step = estimated.steps[0]!;
     const facts = Object.fromEntries(stepFacts(step, 'kJ').map((f) => [f.term, f.value]));
     expect(facts.Equation).toBe('ketone + IPA ⇌ alcohol + acetone');
-    expect(facts.Values).toMatch(/^◇ estimated: acetophenone, .*acetone/);
+    expect(facts.Values).toMatch(/^◌ estimated: acetophenone, .*acetone/);
     expect(facts.Method).toBe('Benson-type group additivity, then hydration');
     expect(facts['σ(ΔrG°)']).toMatch(/^\d+\.\d kJ\/mol \(an upper bound/);
     expect(facts.Sign).toMatch(/^sign uncertain: \|ΔG\| ≤ σ = \d+\.\d kJ\/mol$/);
     const layout = layoutLadder(buildLadder(estimated.order, estimated.steps, 'kJ'), { width: 720, height: 340 });
     const tip = unescape(renderToStaticMarkup(createElement(LadderTooltip, { id: 't', riser: layout.risers[0]!, step, label: 'KRED reduction', unit: 'kJ', containerWidth: 720 })));
-    expect(tip).toContain('◇ estimated: acetophenone');
+    expect(tip).toContain('◌ estimated: acetophenone');
     expect(tip).toContain('Benson-type group additivity, then hydration');
     expect(estimateSpoken(step.result, 'kJ')).toMatch(/^uses estimated values for acetophenone, .* \(Benson-type group additivity, then hydration\); σ\(ΔrG°\) \d+\.\d kJ\/mol$/);
   });
 
   it('adds none of it to a route whose values are all tabulated', () => {
     const html = ladder(tabulated);
-    expect(html).not.toContain('◇');
+    expect(html).not.toContain('◌');
     expect(html).not.toContain('ladder-estimate-mark');
     expect(html).not.toContain('ladder-notes"><text');
     expect(html).not.toContain('uses estimated values');
