@@ -6,6 +6,7 @@ import type { LadderStep, RouteLadder } from '@/lib/compare/compare-types';
 import { energyFromKJ, energyUnitLabel, formatEnergy, type EnergyUnit } from '../ladder/energy-format';
 import { LadderPatterns } from '../ladder/ladder-frame';
 import { CLASS_STYLES, LADDER_COLOURS as C } from '../ladder/ladder-palette';
+import { ESTIMATE_WORD, stepSignUncertainText } from '../ladder/ladder-uncertainty';
 
 export type LadderBasis = 'conditions' | 'standard';
 
@@ -33,7 +34,8 @@ export function sharedDomain(ladders: ReadonlyArray<RouteLadder | null>, basis: 
 }
 
 // One route's staircase on the shared scale: each step a riser from the running total, class shown by
-// colour, glyph and (uphill) hatching; steps shared with another compared route get a brass outline.
+// colour, glyph and (uphill) hatching; steps shared with another compared route get a brass outline; steps on
+// estimated values a dotted frame, as on the route board, and the words in their title.
 export function CompareLadder({
   name,
   ladder,
@@ -81,9 +83,10 @@ export function CompareLadder({
         const y0 = y(energyFromKJ(from, unit));
         const y1 = y(energyFromKJ(running, unit));
         const shared = sharedStepIds.has(s.id);
-        const label = `${i + 1}. ${s.equation || 'blank step'}: ${delta === null ? 'not evaluated' : formatEnergy(delta, unit)} (${style.label})${shared ? ', shared with another route' : ''}`;
+        const words = [shared ? 'shared with another route' : '', s.estimated ? `uses ${ESTIMATE_WORD} values` : '', s.signUncertain ? stepSignUncertainText(null, unit) : ''].filter(Boolean);
+        const label = `${i + 1}. ${s.equation || 'blank step'}: ${delta === null ? 'not evaluated' : formatEnergy(delta, unit)} (${style.label})${words.length ? `, ${words.join(', ')}` : ''}`;
         return (
-          <g key={s.id} data-step-id={s.id} data-shared={shared || undefined}>
+          <g key={s.id} data-step-id={s.id} data-shared={shared || undefined} data-estimated={s.estimated || undefined}>
             <title>{label}</title>
             {shared ? <rect x={x + 1} y={M.top} width={band - 2} height={H - M.top - M.bottom} fill={C.brassLight} opacity={0.55} /> : null}
             {delta === null ? (
@@ -94,6 +97,9 @@ export function CompareLadder({
               <>
                 <rect x={x + band * 0.3} y={Math.min(y0, y1)} width={band * 0.4} height={Math.max(1, Math.abs(y1 - y0))} fill={style.fill} stroke={style.stroke} strokeWidth={shared ? 2 : 1} />
                 {style.pattern ? <rect x={x + band * 0.3} y={Math.min(y0, y1)} width={band * 0.4} height={Math.max(1, Math.abs(y1 - y0))} fill={`url(#${prefix}-${style.pattern})`} /> : null}
+                {s.estimated ? (
+                  <rect x={x + band * 0.3 - 2.5} y={Math.min(y0, y1) - 2.5} width={band * 0.4 + 5} height={Math.max(1, Math.abs(y1 - y0)) + 5} fill="none" stroke={C.ink} strokeWidth={1} strokeDasharray="1 2.5" strokeLinecap="round" />
+                ) : null}
                 <line x1={x + band * 0.3} x2={x + band} y1={y1} y2={y1} stroke={C.ink} strokeWidth={1.5} />
                 {band >= 22 ? (
                   <text x={x + band / 2} y={Math.min(y0, y1) - 4} textAnchor="middle" fontSize={10} fontWeight={700} fill={style.stroke}>

@@ -16,6 +16,8 @@ export interface LadderStep {
   cumulative0_kJ: number;
   temperature_K: number | null;
   signUncertain: boolean;
+  /** ΔG uses at least one estimated species (group contribution, not measured) */
+  estimated: boolean;
   /** the engine's message for a step it could not evaluate */
   error: string | null;
 }

@@ -1,6 +1,6 @@
 // One route's ladder essentials and metric column, from its evaluation. Pure.
 import type { RouteEvaluateRequest, RouteEvaluateResponse } from '../thermo/route';
-import { countEstimatedSteps } from '../thermo/route/step-estimates';
+import { countEstimatedSteps, stepEstimates } from '../thermo/route/step-estimates';
 import type { SpeciesLookup } from '../thermo/species-library';
 import { parseTemperature } from '../thermo/units';
 import type { LadderStep, RouteLadder, RouteMetrics } from './compare-types';
@@ -44,6 +44,7 @@ export function ladderOf(request: RouteEvaluateRequest, evaluation: RouteEvaluat
       cumulative0_kJ: s.cumulative0_kJ / targetMol,
       temperature_K: stepTemperature(request, s.id, s.result?.temperature_K),
       signUncertain: s.signUncertain,
+      estimated: stepEstimates(s.result) !== null,
       error: s.error?.message ?? null,
     };
   });

@@ -1,7 +1,10 @@
 // Metric columns against hand sums of NBS Tables 1982 (Wagman et al., J. Phys. Chem. Ref. Data 11, Suppl. 2)
 // ΔfG° values at 298.15 K, quoted from memory: CO2(g) −394.359, CaCO3(calcite) −1128.79, CaO −604.03,
 // NO2 51.31, N2O4 97.89, NH3(g) −16.45, CH4 −50.72, H2O(g) −228.572, CO −137.168 kJ/mol.
+import { createElement } from 'react';
+import { renderToStaticMarkup } from 'react-dom/server';
 import { describe, expect, it } from 'vitest';
+import { CompareLadder, sharedDomain } from '@/components/compare/compare-ladder';
 import { metricText } from '@/components/compare/metric-format';
 import { metricsCsv } from '@/components/compare/metrics-csv';
 import { buildComparison } from '@/lib/compare/build-comparison';
@@ -144,5 +147,12 @@ describe('the "Estimated values used" row', () => {
     expect(metricText('estimatedSteps', old, units)).toBe('—');
     const csvRow = metricsCsv(comparison, units, new Set(METRIC_ROWS.map((r) => r.key))).split('\r\n').find((l) => l.startsWith('Estimated values used'));
     expect(csvRow).toBe('Estimated values used,steps,1,0,');
+    // The compared ladder marks the same step: a dotted frame and the words in its title.
+    const ladder = comparison.routes[0]!.ladder!;
+    expect(ladder.steps.map((st) => [st.id, st.estimated])).toEqual([['hydrogenate', false], ['esterify', true]]);
+    const svg = renderToStaticMarkup(createElement(CompareLadder, { name: 'Estimated ester', ladder, domain_kJ: sharedDomain([ladder], 'conditions'), basis: 'conditions', unit: 'kJ', sharedStepIds: new Set<string>() }));
+    expect(svg.match(/data-estimated="true"/g)).toHaveLength(1);
+    expect(svg).toContain('stroke-dasharray="1 2.5"');
+    expect(svg).toMatch(/2\. EtOH \+ AcOH -&gt; EtOAc \+ H2O\(l\): [^<]*uses estimated values/);
   });
 });
