@@ -1,5 +1,5 @@
 import { keepPreviousData, queryOptions } from '@tanstack/react-query';
-import type { ListRoutesQuery, RouteDraft, SaveRouteInput } from '../schemas/route';
+import type { ListRoutesQuery, RouteDraft, SaveRouteInput, StepInput } from '../schemas/route';
 import type { LibraryReaction } from '../services/routes/search-library-reactions';
 import type { DeletedRouteDto } from '../services/routes/list-deleted-routes';
 import type { RouteAlternativesDto } from '../services/routes/list-alternatives';
@@ -43,7 +43,7 @@ export const routeKeys = {
   /** keyed by a hash of the draft's engine fields, so moving a node never re-evaluates */
   evaluation: (routeId: number, draftHash: string) => [...routeKeys.evaluations(routeId), draftHash] as const,
   palette: (species: string) => [...routeKeys.all, 'palette', species] as const,
-  balance: (equation: string) => ['balance', equation] as const,
+  balance: (equation: string, species?: unknown) => ['balance', equation, species ?? null] as const,
   drivers: () => ['drivers'] as const,
 };
 
@@ -71,10 +71,11 @@ export const routeEvaluationQuery = (routeId: number, draftHash: string, draft: 
     retry: false,
   });
 
-export const balanceQuery = (equation: string) =>
+/** `species` is the step's label map, so labels in the equation are read as the step defines them. */
+export const balanceQuery = (equation: string, species?: StepInput['species']) =>
   queryOptions({
-    queryKey: routeKeys.balance(equation),
-    queryFn: () => apiFetch<BalanceAnswer>('/api/balance', { method: 'POST', body: { equation } }),
+    queryKey: routeKeys.balance(equation, species),
+    queryFn: () => apiFetch<BalanceAnswer>('/api/balance', { method: 'POST', body: species && Object.keys(species).length ? { equation, species } : { equation } }),
     staleTime: Infinity,
     retry: false,
   });

@@ -168,3 +168,15 @@ describe('a saved route step with a species map', () => {
     expect((file.body as { steps: { species?: unknown }[] }).steps[0]!.species).toEqual(species);
   });
 });
+
+describe('POST /api/balance with a step’s species map', () => {
+  it('reads the step’s labels, and answers a bad definition as an error item, never a 500', async () => {
+    const species = { NB: { name: 'nitrobenzene', phase: 'l' }, AN: { smiles: 'Nc1ccccc1', phase: 'l' } };
+    const ok = await callRoute(balance, { method: 'POST', userId, body: { equation: 'NB + 3 H2(g) -> AN + 2 H2O(l)', species } });
+    expect(ok.status, JSON.stringify(ok.body)).toBe(200);
+    expect(ok.body).toMatchObject({ isBalanced: true });
+    const bad = await callRoute(balance, { method: 'POST', userId, body: { equation: 'NB -> AN', species: { NB: { smiles: 'C1CC', phase: 'l' }, AN: { smiles: 'Nc1ccccc1', phase: 'l' } } } });
+    expect(bad.status).toBe(200);
+    expect(bad.body).toMatchObject({ error: { code: 'INVALID_STRUCTURE' } });
+  });
+});

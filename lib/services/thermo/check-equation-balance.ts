@@ -2,7 +2,7 @@ import { balanceEquation, checkBalance, describeImbalance } from '../../thermo/b
 import { formatEquation, parseEquation } from '../../thermo/equation';
 import { isThermoError } from '../../thermo/errors';
 import { lookupParseOptions } from '../../thermo/lookup-parse-options';
-import type { SpeciesLookup } from '../../thermo/species-library';
+import type { SpeciesDefinition, StructureLookup } from '../../thermo/structure/structure-lookup-type';
 
 export interface BalanceCheck {
   equation: string;
@@ -12,8 +12,10 @@ export interface BalanceCheck {
 }
 
 // Parse problems are answers here, not errors: the editor shows them while the user types.
-export function checkEquationBalance(text: string, lookup: SpeciesLookup): BalanceCheck | { error: { code: string; message: string; position: number | null } } {
+export function checkEquationBalance(text: string, base: StructureLookup, species?: Record<string, SpeciesDefinition>): BalanceCheck | { error: { code: string; message: string; position: number | null } } {
   try {
+    // The step's labels are read as the step defines them; a bad definition is an answer like a parse error.
+    const lookup = species && Object.keys(species).length ? base.withLabels(species) : base;
     const parsed = parseEquation(text, lookupParseOptions(lookup));
     const report = checkBalance(parsed);
     if (report.isBalanced) return { equation: formatEquation(parsed), isBalanced: true, message: 'Balanced.', balanced: formatEquation(parsed) };

@@ -3,11 +3,12 @@
 import { useQuery } from '@tanstack/react-query';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { balanceQuery } from '@/lib/queries/routes';
+import type { StepInput } from '@/lib/schemas/route';
 
 // The live balance check under the equation field; "Balance" swaps in the smallest-integer form.
-export function BalanceCheck({ equation, canEdit, onApply }: { equation: string; canEdit: boolean; onApply: (balanced: string) => void }) {
+export function BalanceCheck({ equation, species, canEdit, onApply }: { equation: string; species?: StepInput['species']; canEdit: boolean; onApply: (balanced: string) => void }) {
   const settled = useDebouncedValue(equation.trim(), 400);
-  const check = useQuery({ ...balanceQuery(settled), enabled: settled.length > 0 });
+  const check = useQuery({ ...balanceQuery(settled, species), enabled: settled.length > 0 });
 
   if (!settled) return null;
   const answer = check.data;

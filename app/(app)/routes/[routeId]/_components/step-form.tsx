@@ -94,7 +94,7 @@ function StepFormView({
             {...register('equation')}
           />
           <FieldError id={`${id}-equation-error`} message={errors.equation?.message} />
-          <BalanceCheck equation={equation} canEdit={canEdit} onApply={(balanced) => setValue('equation', balanced, { shouldValidate: true, shouldDirty: true })} />
+          <BalanceCheck equation={equation} species={step.species} canEdit={canEdit} onApply={(balanced) => setValue('equation', balanced, { shouldValidate: true, shouldDirty: true })} />
         </div>
 
         <div className="grid grid-cols-2 gap-2">
