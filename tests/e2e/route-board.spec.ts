@@ -118,6 +118,8 @@ test('a designer builds a three-step route, remedies an uphill step, and finds i
 
 test('a reviewer reads a route without any edit controls', async ({ page }) => {
   await signIn(page, emailOf('reviewer'), DEMO_PASSWORD);
+  // Earlier specs add routes to the demo team, so the demo route may sit past the first page: search for it.
+  await page.getByRole('searchbox', { name: 'Search' }).fill('steam reforming');
   await expect(page.getByRole('link', { name: /steam reforming/ })).toBeVisible();
   await expect(page.getByRole('button', { name: 'New route' })).toHaveCount(0);
   await expect(page.getByRole('button', { name: /Duplicate/ })).toHaveCount(0);
