@@ -99,8 +99,7 @@ class StructureAwareLookup implements StructureLookup {
     }
     if ('smiles' in def) {
       const structure = this.chem.parse(def.smiles, at(field, 'smiles'));
-      const name = def.name ?? identifierIndex().byInchiKey(structure.inchikey)?.name ?? null;
-      return this.keyForStructure(structure, def.phase, name, def.estimate === true, { structure: at(field, 'smiles'), phase: at(field, 'phase') });
+      return this.keyForStructure(structure, def.phase, def.name ?? null, def.estimate === true, { structure: at(field, 'smiles'), phase: at(field, 'phase') });
     }
     if (!def.estimate) {
       const known = this.base.resolveAlias(def.name, def.phase);
@@ -150,7 +149,9 @@ class StructureAwareLookup implements StructureLookup {
     }
     let record: SpeciesRecord;
     try {
-      record = { ...estimateSpecies(this.chem, structure, phase, name).record, key };
+      // Only a new estimate needs a name from the identifier table; a library match never loads it.
+      const named = name ?? identifierIndex().byInchiKey(structure.inchikey)?.name ?? null;
+      record = { ...estimateSpecies(this.chem, structure, phase, named).record, key };
     } catch (err) {
       if (!(err instanceof ThermoError)) throw err;
       const field = err.field === 'phase' ? blame.phase : blame.structure;
