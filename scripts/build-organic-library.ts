@@ -7,9 +7,10 @@
 // - A row that is a substance the NBS/NASA library already has (same composition, phase and a shared name)
 //   annotates that record with its structure instead; where the row's value is a newer evaluation (ATcT ΔfH°,
 //   JANAF/NASA S°) that differs from NBS 1982, the newer value replaces it and the difference is kept for σ.
-import { readFileSync, writeFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import Papa from 'papaparse';
+import { writeOrCheck } from './support/write-or-check';
 import { loadChem, type Chem } from '../lib/thermo/structure/chem';
 import type { CpForm, CpModel, SourceSpread, SpeciesFlag, SpeciesRecord } from '../lib/thermo/species-types';
 import { organicKey, type OrganicAnnotation, type OrganicLibraryFile } from '../lib/thermo/structure/organic-format';
@@ -218,13 +219,7 @@ async function main(): Promise<void> {
     annotations,
   };
   const text = `${JSON.stringify(out)}\n`;
-  if (process.argv.includes('--check')) {
-    const same = readFileSync(OUT, 'utf8') === text;
-    console.log(same ? `${path.relative(ROOT, OUT)} is up to date` : `${path.relative(ROOT, OUT)} is stale; rebuild it`);
-    process.exitCode = same ? 0 : 1;
-    return;
-  }
-  writeFileSync(OUT, text);
+  if (!writeOrCheck(ROOT, OUT, text)) return;
   console.log(`wrote ${records.length} organic species and ${annotations.length} annotations (${out.meta.counts.newerEvaluations} newer evaluations) to ${path.relative(ROOT, OUT)}; skipped ${JSON.stringify(skipped)}`);
 }
 

@@ -1,9 +1,10 @@
 // Builds lib/thermo/data/species-library.json from the shared reference data so the committed
 // file can be regenerated and diffed. Run: npx tsx scripts/build-species-library.ts
 // With --check it only compares and exits 1 if the committed file is stale.
-import { readFileSync, writeFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import Papa from 'papaparse';
+import { writeOrCheck } from './support/write-or-check';
 import { curatedAliases } from './species-aliases';
 import { AQUEOUS_RANGE_K, NO_CP_RANGE_K } from '../lib/thermo/species-state';
 import type {
@@ -232,13 +233,7 @@ function main(): void {
     species,
   };
   const text = `${JSON.stringify(out, null, 1)}\n`;
-  if (process.argv.includes('--check')) {
-    const same = readFileSync(OUT, 'utf8') === text;
-    console.log(same ? `${path.relative(ROOT, OUT)} is up to date` : `${path.relative(ROOT, OUT)} is stale; rebuild it`);
-    process.exitCode = same ? 0 : 1;
-    return;
-  }
-  writeFileSync(OUT, text);
+  if (!writeOrCheck(ROOT, OUT, text)) return;
   console.log(`wrote ${species.length} species to ${path.relative(ROOT, OUT)}`);
 }
 
