@@ -1,7 +1,11 @@
 'use client';
 
-import { memo, useEffect } from 'react';
+import { memo, useEffect, useMemo } from 'react';
 import { Handle, Position, useUpdateNodeInternals, type NodeProps } from 'reactflow';
+import { EquationText } from '@/components/chemistry/equation-text';
+import { FormulaText } from '@/components/chemistry/formula-text';
+import { hasDrawing, namesOf, type StepStructures } from '@/components/chemistry/structure-brief';
+import { StructureStrip } from '@/components/chemistry/structure-strip';
 import type { StepClass } from '@/lib/thermo/route';
 import { ESTIMATE_GLYPH } from '../ladder/ladder-uncertainty';
 import { NodeClassBadge } from './class-badge';
@@ -24,6 +28,8 @@ export interface StepNodeData {
   /** open flags and unresolved comments, in words ("" when none) */
   reviewText: string;
   hasFlags: boolean;
+  /** the step's species from its evaluation (names, formulas, SMILES, origins); null before the first answer */
+  structures: StepStructures | null;
 }
 
 export const reactantHandleId = (species: string) => `r:${species}`;
@@ -44,6 +50,7 @@ function StepNodeView({ id, data, selected }: NodeProps<StepNodeData>) {
   const handleKey = `${data.reactants.join('|')}>${data.products.join('|')}`;
   // Handles follow the equation; React Flow must re-measure them when the species change.
   useEffect(() => updateNodeInternals(id), [id, handleKey, updateNodeInternals]);
+  const names = useMemo(() => namesOf(data.structures), [data.structures]);
 
   return (
     <div
@@ -61,7 +68,10 @@ function StepNodeView({ id, data, selected }: NodeProps<StepNodeData>) {
           {data.reviewText}
         </p>
       ) : null}
-      <p className="break-words px-2 py-1.5 font-mono text-[12px] leading-snug text-ink">{data.equation || <span className="text-ink-faint">blank step: type an equation</span>}</p>
+      {hasDrawing(data.structures) ? <StructureStrip structures={data.structures} label={data.label} className="mx-2 mt-1.5" /> : null}
+      <p className="break-words px-2 py-1.5 text-[12px] leading-snug text-ink" data-testid="step-equation">
+        {data.equation ? <EquationText equation={data.equation} names={names} /> : <span className="text-ink-faint">blank step: type an equation</span>}
+      </p>
       <div className="flex justify-between gap-2 px-2 pb-1 text-ink-soft">
         <span>T {data.temperatureText}</span>
         <span className="tabular-nums">
@@ -76,20 +86,20 @@ function StepNodeView({ id, data, selected }: NodeProps<StepNodeData>) {
         </span>
       </div>
       {data.reactants.length + data.products.length > 0 ? (
-        <div className="flex justify-between gap-3 border-t border-paper-edge py-1 font-mono text-[10px] text-ink-faint">
+        <div className="flex justify-between gap-3 border-t border-paper-edge py-1 text-[10px] text-ink-faint">
           <ul aria-label="Consumes" className="flex flex-col gap-1">
             {data.reactants.map((species) => (
               <li key={species} className="relative pl-2">
-                <Handle type="target" id={reactantHandleId(species)} position={Position.Left} className={HANDLE_CLASS} title={`consumes ${species}`} />
-                {species}
+                <Handle type="target" id={reactantHandleId(species)} position={Position.Left} className={HANDLE_CLASS} title={`consumes ${names.get(species) ?? species}`} />
+                <FormulaText value={species} name={names.get(species) ?? null} />
               </li>
             ))}
           </ul>
           <ul aria-label="Produces" className="flex flex-col items-end gap-1">
             {data.products.map((species) => (
               <li key={species} className="relative pr-2">
-                {species}
-                <Handle type="source" id={productHandleId(species)} position={Position.Right} className={HANDLE_CLASS} title={`produces ${species}`} />
+                <FormulaText value={species} name={names.get(species) ?? null} />
+                <Handle type="source" id={productHandleId(species)} position={Position.Right} className={HANDLE_CLASS} title={`produces ${names.get(species) ?? species}`} />
               </li>
             ))}
           </ul>

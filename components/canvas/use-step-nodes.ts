@@ -2,6 +2,7 @@
 
 import { useMemo, useRef } from 'react';
 import { MarkerType, type Edge, type Node } from 'reactflow';
+import { structuresFromSpecies, structuresKey } from '@/components/chemistry/structure-brief';
 import { equationSpecies } from '@/lib/route-editor/equation-species';
 import { temperatureKOf } from '@/lib/route-editor/temperature-text';
 import type { LinkInput, StepInput } from '@/lib/schemas/route';
@@ -32,6 +33,7 @@ function nodeData(step: StepInput, label: string, result: RouteStepResult | unde
     estimatedText: estimateSpoken(engine, energyUnit) ?? '',
     reviewText: reviewMarkText(marks),
     hasFlags: (marks?.flags ?? 0) > 0,
+    structures: engine && engine.species.length ? structuresFromSpecies(engine.species) : null,
   };
 }
 
@@ -47,6 +49,7 @@ function sameData(a: StepNodeData, b: StepNodeData): boolean {
     a.signUncertainText === b.signUncertainText &&
     a.estimatedText === b.estimatedText &&
     a.reviewText === b.reviewText &&
+    structuresKey(a.structures) === structuresKey(b.structures) &&
     a.reactants.join('|') === b.reactants.join('|') &&
     a.products.join('|') === b.products.join('|')
   );

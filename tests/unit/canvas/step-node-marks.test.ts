@@ -11,7 +11,7 @@ import { StepNode, type StepNodeData } from '@/components/canvas/step-node';
 const base: StepNodeData = {
   label: 'KRED reduction', equation: 'ketone + IPA -> alcohol + acetone', reactants: ['ketone', 'IPA'], products: ['alcohol', 'acetone'],
   temperatureText: '30 °C', deltaGName: 'ΔG', deltaGText: '−3.2 kJ/mol', cls: 'marginal', signUncertain: false, signUncertainText: '', estimatedText: '',
-  reviewText: '', hasFlags: false,
+  reviewText: '', hasFlags: false, structures: null,
 };
 
 function node(data: Partial<StepNodeData>): string {
