@@ -18,6 +18,7 @@ import { activeMembership, useProfile } from '@/lib/queries/me';
 import type { WhatIf } from '@/lib/schemas/compare';
 import { CompareView } from './compare-view';
 import { RecordDecision } from './decision-form';
+import { TargetWarning } from './target-warning';
 import { WhatIfForm } from './what-if-form';
 
 // The server's field messages say what is wrong with the ids or the what-if; its headline only that something is.
@@ -61,6 +62,7 @@ export function CompareClient({ ids }: { ids: number[] }) {
 
   return (
     <div className="flex flex-col gap-4">
+      <TargetWarning routes={comparison.routes} />
       <SafetyCaution />
       <section aria-label="Comparison settings" className="flex flex-col gap-3 rounded-lg border border-paper-edge bg-white p-3">
         <WhatIfForm value={whatIf} busy={query.isFetching} onApply={setWhatIf} />

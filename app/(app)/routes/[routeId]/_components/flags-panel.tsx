@@ -10,17 +10,12 @@ import { TextAreaField } from '@/components/ui/text-area-field';
 import { When } from '@/components/ui/when';
 import { applyServerErrors } from '@/lib/forms/apply-server-errors';
 import { clearFlag, flagsQuery, raiseFlag } from '@/lib/queries/comments';
+import { FLAG_CATEGORY_LABELS } from '@/lib/review/flag-labels';
 import { CreateFlagInput, FLAG_CATEGORIES, FLAG_REASON_MAX_CHARS, type FlagDto } from '@/lib/schemas/flag';
 import { useRouteEditorStore } from '@/stores/route-editor-store';
 import { CommentComposer } from './comment-composer';
 
-const CATEGORY_LABELS: Record<(typeof FLAG_CATEGORIES)[number], string> = {
-  thermodynamics: 'Thermodynamics',
-  safety: 'Safety',
-  cost: 'Cost',
-  supply: 'Supply',
-  other: 'Other',
-};
+const CATEGORY_LABELS = FLAG_CATEGORY_LABELS;
 
 const RaiseForm = CreateFlagInput.pick({ category: true, reason: true });
 

@@ -2,7 +2,7 @@
 
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { Button } from '@/components/ui/button';
@@ -23,12 +23,17 @@ export function MoveDialog({
   to,
   teamId,
   selfId,
+  notice,
+  submitLabel,
   onClose,
   onSubmit,
 }: {
   to: RouteStatus;
   teamId: number;
   selfId: number | null;
+  /** what the person should know before confirming (the approval check) */
+  notice?: ReactNode;
+  submitLabel?: string;
   onClose: () => void;
   onSubmit: (values: { note: string; reviewerIds?: number[] }) => Promise<void>;
 }) {
@@ -57,6 +62,7 @@ export function MoveDialog({
     <Dialog open title={label.title} onClose={onClose}>
       <form onSubmit={submit} noValidate className="flex flex-col gap-3">
         <p className="text-sm text-ink-soft">{label.explain}</p>
+        {notice}
         {to === 'in_review' ? (
           <fieldset className="flex flex-col gap-1">
             <legend className="text-xs font-medium">Reviewers</legend>
@@ -88,7 +94,7 @@ export function MoveDialog({
             Cancel
           </Button>
           <Button type="submit" disabled={formState.isSubmitting}>
-            {formState.isSubmitting ? 'Saving…' : label.action}
+            {formState.isSubmitting ? 'Saving…' : (submitLabel ?? label.action)}
           </Button>
         </div>
       </form>

@@ -122,7 +122,7 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
           {review.archived ? null : (
             <div className="mt-1.5 flex flex-wrap items-center gap-2">
               <AlternativesMenu routeId={routeId} />
-              <WorkflowBar routeId={routeId} teamId={review.teamId} status={review.status} role={review.role} selfId={review.selfId} />
+              <WorkflowBar routeId={routeId} teamId={review.teamId} status={review.status} role={review.role} selfId={review.selfId} stepLabels={stepLabels} />
             </div>
           )}
         </div>

@@ -10,11 +10,27 @@ import { routeKeys } from '@/lib/queries/routes';
 import { ROUTE_STATUS_LABELS, type RouteStatus } from '@/lib/schemas/workflow';
 import { allowedMoves } from '@/lib/services/workflow/transition-table';
 import { useRouteEditorStore, useRouteEditorStoreApi } from '@/stores/route-editor-store';
+import { ApprovalCheck, useApprovalCheck } from './approval-check';
 import { MoveDialog } from './move-dialog';
-import { MOVE_LABELS } from './workflow-labels';
+import { APPROVE_ANYWAY, MOVE_LABELS } from './workflow-labels';
 
 // The route's review status and the moves the caller's role may make from it.
-export function WorkflowBar({ routeId, teamId, status, role, selfId }: { routeId: number; teamId: number; status: string; role: Role; selfId: number | null }) {
+export function WorkflowBar({
+  routeId,
+  teamId,
+  status,
+  role,
+  selfId,
+  stepLabels = {},
+}: {
+  routeId: number;
+  teamId: number;
+  status: string;
+  role: Role;
+  selfId: number | null;
+  /** "Step 2 (amide formation)" by step key, for the approval check */
+  stepLabels?: Record<string, string>;
+}) {
   const store = useRouteEditorStoreApi();
   const queryClient = useQueryClient();
   const pendingEdits = useRouteEditorStore((s) => s.isDirty || s.saveStatus === 'saving');
@@ -22,6 +38,7 @@ export function WorkflowBar({ routeId, teamId, status, role, selfId }: { routeId
   const moves = allowedMoves(status, role);
   // The latest move, with its note: why the route is where it is ("edited after approval", "clear the flag first").
   const latest = useQuery(transitionsQuery(routeId)).data?.items[0];
+  const approvalCheck = useApprovalCheck(routeId, stepLabels);
 
   const submit = async (values: { note: string; reviewerIds?: number[] }) => {
     if (!moving) return;
@@ -51,7 +68,18 @@ export function WorkflowBar({ routeId, teamId, status, role, selfId }: { routeId
           {latest.note ? <span>: “{latest.note}”</span> : null}
         </p>
       ) : null}
-      {moving ? <MoveDialog to={moving} teamId={teamId} selfId={selfId} onClose={() => setMoving(null)} onSubmit={submit} /> : null}
+      {moving ? (
+        <MoveDialog
+          to={moving}
+          teamId={teamId}
+          selfId={selfId}
+          // The lead sees what is still open before approving, and the button says it approves regardless.
+          notice={moving === 'approved' ? <ApprovalCheck check={approvalCheck} /> : undefined}
+          submitLabel={moving === 'approved' && approvalCheck.summary && !approvalCheck.summary.isClear ? APPROVE_ANYWAY : undefined}
+          onClose={() => setMoving(null)}
+          onSubmit={submit}
+        />
+      ) : null}
     </div>
   );
 }

@@ -8,3 +8,6 @@ export const MOVE_LABELS: Record<RouteStatus, { action: string; title: string; e
   shelved: { action: 'Shelve', title: 'Shelve this route', explain: 'A shelved route stays readable; a lead can return it to draft.' },
   draft: { action: 'Return to draft', title: 'Return to draft', explain: 'The route becomes an editable draft again.' },
 };
+
+/** The approve button while flags or threads are still open: the lead knowingly approves over them. */
+export const APPROVE_ANYWAY = 'Approve with these open';
