@@ -11,6 +11,7 @@ export class UserPreference extends Model<InferAttributes<UserPreference>, Infer
   declare muteMention: CreationOptional<boolean>;
   declare muteStatusChange: CreationOptional<boolean>;
   declare muteCommentOnOwnedRoute: CreationOptional<boolean>;
+  declare cautionCollapsed: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -28,6 +29,8 @@ export function initUserPreference(sequelize: Sequelize): typeof UserPreference 
       muteMention: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false, field: 'mute_mention' },
       muteStatusChange: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false, field: 'mute_status_change' },
       muteCommentOnOwnedRoute: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false, field: 'mute_comment_on_owned_route' },
+      // The long safety caution folded to one line once read (the short one always stays).
+      cautionCollapsed: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false, field: 'caution_collapsed' },
       createdAt: { type: DataTypes.DATE, field: 'created_at' },
       updatedAt: { type: DataTypes.DATE, field: 'updated_at' },
     },

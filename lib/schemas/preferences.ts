@@ -16,9 +16,12 @@ export const PreferencesInput = z.strictObject({
 });
 export type PreferencesInput = z.infer<typeof PreferencesInput>;
 
-// What PATCH /api/me/preferences takes: any of the units and any of the e-mail mutes, at least one field.
+// What PATCH /api/me/preferences takes: any of the units, any of the e-mail mutes and the caution's fold, at least one field.
 export const PreferencesPatch = PreferencesInput.partial()
-  .extend({ notificationMutes: NotificationMutes.partial().optional() })
+  .extend({
+    notificationMutes: NotificationMutes.partial().optional(),
+    cautionCollapsed: z.boolean({ message: 'cautionCollapsed is true or false.' }).optional(),
+  })
   .refine((v) => Object.values(v).some((x) => x !== undefined), { message: 'Send at least one preference.', path: ['_'] });
 export type PreferencesPatch = z.infer<typeof PreferencesPatch>;
 

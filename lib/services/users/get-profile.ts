@@ -18,6 +18,8 @@ export interface ProfileDto {
   preferences: { energyUnit: EnergyUnit; temperatureUnit: TemperatureUnit; pressureUnit: PressureUnit };
   /** true stops that kind of e-mail; the in-app notification still appears. */
   notificationMutes: NotificationMutes;
+  /** The long safety caution folded to one line (the short caution always shows). */
+  cautionCollapsed: boolean;
 }
 
 export async function getProfile({ userId }: { userId: number }): Promise<ProfileDto | null> {
@@ -45,5 +47,6 @@ export async function getProfile({ userId }: { userId: number }): Promise<Profil
       pressureUnit: prefs?.pressureUnit ?? 'bar',
     },
     notificationMutes: mutesOf(prefs),
+    cautionCollapsed: prefs?.cautionCollapsed ?? false,
   };
 }

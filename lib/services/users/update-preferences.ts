@@ -6,6 +6,7 @@ import { mutesOf } from '../notifications/recipients';
 
 export interface PreferencesDto extends PreferencesInput {
   notificationMutes: NotificationMutes;
+  cautionCollapsed: boolean;
 }
 
 const MUTE_FIELDS = {
@@ -17,11 +18,12 @@ const MUTE_FIELDS = {
 
 export async function updatePreferences({ userId, preferences }: { userId: number; preferences: PreferencesPatch }): Promise<PreferencesDto> {
   const { UserPreference } = getDb().models;
-  const { notificationMutes, ...units } = preferences;
+  // Units and the caution fold are columns of the same name; mutes map to one column per kind.
+  const { notificationMutes, ...columns } = preferences;
   const mutes = Object.fromEntries(
     Object.entries(notificationMutes ?? {}).map(([kind, muted]) => [MUTE_FIELDS[kind as keyof NotificationMutes], muted]),
   );
   const [row] = await UserPreference.findOrCreate({ where: { userId }, defaults: { userId } });
-  await row.update({ ...units, ...mutes });
-  return { energyUnit: row.energyUnit, temperatureUnit: row.temperatureUnit, pressureUnit: row.pressureUnit, notificationMutes: mutesOf(row) };
+  await row.update({ ...columns, ...mutes });
+  return { energyUnit: row.energyUnit, temperatureUnit: row.temperatureUnit, pressureUnit: row.pressureUnit, notificationMutes: mutesOf(row), cautionCollapsed: row.cautionCollapsed };
 }

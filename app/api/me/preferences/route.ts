@@ -1,4 +1,4 @@
-// PATCH /api/me/preferences: the user's display units and e-mail mutes (any subset)
+// PATCH /api/me/preferences: the user's display units, e-mail mutes and the safety caution's fold (any subset)
 import { refuseOtherMethods } from '@/lib/api/method-not-allowed';
 import { withRoute } from '@/lib/api/with-route';
 import { PreferencesPatch } from '@/lib/schemas/preferences';

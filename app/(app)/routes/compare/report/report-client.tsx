@@ -13,6 +13,7 @@ import { latestDecisionQuery } from '@/lib/queries/decision-for-routes';
 import { useProfile } from '@/lib/queries/me';
 import type { WhatIf } from '@/lib/schemas/compare';
 import { CompareView } from '../compare-view';
+import { TargetWarning } from '../target-warning';
 
 // A page made for paper: the browser's print dialog saves it as PDF. Controls hide in print.
 export function ReportClient({ ids, whatIf, basis }: { ids: number[]; whatIf: WhatIf; basis: LadderBasis }) {
@@ -41,6 +42,7 @@ export function ReportClient({ ids, whatIf, basis }: { ids: number[]; whatIf: Wh
           Print or save as PDF
         </Button>
       </header>
+      <TargetWarning routes={c.routes} />
       <CompareView comparison={c} basis={basis} units={units} visible={visible} />
       <section aria-label="Decision" className="break-inside-avoid rounded-lg border border-paper-edge bg-white p-3">
         <h2 className="text-base font-semibold">Decision</h2>
@@ -53,7 +55,7 @@ export function ReportClient({ ids, whatIf, basis }: { ids: number[]; whatIf: Wh
           <p className="text-sm text-ink-soft">No decision recorded for these routes yet.</p>
         )}
       </section>
-      <SafetyCaution />
+      <SafetyCaution always />
       <p className="text-xs text-ink-faint">{c.caution}</p>
     </article>
   );
