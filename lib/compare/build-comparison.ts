@@ -37,6 +37,9 @@ function compareOne(route: RouteForComparison, lookup: SpeciesLookup): ComparedR
     archived: meta.archived, updatedAt: meta.updatedAt, updatedBy: meta.updatedBy,
   };
   if ('error' in outcome) return { ...head, ladder: null, error: outcome.error, metrics: metricsOf(facts, null) };
+  // A route whose totals wait (no step makes the target yet) compares like one the engine refused: no totals.
+  const withheld = outcome.evaluation.totalsWithheld;
+  if (withheld) return { ...head, ladder: null, error: { code: withheld.code, message: withheld.message, field: withheld.field }, metrics: metricsOf(facts, null) };
   // The engine has already read targetAmount for this evaluation, so it parses.
   const targetMol = parseAmount(request.targetAmount ?? '1 mol', 'targetAmount');
   const ladder = ladderOf(request, outcome.evaluation, targetMol, lookup);

@@ -34,5 +34,6 @@ export function energiesOf(evaluation: RouteEvaluation | null): Pick<RevisionSta
   if (!evaluation || 'error' in evaluation) return { stepDeltaG: {}, overallDeltaG_kJ: null };
   const stepDeltaG: Record<string, number | null> = {};
   for (const step of evaluation.steps) stepDeltaG[step.id] = step.result ? (step.result.deltaG_kJ ?? step.result.deltaG0_kJ) : null;
-  return { stepDeltaG, overallDeltaG_kJ: evaluation.overall.deltaG_kJ };
+  // Step energies are kept even while the route's totals wait for a complete route.
+  return { stepDeltaG, overallDeltaG_kJ: evaluation.totalsWithheld ? null : evaluation.overall.deltaG_kJ };
 }

@@ -52,6 +52,8 @@ export function evaluateRouteDocument(route: RouteLike, lookup: SpeciesLookup, f
 
 export function summariseEvaluation(route: RouteLike, evaluation: RouteEvaluation) {
   if ('error' in evaluation) return { stepCount: route.steps.length, overallDgKj: null, uphillSteps: null };
+  // The list shows no total for a route whose totals wait (no step makes the target yet); its uphill count stands.
+  if (evaluation.totalsWithheld) return { stepCount: route.steps.length, overallDgKj: null, uphillSteps: evaluation.overall.uphillSteps };
   // The list shows ΔG per mol of target, whatever amount the route is planned for.
   const targetMol = parseAmount(route.targetAmount, 'targetAmount');
   return { stepCount: route.steps.length, overallDgKj: evaluation.overall.deltaG_kJ / targetMol, uphillSteps: evaluation.overall.uphillSteps };

@@ -51,8 +51,8 @@ export async function speciesImpact({
     const steps = doc.steps
       .map((s) => ({ stepKey: s.id, before_kJ: eb.get(s.id) ?? null, after_kJ: ea.get(s.id) ?? null }))
       .filter((s) => differ(s.before_kJ, s.after_kJ));
-    const overallBefore = 'error' in b ? null : b.overall.deltaG_kJ;
-    const overallAfter = 'error' in a ? null : a.overall.deltaG_kJ;
+    const overallBefore = 'error' in b || b.totalsWithheld ? null : b.overall.deltaG_kJ;
+    const overallAfter = 'error' in a || a.totalsWithheld ? null : a.overall.deltaG_kJ;
     if (steps.length || differ(overallBefore, overallAfter)) {
       out.push({ routeId, routeName: doc.name, overallBefore_kJ: overallBefore, overallAfter_kJ: overallAfter, steps });
     }

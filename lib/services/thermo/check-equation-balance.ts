@@ -9,6 +9,20 @@ export interface BalanceCheck {
   isBalanced: boolean;
   message: string;
   balanced: string | null;
+  /** species the equation names that the library (and the team's species) lack: the step cannot be evaluated */
+  unknownSpecies: string[];
+}
+
+/** "Not in the species library: X (closest: A, B)" for each species the lookup lacks; balance alone is not enough. */
+function unknownOf(parsed: ReturnType<typeof parseEquation>, lookup: StructureLookup): { keys: string[]; message: string } {
+  const keys = [...new Set([...parsed.reactants, ...parsed.products].map((t) => t.species.key).filter((key) => !lookup.get(key)))];
+  const message = keys
+    .map((key) => {
+      const closest = lookup.suggest(key, 3);
+      return `${key} is not in the species library${closest.length ? ` (closest: ${closest.join(', ')})` : ''}.`;
+    })
+    .join(' ');
+  return { keys, message };
 }
 
 // Parse problems are answers here, not errors: the editor shows them while the user types.
@@ -18,7 +32,11 @@ export function checkEquationBalance(text: string, base: StructureLookup, specie
     const lookup = species && Object.keys(species).length ? base.withLabels(species) : base;
     const parsed = parseEquation(text, lookupParseOptions(lookup));
     const report = checkBalance(parsed);
-    if (report.isBalanced) return { equation: formatEquation(parsed), isBalanced: true, message: 'Balanced.', balanced: formatEquation(parsed) };
+    const unknown = unknownOf(parsed, lookup);
+    if (report.isBalanced) {
+      const message = unknown.keys.length ? `Balanced, but ${unknown.message}` : 'Balanced.';
+      return { equation: formatEquation(parsed), isBalanced: true, message, balanced: formatEquation(parsed), unknownSpecies: unknown.keys };
+    }
     let balanced: string | null = null;
     let extra = '';
     try {
@@ -27,7 +45,8 @@ export function checkEquationBalance(text: string, base: StructureLookup, specie
       if (!isThermoError(error)) throw error;
       extra = ` ${error.message}`;
     }
-    return { equation: formatEquation(parsed), isBalanced: false, message: `${describeImbalance(report)}.${extra}`, balanced };
+    const unknownText = unknown.keys.length ? ` ${unknown.message}` : '';
+    return { equation: formatEquation(parsed), isBalanced: false, message: `${describeImbalance(report)}.${extra}${unknownText}`, balanced, unknownSpecies: unknown.keys };
   } catch (error) {
     if (!isThermoError(error)) throw error;
     return { error: { code: error.code, message: error.message, position: error.position ?? null } };

@@ -16,9 +16,9 @@ import { driversKey, remedyKey, remedyMemo } from './remedy-memo';
 import { temperatureRemedy } from './remedy-temperature';
 import { MAX_ROUTE_LINKS, MAX_ROUTE_STEPS, RouteTooLargeError, routeError } from './route-errors';
 import { DEFAULT_MARGINAL_THRESHOLD_KJ, MAX_TARGET_AMOUNT_MOL, MIN_YIELD_FRACTION } from './route-limits';
-import { buildRouteGraph } from './route-graph';
 import { withStepLabels } from './route-labels';
 import { routeSigma } from './route-sigma';
+import { extentsOrProblem, graphOrProblem, noExtents } from './totals-withheld';
 import type { DriverReaction, Remedy, RouteEvaluateResponse, RouteStepResult, RouteWarning, StepErrorInfo } from './route-types';
 import { classify, stepNotes } from './step-notes';
 import { readStoichiometry, speciesKey, type Stoichiometry } from './stoichiometry';
@@ -109,26 +109,30 @@ function checkTarget(target: string, lookup: SpeciesLookup): void {
   }
 }
 
-function computeRemedies(e: Evaluated, goal_kJ: number, ctx: CouplingContext): Remedy[] {
+/**
+ * `goal_kJ` is 0 for an uphill step and the threshold for a marginal one; the temperature search always aims at
+ * `threshold_kJ`, the downhill boundary, since a temperature that only crosses zero leaves the step marginal.
+ */
+function computeRemedies(e: Evaluated, goal_kJ: number, threshold_kJ: number, ctx: CouplingContext): Remedy[] {
   const r = e.result!;
   // Fitted ΔH°, ΔS° get condition remedies only: the temperature search and coupling sums read the library's species.
   if (e.request.override) return conditionsRemedies(e.request, r, goal_kJ, ctx.lookup);
   return [
-    temperatureRemedy(e.request, r, goal_kJ, ctx.lookup),
+    temperatureRemedy(e.request, r, threshold_kJ, ctx.lookup),
     ...conditionsRemedies(e.request, r, goal_kJ, ctx.lookup),
     ...(e.nu ? couplingRemedies(e.request, r, e.nu, goal_kJ, ctx) : []),
   ];
 }
 
-function remediesFor(e: Evaluated, goal_kJ: number, ctx: CouplingContext, drivers: string): Remedy[] {
+function remediesFor(e: Evaluated, goal_kJ: number, threshold_kJ: number, ctx: CouplingContext, drivers: string): Remedy[] {
   const memo = remedyMemo(ctx.lookup);
-  const key = remedyKey(e.request, goal_kJ, drivers);
+  const key = remedyKey(e.request, `${goal_kJ}|${threshold_kJ}`, drivers);
   const hit = memo.get(key);
   if (hit) {
     for (const [id, why] of hit.failed) ctx.failed.set(id, why);
     return hit.remedies;
   }
-  const remedies = computeRemedies(e, goal_kJ, ctx);
+  const remedies = computeRemedies(e, goal_kJ, threshold_kJ, ctx);
   // The drivers that failed at this step's temperature, whichever step first met the failure.
   const T = e.result!.temperature_K;
   const failed = ctx.drivers
@@ -140,7 +144,8 @@ function remediesFor(e: Evaluated, goal_kJ: number, ctx: CouplingContext, driver
 
 /**
  * Energies are for `targetAmount` of the target (per mol of target with the default 1 mol). Steps come
- * back in `order`. A step without an extent (disconnected, unknown) or with an error is left out of
+ * back in `order`. A target no step makes yet, several final steps, an unknown target or links that loop
+ * do not fail the route: every step keeps its own result and `totalsWithheld` says why the totals wait. A step without an extent (disconnected, unknown) or with an error is left out of
  * the totals; its cumulative values carry the running sum. Classes, counts, remedies and
  * smallestDrivingForce_kJ use ΔG per mol of reaction as written; largestUphill_kJ uses ξ·ΔG.
  */
@@ -149,22 +154,19 @@ export function evaluateRoute(request: RouteEvaluateRequest, opts: RouteOptions)
   const { amount, threshold, yields } = readInputs(request);
   // The target and links may name a label the steps define; each step still evaluates with its own map only.
   const routeLookup = withStepLabels(lookup, request.steps);
-  checkTarget(request.target, routeLookup);
-  const links = request.links ?? [];
-  const graph = buildRouteGraph(
-    request.steps.map((s) => s.id),
-    links,
-  );
+  const ids = request.steps.map((s) => s.id);
+  // A loop or a link to a missing step holds back the totals; each step is still evaluated on its own.
+  const linked = graphOrProblem(ids, request.links ?? []);
+  const { graph } = linked;
+  const links = linked.problem ? [] : (request.links ?? []);
   const evaluated = request.steps.map((s, i) => evaluateOne(s, i, lookup));
-  const ext = computeExtents({
-    graph,
-    links,
-    nu: evaluated.map((e) => e.nu),
-    yields,
-    target: request.target,
-    targetAmount_mol: amount,
-    lookup: routeLookup,
-  });
+  const totals = linked.problem
+    ? { ext: noExtents(ids), problem: linked.problem }
+    : extentsOrProblem(ids, () => {
+        checkTarget(request.target, routeLookup);
+        return computeExtents({ graph, links, nu: evaluated.map((e) => e.nu), yields, target: request.target, targetAmount_mol: amount, lookup: routeLookup });
+      });
+  const ext = totals.ext;
   const drivers = prepareDrivers(opts.drivers ?? DEFAULT_DRIVERS, lookup);
   const ctx: CouplingContext = { drivers: drivers.prepared, lookup, cache: new Map(), failed: new Map() };
   const driverSet = driversKey(drivers.prepared);
@@ -195,7 +197,7 @@ export function evaluateRoute(request: RouteEvaluateRequest, opts: RouteOptions)
       cumulative0_kJ: cumulative0,
       class: cls,
       signUncertain: r?.uncertainty.signUncertain ?? false,
-      remedies: needsRemedy && opts.remedies !== false ? remediesFor(e, cls === 'uphill' ? 0 : threshold, ctx, driverSet) : [],
+      remedies: needsRemedy && opts.remedies !== false ? remediesFor(e, cls === 'uphill' ? 0 : threshold, threshold, ctx, driverSet) : [],
       notes: r ? stepNotes(r, xi, lookup) : [],
     };
   });
@@ -225,5 +227,6 @@ export function evaluateRoute(request: RouteEvaluateRequest, opts: RouteOptions)
       overallSigmaUpperBound: sigma.upperBound,
     },
     warnings,
+    totalsWithheld: totals.problem,
   });
 }

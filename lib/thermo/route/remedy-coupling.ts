@@ -1,10 +1,12 @@
 // Coupling remedy: step + m·driver with the smallest m (0.5 steps) that brings ΔG below the goal,
-// the combined equation evaluated by the engine itself, sorted by combined ΔG.
+// the combined equation evaluated by the engine itself, ranked by what a designer could really add
+// (coupling-partners.ts), then by combined ΔG.
 import { fraction } from 'mathjs';
 import type { EvaluateRequest } from '../../schemas/evaluate';
 import { evaluateStep, type EvaluateResponse } from '../evaluate';
 import { isThermoError } from '../errors';
 import type { SpeciesLookup } from '../species-library';
+import { partnerFit, type PartnerFit } from './coupling-partners';
 import type { PreparedDriver } from './drivers';
 import { num } from './route-format';
 import type { CouplingRemedy } from './route-types';
@@ -75,20 +77,22 @@ export function couplingRemedies(
   const species = stepActivities(request, result, ctx.lookup);
   // The combined reaction needs no equilibrium composition; its species differ from the step's.
   const { initial: _i, totalPressure: _t, volume: _v, electrons: _e, ...plain } = request;
-  const candidates: { d: PreparedDriver; dr: EvaluateResponse; exact: number; start: number }[] = [];
+  const candidates: { d: PreparedDriver; dr: EvaluateResponse; exact: number; start: number; fit: PartnerFit }[] = [];
   for (const d of ctx.drivers) {
     const dr = driverAt(ctx, d, request, T);
     // A driver outside its data at this temperature (liquid water at 1200 K) is no driver.
     if (!dr || dr.deltaG0_kJ >= 0 || dr.warnings.some((w) => w.code === 'T_OUT_OF_RANGE')) continue;
+    const fit = partnerFit(stepNu, d.nu, dr, ctx.lookup);
+    if (fit.excluded) continue;
     const exact = (stepDeltaG - goal_kJ) / -dr.deltaG0_kJ;
     let start = Math.max(0.5, Math.ceil(exact * 2) / 2);
     if (start === exact) start += 0.5;
-    candidates.push({ d, dr, exact, start });
+    candidates.push({ d, dr, exact, start, fit });
   }
-  // Most negative estimated combined ΔG first: the step plus the driver's standard ΔG° at its multiple.
-  candidates.sort((a, b) => a.start * a.dr.deltaG0_kJ - b.start * b.dr.deltaG0_kJ);
+  // The most plausible partner first; among equals, the most negative estimated combined ΔG (step + m·ΔG°).
+  candidates.sort((a, b) => b.fit.score - a.fit.score || a.fit.added - b.fit.added || a.start * a.dr.deltaG0_kJ - b.start * b.dr.deltaG0_kJ);
   const out: CouplingRemedy[] = [];
-  for (const { d, dr, exact, start } of candidates) {
+  for (const { d, dr, exact, start, fit } of candidates) {
     if (out.length >= MAX_COUPLING_OPTIONS) break;
     let m = start;
     for (let attempt = 0; attempt <= EXTRA_TRIES && m <= MAX_MULTIPLE; attempt++, m += 0.5) {
@@ -125,9 +129,12 @@ export function couplingRemedies(
         combinedDeltaG_kJ: combinedDeltaG,
         conditions: Object.keys(maps).length ? maps : null,
         warnings: [...new Set(r.warnings.map((w) => w.code))],
+        partnerScore: fit.score,
+        partnerReasons: fit.reasons,
       });
       break;
     }
   }
-  return out.sort((a, b) => a.combinedDeltaG_kJ - b.combinedDeltaG_kJ);
+  // Already in rank order: candidates are worked out in it.
+  return out;
 }

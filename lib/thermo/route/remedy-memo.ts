@@ -27,6 +27,6 @@ export function remedyMemo(lookup: SpeciesLookup): BoundedMemo<string, RemedyEnt
   return memo;
 }
 
-export function remedyKey(request: unknown, goal_kJ: number, drivers: string): string {
+export function remedyKey(request: unknown, goal_kJ: number | string, drivers: string): string {
   return `${goal_kJ}|${JSON.stringify(request)}|${drivers}`;
 }

@@ -1,5 +1,6 @@
 // Temperature remedy: the nearest temperature in the data range where ΔG at the step's own
-// pressures and concentrations drops below the goal, which way that is, and ΔG on either side.
+// pressures and concentrations drops below the goal (the route's downhill threshold, so the step
+// lands downhill, not marginal), which way that is, and ΔG on either side.
 import type { EvaluateRequest } from '../../schemas/evaluate';
 import { R_GAS } from '../constants';
 import { evaluateStep, type EvaluateResponse } from '../evaluate';
@@ -79,7 +80,7 @@ export function temperatureRemedy(request: EvaluateRequest, result: EvaluateResp
     return inRange.filter((T, i) => i === 0 || T - inRange[i - 1]! > 1e-3).map(sample);
   };
   const what = lnQ === null ? 'ΔG°' : 'ΔG at the step’s pressures and concentrations';
-  const goalText = goal_kJ === 0 ? '0' : `${num(goal_kJ)} kJ/mol`;
+  const goalText = goal_kJ === 0 ? '0' : `${num(goal_kJ)} kJ/mol, the route’s downhill threshold`;
   if (range === null) {
     return { ...base, summary: 'The species’ data ranges do not overlap, so no temperature can be suggested' };
   }

@@ -33,6 +33,17 @@ export interface StepErrorInfo {
   field: string | null;
 }
 
+/** A problem with the route as a whole (target, links): the steps are evaluated, the totals wait. */
+export interface RouteProblem {
+  code: ThermoErrorCode;
+  message: string;
+  /** the request field it belongs to ("target", "links", "links.0.to"), or null */
+  field: string | null;
+  hint: string | null;
+  /** the engine's details, e.g. `cycle` (step ids), `candidates`, `suggestions` */
+  details?: Record<string, unknown>;
+}
+
 export interface TemperatureSample {
   T_K: number;
   deltaG0_kJ: number;
@@ -107,6 +118,10 @@ export interface CouplingRemedy {
   /** the step's pressures and concentrations used for the combined equation (species still in it) */
   conditions: ConditionMapsOut | null;
   warnings: string[];
+  /** how plausible a partner the driver is for this step (route/coupling-partners.ts); the list is ranked by it */
+  partnerScore: number;
+  /** the score in words: shared species, same phase, an unstable state at T */
+  partnerReasons: string[];
 }
 
 export type Remedy = TemperatureRemedy | ConditionsRemedy | CouplingRemedy;
@@ -152,6 +167,9 @@ export interface RouteOverall {
 export interface RouteEvaluateResponse {
   order: string[];
   steps: RouteStepResult[];
+  /** sums over the counted steps; meaningless (zero) while totalsWithheld is set */
   overall: RouteOverall;
   warnings: RouteWarning[];
+  /** why the route totals wait for a complete route (no step makes the target yet, a loop): null once they stand */
+  totalsWithheld: RouteProblem | null;
 }

@@ -101,10 +101,15 @@ describe('links and connectivity', () => {
     expect(r.overall.deltaG0_kJ).toBeCloseTo(evaluateRoute(ammoniumChlorideTree(), { lookup: nbsLookup }).overall.deltaG0_kJ, 9);
   });
 
-  it('errors when no step makes the target, and when several final steps make it', () => {
-    expect(() => evaluateRoute({ ...ammoniumChlorideTree(), target: 'CaO(s)' }, { lookup: nbsLookup })).toThrow(/No step makes the target CaO\(s\)/);
+  it('withholds the totals when no step makes the target, or several final steps make it; the steps keep their results', () => {
+    const none = evaluateRoute({ ...ammoniumChlorideTree(), target: 'CaO(s)' }, { lookup: nbsLookup });
+    expect(none.totalsWithheld?.message).toMatch(/No step makes the target CaO\(s\)/);
+    expect(none.totalsWithheld?.field).toBe('target');
+    expect(none.steps.map((s) => s.class)).not.toContain('error');
+    expect(none.steps.every((s) => s.extent_mol === null && s.deltaG_kJ === null)).toBe(true);
     const two = { target: 'NH3(g)', steps: [{ id: 'a', equation: NH3_SYNTHESIS }, { id: 'b', equation: NH3_SYNTHESIS }] };
-    expect(() => evaluateRoute(two, { lookup: nbsLookup })).toThrow(/Several steps make the target NH3\(g\).*a, b/);
+    expect(evaluateRoute(two, { lookup: nbsLookup }).totalsWithheld?.message).toMatch(/Several steps make the target NH3\(g\).*a, b/);
+    expect(evaluateRoute(ammoniumChlorideTree(), { lookup: nbsLookup }).totalsWithheld).toBeNull();
   });
 });
 

@@ -49,26 +49,30 @@ describe('graph errors', () => {
     ],
   };
 
-  it('names the steps of a cycle, and only those', () => {
-    const err = thrown(() => evaluateRoute(cyclic, { lookup: nbsLookup }));
-    expect(err.code).toBe('INVALID_VALUE');
-    expect(err.field).toBe('links');
-    expect(new Set(err.details?.cycle as string[])).toEqual(new Set(['b', 'c']));
-    expect(err.message).toMatch(/b → c → b|c → b → c/);
+  // A loop or a dangling link holds back the totals only: each step is still evaluated on its own.
+  it('names the steps of a cycle, and only those, while every step keeps its result', () => {
+    const r = evaluateRoute(cyclic, { lookup: nbsLookup });
+    const problem = r.totalsWithheld!;
+    expect(problem.code).toBe('INVALID_VALUE');
+    expect(problem.field).toBe('links');
+    expect(new Set(problem.details?.cycle as string[])).toEqual(new Set(['b', 'c']));
+    expect(problem.message).toMatch(/b → c → b|c → b → c/);
+    expect(r.order).toEqual(['a', 'b', 'c', 'd']);
+    expect(r.steps.every((s) => s.result !== null && s.extent_mol === null)).toBe(true);
   });
 
   it('treats a step linked to itself as a cycle', () => {
     const req = chain('NH3(g)', [NH3_SYNTHESIS], []);
     req.links = [{ from: 's1', to: 's1', species: 'NH3(g)' }];
-    expect(thrown(() => evaluateRoute(req, { lookup: nbsLookup })).details?.cycle).toEqual(['s1']);
+    expect(evaluateRoute(req, { lookup: nbsLookup }).totalsWithheld?.details?.cycle).toEqual(['s1']);
   });
 
   it('names a link end that is not a step', () => {
     const req = chain('NH3(g)', [NH3_SYNTHESIS], []);
     req.links = [{ from: 's1', to: 'ghost', species: 'NH3(g)' }];
-    const err = thrown(() => evaluateRoute(req, { lookup: nbsLookup }));
-    expect(err.field).toBe('links.0.to');
-    expect(err.message).toContain('ghost');
+    const problem = evaluateRoute(req, { lookup: nbsLookup }).totalsWithheld!;
+    expect(problem.field).toBe('links.0.to');
+    expect(problem.message).toContain('ghost');
   });
 
   it('rejects duplicate ids, naming the id', () => {

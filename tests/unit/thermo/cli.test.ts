@@ -70,7 +70,7 @@ describe('thermo CLI', () => {
     expect((JSON.parse(r.stdout) as { error: { code: string } }).error.code).toBe('INVALID_VALUE');
   });
 
-  it('evaluates a route: the ladder ends at the sum of scaled step ΔG°, and a cycle is an error item', () => {
+  it('evaluates a route: the ladder ends at the sum of scaled step ΔG°; a cycle withholds the totals, not the steps', () => {
     const route = {
       target: 'CH3OH(g)',
       steps: [
@@ -84,13 +84,14 @@ describe('thermo CLI', () => {
     expect(r.status).toBe(0);
     const [ok, bad] = JSON.parse(r.stdout) as [
       { order: string[]; steps: { deltaG0_kJ: number; cumulative0_kJ: number; class: string }[]; overall: { deltaG0_kJ: number } },
-      { error: { code: string; message: string } },
+      { steps: { class: string }[]; totalsWithheld: { code: string; message: string } },
     ];
     expect(ok.order).toEqual(['s1', 's2']);
     expect(ok.steps[0]!.class).toBe('uphill'); // steam reforming is uphill below ~890 K at 1 bar
     expect(ok.steps[1]!.cumulative0_kJ).toBeCloseTo(ok.steps[0]!.deltaG0_kJ + ok.steps[1]!.deltaG0_kJ, 9);
     expect(ok.overall.deltaG0_kJ).toBeCloseTo(ok.steps[1]!.cumulative0_kJ, 9);
-    expect(bad.error.message).toMatch(/s1/);
+    expect(bad.totalsWithheld.message).toMatch(/s1/);
+    expect(bad.steps.map((s) => s.class)).toEqual(['uphill', ok.steps[1]!.class]);
   });
 
   it('answers the species command array-in, array-out: a library species with its source, an estimate with its groups, an error in place', () => {
