@@ -5,6 +5,7 @@ import { usePathname } from 'next/navigation';
 import type { ReactNode } from 'react';
 import { useProfile } from '@/lib/queries/me';
 import type { ProfileDto } from '@/lib/services/users/get-profile';
+import { NavMenu } from './nav-menu';
 import { NotificationBell } from './notification-bell';
 import { StepwellMark } from './stepwell-mark';
 import { TeamSwitcher } from './team-switcher';
@@ -27,12 +28,13 @@ export function AppShell({ profile: initial, children }: { profile: ProfileDto; 
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:rounded focus:bg-white focus:px-2 focus:py-1">
         Skip to content
       </a>
-      <header className="border-b border-paper-edge bg-white print:hidden">
+      {/* relative: the phone menu and the inbox open as sheets under it, as wide as the screen */}
+      <header className="relative border-b border-paper-edge bg-white print:hidden">
         <div className="mx-auto flex max-w-7xl items-center gap-4 px-4 py-2">
           <Link href="/routes" className="flex items-center gap-2 font-semibold">
             <StepwellMark /> <span>Stepwell</span>
           </Link>
-          <nav aria-label="Main" className="flex flex-1 flex-wrap gap-1">
+          <nav aria-label="Main" className="hidden flex-1 flex-wrap gap-1 lg:flex">
             {NAV.map((item) => {
               const active = pathname === item.href || pathname.startsWith(`${item.href}/`);
               return (
@@ -47,9 +49,16 @@ export function AppShell({ profile: initial, children }: { profile: ProfileDto; 
               );
             })}
           </nav>
-          <TeamSwitcher profile={profile} />
+          {/* Below lg the sections, the team and the account move into the Menu; the inbox stays in the bar. */}
+          <div className="flex-1 lg:hidden" />
+          <div className="hidden lg:block">
+            <TeamSwitcher profile={profile} />
+          </div>
           {profile.memberships.length ? <NotificationBell /> : null}
-          <UserMenu name={profile.user.name} email={profile.user.email} />
+          <div className="hidden lg:block">
+            <UserMenu name={profile.user.name} email={profile.user.email} />
+          </div>
+          <NavMenu items={NAV} profile={profile} />
         </div>
       </header>
       <main id="main" className="mx-auto w-full max-w-7xl flex-1 px-4 py-6">

@@ -2,7 +2,7 @@
 
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
-import { useRef } from 'react';
+import { useEffect, useRef, type KeyboardEvent } from 'react';
 import { When } from '@/components/ui/when';
 import { discussionKeys, markNotificationsRead, notificationsQuery } from '@/lib/queries/comments';
 import type { NotificationDto } from '@/lib/schemas/notification';
@@ -25,8 +25,25 @@ export function NotificationBell() {
     router.push(n.link);
   };
 
+  // A tap elsewhere closes it, as the menu beside it does; on a phone the open list covers the page.
+  useEffect(() => {
+    const onPointerDown = (event: PointerEvent) => {
+      const el = details.current;
+      if (el?.open && !el.contains(event.target as Node)) el.open = false;
+    };
+    document.addEventListener('pointerdown', onPointerDown);
+    return () => document.removeEventListener('pointerdown', onPointerDown);
+  }, []);
+
+  const closeOnEscape = (event: KeyboardEvent<HTMLDetailsElement>) => {
+    if (event.key !== 'Escape' || !details.current?.open) return;
+    details.current.open = false;
+    details.current.querySelector('summary')?.focus();
+  };
+
+  // Below lg the list opens as a sheet under the header (its containing block), as wide as the screen.
   return (
-    <details ref={details} className="relative">
+    <details ref={details} className="lg:relative" onKeyDown={closeOnEscape}>
       <summary className="relative cursor-pointer list-none rounded-md px-2 py-1 text-sm hover:bg-paper" aria-label={unread ? `Notifications, ${unread} unread` : 'Notifications'}>
         <span aria-hidden="true">Inbox</span>
         {unread ? (
@@ -35,7 +52,7 @@ export function NotificationBell() {
           </span>
         ) : null}
       </summary>
-      <div className="absolute right-0 z-30 mt-1 flex max-h-[28rem] w-80 flex-col overflow-hidden rounded-md border border-paper-edge bg-white text-sm shadow-lg">
+      <div className="absolute inset-x-2 top-full z-30 mt-1 flex max-h-[28rem] flex-col overflow-hidden rounded-md border border-paper-edge bg-white text-sm shadow-lg lg:inset-x-auto lg:right-0 lg:top-auto lg:w-80">
         <div className="flex items-center justify-between border-b border-paper-edge px-3 py-2">
           <p className="font-medium">Notifications</p>
           <button type="button" className="text-xs text-pine-700 hover:underline disabled:text-ink-faint" disabled={!unread || markRead.isPending} onClick={() => markRead.mutate({ all: true })}>

@@ -7,7 +7,8 @@ import { ROLE_LABELS } from '@/lib/auth/roles';
 import { apiFetch } from '@/lib/queries/api-fetch';
 import type { ProfileDto } from '@/lib/services/users/get-profile';
 
-export function TeamSwitcher({ profile }: { profile: ProfileDto }) {
+/** `isLabelShown`: the word "Team" on screen too, as in the phone menu, where the select stands alone. */
+export function TeamSwitcher({ profile, isLabelShown = false }: { profile: ProfileDto; isLabelShown?: boolean }) {
   const id = useId();
   const router = useRouter();
   const queryClient = useQueryClient();
@@ -22,8 +23,8 @@ export function TeamSwitcher({ profile }: { profile: ProfileDto }) {
   if (profile.memberships.length === 0) return null;
   const active = profile.memberships.find((m) => m.teamId === profile.activeTeamId);
   return (
-    <div className="flex items-center gap-2 text-sm">
-      <label htmlFor={id} className="sr-only">
+    <div className={`flex items-center gap-2 text-sm ${isLabelShown ? 'flex-wrap' : ''}`}>
+      <label htmlFor={id} className={isLabelShown ? 'font-medium' : 'sr-only'}>
         Team
       </label>
       <select
@@ -31,7 +32,7 @@ export function TeamSwitcher({ profile }: { profile: ProfileDto }) {
         value={profile.activeTeamId ?? ''}
         disabled={switchTeam.isPending}
         onChange={(e) => switchTeam.mutate(Number(e.target.value))}
-        className="max-w-[16rem] truncate rounded-md border border-paper-edge bg-paper px-2 py-1 text-sm"
+        className={`${isLabelShown ? 'min-w-0 flex-1' : 'max-w-[12rem] xl:max-w-[16rem]'} truncate rounded-md border border-paper-edge bg-paper px-2 py-1 text-sm`}
       >
         {profile.memberships.map((m) => (
           <option key={m.teamId} value={m.teamId}>

@@ -1,6 +1,9 @@
 'use client';
 
 import { flexRender, getCoreRowModel, useReactTable, type ColumnDef, type OnChangeFn, type SortingState } from '@tanstack/react-table';
+import { useIsPhone } from '@/lib/hooks/use-media-query';
+import { RowCards, type CardLayout } from './row-cards';
+import { ScrollRegion } from './scroll-region';
 
 // A table whose sorting and paging happen on the server: react-table only lays out rows and headers.
 export function DataTable<T>({
@@ -12,6 +15,7 @@ export function DataTable<T>({
   getRowId,
   numericColumns = [],
   isBusy = false,
+  cards,
 }: {
   caption: string;
   data: T[];
@@ -21,6 +25,8 @@ export function DataTable<T>({
   getRowId: (row: T) => string;
   numericColumns?: string[];
   isBusy?: boolean;
+  /** reflow the rows as cards on phones instead of scrolling the table sideways */
+  cards?: CardLayout;
 }) {
   const table = useReactTable({
     data,
@@ -36,8 +42,11 @@ export function DataTable<T>({
     getRowId,
   });
 
+  const isPhone = useIsPhone();
+  if (cards && isPhone) return <RowCards table={table} caption={caption} layout={cards} sorting={sorting} isBusy={isBusy} />;
+
   return (
-    <div className="overflow-x-auto rounded-lg border border-paper-edge bg-white">
+    <ScrollRegion label={caption} className="rounded-lg border border-paper-edge bg-white">
       <table className={`w-full text-sm transition-opacity ${isBusy ? 'opacity-70' : ''}`} aria-busy={isBusy}>
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-paper-deep text-left text-xs uppercase tracking-wide text-ink-faint">
@@ -86,6 +95,6 @@ export function DataTable<T>({
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

@@ -4,6 +4,7 @@ import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
 import type { DecisionRouteRef, DecisionSummaryDto } from '@/lib/services/decisions/decision-dto';
 import { When } from '../ui/when';
+import type { CardLayout } from './row-cards';
 
 /** A route named in a decision: a link while it exists, its old name marked once it is deleted. */
 export function DecisionRouteName({ route, strong = false }: { route: DecisionRouteRef; strong?: boolean }) {
@@ -33,6 +34,9 @@ export function DecisionStanding({ supersededById }: { supersededById: number | 
     </span>
   );
 }
+
+/** On phones each decision is a card headed by its number and date (DataTable `cards`). */
+export const DECISION_CARD_LAYOUT: CardLayout = { title: ['decision'] };
 
 // The decision log: paged on the server and shown in the order it was written, so no column sorts.
 export function decisionColumns(): ColumnDef<DecisionSummaryDto>[] {

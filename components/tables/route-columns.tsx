@@ -5,9 +5,12 @@ import Link from 'next/link';
 import type { RouteSummaryDto } from '@/lib/services/routes/route-dto';
 import { formatEnergy, type EnergyUnit } from '../ladder/energy-format';
 import { Button } from '../ui/button';
+import type { CardLayout } from './row-cards';
 import { When } from '@/components/ui/when';
 
 export const ROUTE_NUMERIC_COLUMNS = ['steps', 'overallDeltaG', 'uphillSteps'];
+/** On phones each route is a card: tick and name on top, actions at the foot (DataTable `cards`). */
+export const ROUTE_CARD_LAYOUT: CardLayout = { title: ['select', 'name'], footer: ['actions'], labels: { overallDeltaG: 'Overall ΔG' } };
 
 function UphillCell({ count }: { count: number | null }) {
   if (count === null) return <span className="text-ink-faint">not evaluated</span>;
@@ -128,7 +131,7 @@ export function routeColumns({
         const route = row.original;
         const isBusy = busyRouteId === route.id;
         return (
-          <div className="flex justify-end gap-1 whitespace-nowrap">
+          <div className="flex flex-wrap justify-end gap-1 whitespace-nowrap">
             {canEdit ? (
               <>
                 <Button variant="quiet" disabled={isBusy} onClick={() => onDuplicate(route)} aria-label={`Duplicate ${route.name} as an alternative`}>

@@ -29,7 +29,7 @@ export function TablePagination({
       <p>
         {first}–{last} of {total} {noun}
       </p>
-      <div className="flex items-center gap-3">
+      <div className="flex flex-wrap items-center gap-3">
         <label htmlFor={sizeId} className="flex items-center gap-1.5">
           Rows per page
           <select

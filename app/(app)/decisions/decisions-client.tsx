@@ -4,7 +4,7 @@ import { useQuery } from '@tanstack/react-query';
 import Link from 'next/link';
 import { useMemo, useState } from 'react';
 import { DataTable } from '@/components/tables/data-table';
-import { decisionColumns } from '@/components/tables/decision-columns';
+import { DECISION_CARD_LAYOUT, decisionColumns } from '@/components/tables/decision-columns';
 import { TablePagination } from '@/components/tables/table-pagination';
 import { EmptyState } from '@/components/ui/empty-state';
 import { Notice } from '@/components/ui/notice';
@@ -64,6 +64,7 @@ export function DecisionsClient() {
             onSortingChange={() => undefined}
             getRowId={(d) => String(d.id)}
             isBusy={decisions.isFetching}
+            cards={DECISION_CARD_LAYOUT}
           />
           <TablePagination
             page={page}

@@ -6,7 +6,7 @@ import { useRouter } from 'next/navigation';
 import { useMemo, useState } from 'react';
 import { CompareSelectionBar, type SelectedRoute } from '@/components/tables/compare-selection-bar';
 import { DataTable } from '@/components/tables/data-table';
-import { ROUTE_NUMERIC_COLUMNS, routeColumns } from '@/components/tables/route-columns';
+import { ROUTE_CARD_LAYOUT, ROUTE_NUMERIC_COLUMNS, routeColumns } from '@/components/tables/route-columns';
 import { TablePagination } from '@/components/tables/table-pagination';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
@@ -175,6 +175,7 @@ export function RoutesClient() {
             getRowId={(route) => String(route.id)}
             numericColumns={ROUTE_NUMERIC_COLUMNS}
             isBusy={routes.isFetching}
+            cards={ROUTE_CARD_LAYOUT}
           />
           <TablePagination
             page={page}
