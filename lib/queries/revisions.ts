@@ -30,7 +30,7 @@ export const revisionsQuery = (routeId: number, page: number) =>
 export const revisionCompareQuery = (routeId: number, from: number, to: number) =>
   queryOptions({
     queryKey: reviewKeys.compare(routeId, from, to),
-    queryFn: () => apiFetch<{ from: RevisionSummaryDto; to: RevisionSummaryDto; diff: RevisionDiff }>(`/api/routes/${routeId}/revisions/compare?from=${from}&to=${to}`),
+    queryFn: () => apiFetch<{ from: RevisionSummaryDto; to: RevisionSummaryDto; diff: RevisionDiff; stepLabels: Record<string, string> }>(`/api/routes/${routeId}/revisions/compare?from=${from}&to=${to}`),
     staleTime: Infinity,
   });
 

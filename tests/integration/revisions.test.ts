@@ -25,6 +25,7 @@ afterAll(async () => teardownTestDb(dir));
 
 type Page<T> = { items: T[]; total: number; page: number; pageSize: number };
 type SaveAnswer = { route: RouteDocumentDto; evaluation: RouteEvaluateResponse; revision: RevisionSummaryDto };
+type DragAnswer = Omit<SaveAnswer, 'revision'> & { revision: RevisionSummaryDto | null };
 
 async function newRoute(name: string): Promise<RouteDocumentDto> {
   const res = await callRoute(createRoute, { method: 'POST', userId: w.designerId, body: { name, target: 'CH3OH(g)', targetAmount: '1 mol' } });
@@ -97,7 +98,33 @@ describe('revisions: written by create and every save', () => {
     const before = first.evaluation.overall.deltaG_kJ;
     const after = next.evaluation.overall.deltaG_kJ;
     const kj = (x: number) => (Math.round(x * 10) / 10).toFixed(1).replace('-', '\u2212');
-    expect(next.revision.summary).toBe(`T of s2 298.15 → 500 K, ΔG overall ${kj(before)} → ${kj(after)} kJ`);
+    expect(next.revision.summary).toBe(`T of Step 2 (methanol from carbon monoxide) 298.15 → 500 K, ΔG overall ${kj(before)} → ${kj(after)} kJ`);
+  });
+
+  it('moving nodes saves their places without a revision of its own; the next real save carries them', async () => {
+    const route = await newRoute('Kestrel methanol moved');
+    const first = await save(route.id, saveBody(route));
+    const moved = SAMPLE_STEPS.map((st, i) => ({ ...st, position: { x: 40 + i * 310, y: 25 } }));
+    const drag = (await save(route.id, saveBody(first.route, { steps: moved }))) as DragAnswer;
+    expect(drag.revision).toBeNull();
+    expect(drag.route.version).toBe(first.route.version + 1);
+    expect(drag.route.steps.map((st) => st.position)).toEqual(moved.map((st) => st.position));
+    expect((await revisions(route.id)).page.items.map((r) => r.version)).toEqual([first.route.version, route.version]);
+    const hotter = moved.map((st) => (st.id === 's2' ? { ...st, temperature: '500 K' } : st));
+    const next = await save(route.id, saveBody(drag.route, { steps: hotter }));
+    expect(next.revision.summary).toMatch(/^T of Step 2 \(methanol from carbon monoxide\) 298\.15 → 500 K, 2 steps moved on the board, ΔG overall /);
+    const rev = (await callRoute(getRevision, { userId: w.designerId, params: { routeId: String(route.id), revisionId: String(next.revision.id) } })).body as RevisionDto;
+    expect(rev.snapshot.steps.map((st) => st.position)).toEqual(moved.map((st) => st.position));
+  });
+
+  it('a summary stored with step ids reads with labels from its own revision', async () => {
+    const route = await newRoute('Kestrel methanol old summary');
+    const saved = await save(route.id, saveBody(route));
+    await getDb().models.RouteRevision.update({ summary: 'T of s2 298.15 → 500 K, moved s1, s2' }, { where: { id: saved.revision.id } });
+    const expected = 'T of Step 2 (methanol from carbon monoxide) 298.15 → 500 K, moved Step 1 (steam reforming of methane), Step 2 (methanol from carbon monoxide)';
+    expect((await revisions(route.id)).page.items[0]!.summary).toBe(expected);
+    const one = (await callRoute(getRevision, { userId: w.reviewerId, params: { routeId: String(route.id), revisionId: String(saved.revision.id) } })).body as RevisionDto;
+    expect(one.summary).toBe(expected);
   });
 
   it('lists newest first, a page at a time, and caps the page size', async () => {
@@ -143,7 +170,9 @@ describe('revisions: compare', () => {
       path: `/api/routes/${route.id}/revisions/compare?from=${first.revision.id}&to=${second.revision.id}`,
     });
     expect(res.status).toBe(200);
-    const { diff, from, to } = res.body as { diff: RevisionDiff; from: RevisionSummaryDto; to: RevisionSummaryDto };
+    const { diff, from, to, stepLabels } = res.body as { diff: RevisionDiff; from: RevisionSummaryDto; to: RevisionSummaryDto; stepLabels: Record<string, string> };
+    // Each step by its label: s2 and s3 as numbered now, s1 (removed) as it was numbered then.
+    expect(stepLabels).toEqual({ s1: 'Step 1 (steam reforming of methane)', s2: 'Step 1 (methanol from carbon monoxide)', s3: 'Step 2 (water–gas shift)' });
     expect([from.id, to.id]).toEqual([first.revision.id, second.revision.id]);
     expect(diff.route).toEqual([{ field: 'marginalThreshold_kJ', from: -17, to: -20 }]);
     expect(diff.steps.added.map((s) => s.id)).toEqual(['s3']);

@@ -4,6 +4,7 @@ import { getDb } from '../../../db';
 import type { ActivityPosition } from '../../schemas/activity';
 import type { RouteStatus } from '../../schemas/workflow';
 import { KIND_RANK, windowFor, type ActivityEntry, type SourceWindow } from './merge-activity';
+import { readableSummaries } from '../revisions/relabel-summaries';
 import { plainExcerpt } from './plain-excerpt';
 
 /** One source's newest rows past the position; actors (and reviewers) are named afterwards by id. */
@@ -43,13 +44,16 @@ export async function revisionRows({ teamId, routeId, before, take }: SourceOpti
     limit: take,
   });
   const out = collect();
+  // Older summaries named steps by id; they read with labels from their own revision's document.
+  const summaries = await readableSummaries(rows);
   for (const r of rows) {
+    const summary = summaries.get(r.id) ?? r.summary;
     const entry: ActivityEntry = {
       at: r.createdAt.getTime(),
       seq: r.id,
       item: {
-        kind: 'revision', id: `revision:${r.id}`, at: r.createdAt.toISOString(), actor: null, stepKey: null, text: r.summary,
-        revisionId: r.id, version: r.version, summary: r.summary, restoredFromId: r.restoredFromId ?? null,
+        kind: 'revision', id: `revision:${r.id}`, at: r.createdAt.toISOString(), actor: null, stepKey: null, text: summary,
+        revisionId: r.id, version: r.version, summary, restoredFromId: r.restoredFromId ?? null,
       },
     };
     out.entries.push(entry);

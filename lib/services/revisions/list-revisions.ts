@@ -2,6 +2,7 @@ import 'server-only';
 import { getDb } from '../../../db';
 import type { ListRevisionsQuery } from '../../schemas/revision';
 import { findRouteRow } from '../routes/get-route';
+import { readableSummaries } from './relabel-summaries';
 import { toRevisionSummary } from './revision-dto';
 
 // A route's revisions, newest first, without their snapshots.
@@ -16,5 +17,6 @@ export async function listRevisions({ teamId, routeId, query }: { teamId: number
     offset: (query.page - 1) * query.pageSize,
     include: [{ model: User, as: 'author', attributes: ['name'] }],
   });
-  return { items: rows.map((r) => toRevisionSummary(r)), total: count, page: query.page, pageSize: query.pageSize };
+  const summaries = await readableSummaries(rows);
+  return { items: rows.map((r) => toRevisionSummary(r, undefined, summaries.get(r.id))), total: count, page: query.page, pageSize: query.pageSize };
 }

@@ -6,6 +6,7 @@ import type { SpeciesLookup } from '../../thermo/species-library';
 import { evaluateRouteDocument, type RouteEvaluation } from '../routes/evaluate-route-document';
 import { toRevisionState, toRevisionSummary, type RevisionSummaryDto } from './revision-dto';
 import { energiesOf, toSnapshot, type RevisionState } from './revision-snapshot';
+import { diffRevisions, isLayoutOnly } from './revision-diff';
 import { summariseRevision } from './revision-summary';
 
 /** The route's newest revision, or null for a route that has none (rows written before revisions, e.g. seeds). */
@@ -20,7 +21,11 @@ export function stateOfDocument(doc: RouteDocumentDto, evaluation: RouteEvaluati
   return { snapshot, ...energiesOf(evaluation ?? (doc.steps.length ? evaluateRouteDocument(snapshot, lookup) : null)) };
 }
 
-/** Writes the revision for a document just saved at `doc.version`, in the save's transaction. */
+/**
+ * Writes the revision for a document just saved at `doc.version`, in the save's transaction. A save that only moved
+ * nodes writes none (null): the positions are saved with the route and ride along in the next real revision, whose
+ * diff against the last one counts the moves.
+ */
 export async function recordRevision({
   doc,
   teamId,
@@ -42,8 +47,9 @@ export async function recordRevision({
   head?: string;
   restoredFromId?: number | null;
   transaction: Transaction;
-}): Promise<RevisionSummaryDto> {
+}): Promise<RevisionSummaryDto | null> {
   const next: RevisionState = { snapshot: toSnapshot(doc), ...(energies ?? energiesOf(evaluation)) };
+  if (previous && !head && !restoredFromId && isLayoutOnly(diffRevisions(previous, next))) return null;
   const row = await getDb().models.RouteRevision.create(
     {
       routeId: doc.id,

@@ -114,3 +114,10 @@ export function isEmptyDiff(diff: RevisionDiff): boolean {
     sameEnergy(diff.overallDeltaG_kJ.from, diff.overallDeltaG_kJ.to)
   );
 }
+
+/** True when the only change is where steps sit on the board: dragging a node is not a revision of its own. */
+export function isLayoutOnly(diff: RevisionDiff): boolean {
+  if (diff.steps.changed.length === 0) return false;
+  const steadyStep = diff.steps.changed.every((s) => s.fields.every((f) => f.field === 'position') && sameEnergy(s.deltaG_kJ.from, s.deltaG_kJ.to));
+  return steadyStep && isEmptyDiff({ ...diff, steps: { ...diff.steps, changed: [] } });
+}

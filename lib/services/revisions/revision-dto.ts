@@ -1,4 +1,5 @@
 import type { RouteRevision } from '../../../db/models/route-revision';
+import { readableSummary } from './revision-labels';
 import type { RevisionState, RouteSnapshot } from './revision-snapshot';
 
 export interface RevisionSummaryDto {
@@ -19,12 +20,13 @@ export interface RevisionDto extends RevisionSummaryDto {
 }
 
 // The author's name comes from an `author` include, or is passed in when the row was just written.
-export function toRevisionSummary(row: RouteRevision, authorName?: string): RevisionSummaryDto {
+// `summary` is the stored one made readable (revision-labels.ts) when the caller has done so.
+export function toRevisionSummary(row: RouteRevision, authorName?: string, summary?: string): RevisionSummaryDto {
   return {
     id: row.id,
     routeId: row.routeId,
     version: row.version,
-    summary: row.summary,
+    summary: summary ?? row.summary,
     author: { id: row.authorId, name: authorName ?? (row.get('author') as { name: string } | null | undefined)?.name ?? '—' },
     overallDeltaG_kJ: row.overallDgKj,
     restoredFromId: row.restoredFromId,
@@ -38,5 +40,5 @@ export function toRevisionState(row: RouteRevision): RevisionState {
 
 export function toRevision(row: RouteRevision): RevisionDto {
   const state = toRevisionState(row);
-  return { ...toRevisionSummary(row), snapshot: state.snapshot, stepDeltaG: state.stepDeltaG };
+  return { ...toRevisionSummary(row, undefined, readableSummary(row.summary, state.snapshot)), snapshot: state.snapshot, stepDeltaG: state.stepDeltaG };
 }

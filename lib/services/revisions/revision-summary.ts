@@ -1,19 +1,21 @@
-// One short line saying what a save changed, e.g. "+1 step, T of s3 500 → 650 K, ΔG overall −12.4 → −20.1 kJ". Pure.
+// One short line saying what a save changed, e.g. "+1 step, T of Step 2 (water–gas shift) 500 → 650 K, ΔG overall
+// −12.4 → −20.1 kJ". Steps are named by their place in route order and what they do, never by id. Pure.
+import { formatKJ, MINUS, withTrueMinus } from '../../format/numbers';
+import { stepLabels } from '../../route-editor/step-label';
 import { diffRevisions, type FieldChange, type FieldValue, type RevisionDiff } from './revision-diff';
 import type { RevisionState } from './revision-snapshot';
 
 export const MAX_SUMMARY_LENGTH = 240;
 
-const MINUS = '\u2212';
-
-function signed(text: string): string {
-  return text.replace(/(^|[\s(])-(?=\d|\.\d)/g, `$1${MINUS}`);
-}
+const signed = withTrueMinus;
 
 export function formatKj(value: number): string {
-  const rounded = Math.round(value * 10) / 10;
-  return signed((Object.is(rounded, -0) ? 0 : rounded).toFixed(1));
+  return formatKJ(value);
 }
+
+/** How a summary names a step: its full label ("Step 2 (water–gas shift)"), or the id where none is known. */
+export type StepNamer = (id: string) => string;
+const byId: StepNamer = (id) => id;
 
 function text(value: FieldValue): string {
   if (value === null) return '—';
@@ -42,8 +44,9 @@ const LABELS: Record<string, string> = {
   heatCapacity: 'Cp correction',
 };
 
-function stepFieldPart(stepId: string, change: FieldChange): string {
+function stepFieldPart(id: string, change: FieldChange, name: StepNamer): string {
   const { field, from, to } = change;
+  const stepId = name(id);
   if (field === 'equation') return `equation of ${stepId} changed`;
   if (field === 'notes') return `notes of ${stepId} edited`;
   if (field === 'heatCapacity') return `Cp correction of ${stepId} ${to ? 'on' : 'off'}`;
@@ -66,18 +69,19 @@ function routeFieldPart(change: FieldChange): string {
 
 const count = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 
-export function summaryParts(diff: RevisionDiff): string[] {
+export function summaryParts(diff: RevisionDiff, name: StepNamer = byId): string[] {
   const parts = diff.route.map(routeFieldPart);
   if (diff.steps.added.length) parts.push(`+${count(diff.steps.added.length, 'step')}`);
   if (diff.steps.removed.length) parts.push(`${MINUS}${count(diff.steps.removed.length, 'step')}`);
-  const moved: string[] = [];
+  let moved = 0;
   for (const step of diff.steps.changed) {
     for (const change of step.fields) {
-      if (change.field === 'position') moved.push(step.id);
-      else parts.push(stepFieldPart(step.id, change));
+      if (change.field === 'position') moved += 1;
+      else parts.push(stepFieldPart(step.id, change, name));
     }
   }
-  if (moved.length) parts.push(`moved ${moved.join(', ')}`);
+  // Layout is not chemistry: a move rides along with the next real change and is only counted.
+  if (moved) parts.push(`${count(moved, 'step')} moved on the board`);
   if (diff.links.added.length) parts.push(`+${count(diff.links.added.length, 'link')}`);
   if (diff.links.removed.length) parts.push(`${MINUS}${count(diff.links.removed.length, 'link')}`);
   const { from, to } = diff.overallDeltaG_kJ;
@@ -109,7 +113,8 @@ export function joinCapped(head: string, parts: string[], cap = MAX_SUMMARY_LENG
 /** `previous` is null for a route's first revision; `head` names how it came about ("Created", "Restored revision 3"). */
 export function summariseRevision(previous: RevisionState | null, next: RevisionState, head = ''): string {
   if (!previous) return joinCapped(head || 'Saved', []);
-  const parts = summaryParts(diffRevisions(previous, next));
+  const labels = stepLabels(next.snapshot.steps, next.snapshot.links);
+  const parts = summaryParts(diffRevisions(previous, next), (id) => labels.get(id)?.full ?? id);
   if (parts.length === 0) return joinCapped(head || 'No changes', []);
   return joinCapped(head, parts);
 }

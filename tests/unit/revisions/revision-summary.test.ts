@@ -18,7 +18,7 @@ describe('revision summary', () => {
   it('reads like the brief: added step, temperature change with one unit, overall ΔG with a real minus sign', () => {
     const before = state(snap([step('s1'), step('s3')]), -12.4);
     const after = state(snap([step('s1'), step('s3', { temperature: '650 K' }), step('s4')]), -20.1);
-    expect(summariseRevision(before, after)).toBe('+1 step, T of s3 500 → 650 K, ΔG overall \u221212.4 → \u221220.1 kJ');
+    expect(summariseRevision(before, after)).toBe('+1 step, T of Step 2 (methanol from carbon monoxide) 500 → 650 K, ΔG overall \u221212.4 → \u221220.1 kJ');
   });
 
   it('puts the head first and says when nothing changed', () => {
@@ -33,7 +33,15 @@ describe('revision summary', () => {
   it('words fields set, cleared, moved, and links', () => {
     const before = state(snap([step('s1'), step('s2')], { links: [{ from: 's1', to: 's2', species: 'CO(g)' }] }));
     const after = state(snap([step('s1', { totalPressure: '50 bar', temperature: undefined }), step('s2', { position: { x: 10, y: 0 } })]));
-    expect(summaryParts(diffRevisions(before, after))).toEqual(['T of s1 cleared', 'total P of s1 set to 50 bar', 'moved s2', '\u22121 link']);
+    expect(summaryParts(diffRevisions(before, after))).toEqual(['T of s1 cleared', 'total P of s1 set to 50 bar', '1 step moved on the board', '\u22121 link']);
+  });
+
+  it('names steps by their place in route order and what they do, never by id', () => {
+    const before = state(snap([step('s-8ab5e2fd'), step('s-c522bf8f', { equation: 'C2H5OH(g) -> CH3CHO(g) + H2(g)' })]));
+    const after = state(snap([step('s-8ab5e2fd'), step('s-c522bf8f', { equation: 'C2H5OH(g) -> CH3CHO(g) + H2(g)', temperature: '600 K', position: { x: 5, y: 5 } })]));
+    const line = summariseRevision(before, after);
+    expect(line).toBe('T of Step 2 (ethanol dehydrogenation) 500 → 600 K, 1 step moved on the board');
+    expect(line).not.toMatch(/\bs-[0-9a-f]{6,}\b/);
   });
 
   it('leaves out an overall ΔG change that rounds away, and notes one that appears', () => {
@@ -47,7 +55,7 @@ describe('revision summary', () => {
     const after = state(snap(many.map((id) => step(id, { temperature: '650.25 K' }))));
     const line = summariseRevision(before, after, 'Restored revision 12');
     expect(line.length).toBeLessThanOrEqual(MAX_SUMMARY_LENGTH);
-    expect(line).toMatch(/^Restored revision 12: T of s0 500 → 650\.25 K, .*, \+\d+ more$/);
+    expect(line).toMatch(/^Restored revision 12: T of Step 1 \(methanol from carbon monoxide\) 500 → 650\.25 K, .*, \+\d+ more$/);
     const shown = line.split(', ').length - 1;
     expect(Number(/\+(\d+) more$/.exec(line)![1]) + shown).toBe(60);
   });

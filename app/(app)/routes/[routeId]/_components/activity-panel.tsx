@@ -1,6 +1,7 @@
 'use client';
 
 import { useInfiniteQuery } from '@tanstack/react-query';
+import { ChemText } from '@/components/chemistry/chem-text';
 import { Button } from '@/components/ui/button';
 import { When } from '@/components/ui/when';
 import { apiFetch } from '@/lib/queries/api-fetch';
@@ -36,7 +37,8 @@ export function ActivityPanel({ routeId, stepLabels }: { routeId: number; stepLa
     initialPageParam: '',
     getNextPageParam: (last) => last.nextBefore ?? undefined,
   });
-  const stepName = (key: string) => stepLabels[key] ?? `step ${key} (removed)`;
+  // A thread or flag may outlive its step; its id means nothing to a reader.
+  const stepName = (key: string) => stepLabels[key] ?? 'a removed step';
   if (query.isPending) return <p className="text-sm text-ink-faint">Loading activity…</p>;
   if (query.isError) return <p role="alert" className="text-sm text-uphill">Could not load activity: {query.error.message}</p>;
   const items = query.data.pages.flatMap((p) => p.items);
@@ -46,7 +48,7 @@ export function ActivityPanel({ routeId, stepLabels }: { routeId: number; stepLa
       <ol className="flex flex-col divide-y divide-paper-deep" aria-label="Activity, newest first">
         {items.map((item) => (
           <li key={item.id} className="py-1.5 text-sm">
-            <span className="font-medium">{item.actor?.name ?? 'Former member'}</span> {describe(item, stepName)}
+            <span className="font-medium">{item.actor?.name ?? 'Former member'}</span> <ChemText text={describe(item, stepName)} />
             <span className="ml-2">
               <When iso={item.at} />
             </span>

@@ -1,5 +1,6 @@
 'use client';
 
+import { ChemText } from '@/components/chemistry/chem-text';
 import { useState } from 'react';
 import { CommentBody } from '@/components/review/comment-body';
 import { Button } from '@/components/ui/button';
@@ -82,7 +83,7 @@ export function CommentThread({ thread, title, actions }: { thread: ThreadDto; t
   return (
     <article className={`flex flex-col gap-2 rounded-md border p-2 ${thread.resolved ? 'border-paper-deep bg-paper' : 'border-paper-edge bg-white'}`} aria-label={`Thread on ${title}`}>
       <div className="flex items-center justify-between gap-2 text-xs">
-        <span className="font-medium text-ink-soft">{title}</span>
+        <ChemText className="font-medium text-ink-soft" text={title} />
         {thread.resolved ? <span className="text-downhill">✓ resolved{thread.resolvedBy ? ` by ${thread.resolvedBy.name}` : ''}</span> : null}
       </div>
       <OneComment comment={thread.root} actions={actions} />

@@ -1,5 +1,6 @@
 'use client';
 
+import { ChemText } from '@/components/chemistry/chem-text';
 import type { UseQueryResult } from '@tanstack/react-query';
 import { useState } from 'react';
 import { deleteComment, editComment, postComment, resolveThread } from '@/lib/queries/comments';
@@ -32,8 +33,8 @@ export function DiscussionPanel({
   const [scope, setScope] = useState<Scope>('here');
   const [showResolved, setShowResolved] = useState(false);
   const here = selectedStepId ?? null;
-  const placeName = here ? (stepLabels[here] ?? here) : 'the whole route';
-  const titleOf = (stepKey: string | null) => (stepKey ? (stepLabels[stepKey] ?? `step ${stepKey} (removed)`) : 'the whole route');
+  const placeName = here ? (stepLabels[here] ?? 'this step') : 'the whole route';
+  const titleOf = (stepKey: string | null) => (stepKey ? (stepLabels[stepKey] ?? 'a removed step') : 'the whole route');
 
   const actions: ThreadActions = {
     selfId,
@@ -66,7 +67,7 @@ export function DiscussionPanel({
     <div className="flex flex-col gap-3">
       <div className="flex flex-wrap items-center gap-3 text-xs">
         <label className="flex items-center gap-1">
-          <input type="radio" name="comment-scope" checked={scope === 'here'} onChange={() => setScope('here')} /> On {placeName}
+          <input type="radio" name="comment-scope" checked={scope === 'here'} onChange={() => setScope('here')} /> On <ChemText text={placeName} />
         </label>
         <label className="flex items-center gap-1">
           <input type="radio" name="comment-scope" checked={scope === 'all'} onChange={() => setScope('all')} /> Every thread
@@ -75,7 +76,7 @@ export function DiscussionPanel({
           <input type="checkbox" checked={showResolved} onChange={(e) => setShowResolved(e.target.checked)} /> Show resolved ({resolvedHidden})
         </label>
       </div>
-      {threads.length === 0 ? <p className="text-sm text-ink-faint">No open threads {scope === 'all' ? 'on this route' : `on ${placeName}`}.</p> : null}
+      {threads.length === 0 ? <p className="text-sm text-ink-faint">No open threads {scope === 'all' ? 'on this route' : <>on <ChemText text={placeName} /></>}.</p> : null}
       {threads.map((t) => (
         <CommentThread key={t.root.id} thread={t} title={titleOf(t.root.stepKey)} actions={actions} />
       ))}

@@ -1,5 +1,6 @@
 'use client';
 
+import { ChemText } from '@/components/chemistry/chem-text';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
@@ -34,7 +35,9 @@ function RaiseFlagForm({ routeId, stepKey, placeName, onDone }: { routeId: numbe
   });
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-1.5 rounded-md border border-paper-edge p-2" aria-label={`Flag ${placeName}`}>
-      <p className="text-xs font-medium">Flag {placeName} as weak</p>
+      <p className="text-xs font-medium">
+        Flag <ChemText text={placeName} /> as weak
+      </p>
       <label className="flex flex-col gap-1 text-xs font-medium">
         Category
         <select className={COMPACT_INPUT} {...register('category')}>
@@ -65,7 +68,7 @@ function FlagItem({ flag, title, canFlag, routeId, onDone }: { flag: FlagDto; ti
   return (
     <li className={`flex flex-col gap-1 rounded-md border p-2 ${flag.isOpen ? 'border-brass-500/50 bg-brass-100/40' : 'border-paper-deep bg-paper'}`} data-testid="flag">
       <p className="text-xs">
-        <span className="font-semibold">⚑ {CATEGORY_LABELS[flag.category]}</span> on {title} · {flag.createdBy?.name ?? 'Former member'} · <When iso={flag.createdAt} />
+        <span className="font-semibold">⚑ {CATEGORY_LABELS[flag.category]}</span> on <ChemText text={title} /> · {flag.createdBy?.name ?? 'Former member'} · <When iso={flag.createdAt} />
       </p>
       <p className="whitespace-pre-wrap text-sm">{flag.reason}</p>
       {flag.isOpen ? null : (
@@ -107,7 +110,7 @@ export function FlagsPanel({ routeId, canFlag, stepLabels, refresh }: { routeId:
   const selectedStepId = useRouteEditorStore((s) => s.selectedStepId);
   const [showCleared, setShowCleared] = useState(false);
   const query = useQuery(flagsQuery(routeId, showCleared ? 'all' : 'open'));
-  const titleOf = (key: string) => stepLabels[key] ?? `step ${key} (removed)`;
+  const titleOf = (key: string) => stepLabels[key] ?? 'a removed step';
   return (
     <div className="flex flex-col gap-3">
       <label className="flex items-center gap-1 text-xs">

@@ -2,6 +2,7 @@
 
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
+import { ChemText } from '@/components/chemistry/chem-text';
 import { formatEnergy, type EnergyUnit } from '@/components/ladder/energy-format';
 import { Button } from '@/components/ui/button';
 import { Dialog } from '@/components/ui/dialog';
@@ -40,8 +41,12 @@ export function HistoryPanel({ routeId, canEdit, unit }: { routeId: number; canE
                 <p className="text-sm">
                   <span className="font-medium">Revision {r.version}</span> · {r.author.name} · <When iso={r.createdAt} />
                 </p>
-                <p className="text-xs text-ink-soft">{r.summary}</p>
-                <p className="text-xs tabular-nums text-ink-faint">overall ΔG {formatEnergy(r.overallDeltaG_kJ, unit)}</p>
+                <p className="text-xs text-ink-soft">
+                  <ChemText text={r.summary} />
+                </p>
+                <p className="text-xs tabular-nums text-ink-faint">
+                  {r.overallDeltaG_kJ === null ? 'overall ΔG not evaluated in this revision' : `overall ΔG ${formatEnergy(r.overallDeltaG_kJ, unit)}`}
+                </p>
               </div>
               {canEdit ? (
                 <Button variant="quiet" onClick={() => setRestoring(r)}>
@@ -95,7 +100,7 @@ function RestoreDialog({ routeId, revision, onClose }: { routeId: number; revisi
 
   return (
     <Dialog open title={`Restore revision ${revision.version}?`} onClose={onClose}>
-      <p className="text-sm">The route becomes what it was in revision {revision.version} ({revision.summary}). This is saved as a new revision, so today’s version stays in the history.</p>
+      <p className="text-sm">The route becomes what it was in revision {revision.version} (<ChemText text={revision.summary} />). This is saved as a new revision, so today’s version stays in the history.</p>
       {pendingEdits ? <p className="text-sm text-marginal">Your latest edits are still saving; wait a moment.</p> : null}
       {error ? (
         <p role="alert" className="text-sm text-uphill">

@@ -11,6 +11,7 @@ import { FreeEnergyLadder } from '@/components/ladder/free-energy-ladder';
 import { RemediesPanel } from '@/components/ladder/remedies-panel';
 import { Button } from '@/components/ui/button';
 import { sameSpecies } from '@/lib/route-editor/equation-species';
+import { stepLabels as buildStepLabels } from '@/lib/route-editor/step-label';
 import type { LinkInput, StepInput } from '@/lib/schemas/route';
 import { useRouteEditorStore, useRouteEditorStoreApi } from '@/stores/route-editor-store';
 import { BoardCanvas } from './board-canvas';
@@ -43,7 +44,6 @@ export interface ReviewContext {
 export function RouteEditor({ routeId, canEdit, units, review }: { routeId: number; canEdit: boolean; units: PanelUnits; review: ReviewContext }) {
   const store = useRouteEditorStoreApi();
   // Strings, not the steps array: the editor re-renders when ids or equations change, not on every drag frame.
-  const stepIdsKey = useRouteEditorStore((s) => s.doc.steps.map((x) => x.id).join('|'));
   const equationsKey = useRouteEditorStore((s) => s.doc.steps.map((x) => `${x.id}\u0000${x.equation}`).join('\u0001'));
   const name = useRouteEditorStore((s) => s.doc.name);
   const target = useRouteEditorStore((s) => s.doc.target);
@@ -63,13 +63,16 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
   const fitView = useCallback(() => flow.current?.fitView(FIT_OPTIONS), []);
   useEditorShortcuts({ canEdit, onFitView: fitView });
 
-  // "Step n" follows the evaluation's order, so the board, the panel and the ladder count alike.
-  const order = evaluation?.order;
-  const stepLabels = useMemo(() => {
-    const ids = stepIdsKey.split('|').filter(Boolean);
-    const ranked = [...(order ?? []).filter((id) => ids.includes(id)), ...ids.filter((id) => !order?.includes(id))];
-    return Object.fromEntries(ranked.map((id, i) => [id, `Step ${i + 1}`]));
-  }, [stepIdsKey, order]);
+  // "Step n" is the step's place in route order (lib/route-editor/step-label.ts), the same function revisions,
+  // notifications and mails use: the board says "Step n", the panels "Step n (what it does)".
+  const linksKey = useRouteEditorStore((s) => s.doc.links.map((l) => `${l.from}\u0000${l.to}`).join('\u0001'));
+  const allLabels = useMemo(() => {
+    const steps = equationsKey.split('\u0001').filter(Boolean).map((entry) => entry.split('\u0000') as [string, string]).map(([id, equation]) => ({ id, equation }));
+    const links = linksKey.split('\u0001').filter(Boolean).map((entry) => entry.split('\u0000') as [string, string]).map(([from, to]) => ({ from, to }));
+    return buildStepLabels(steps, links);
+  }, [equationsKey, linksKey]);
+  const stepLabels = useMemo(() => Object.fromEntries([...allLabels].map(([id, l]) => [id, l.short])), [allLabels]);
+  const stepTitles = useMemo(() => Object.fromEntries([...allLabels].map(([id, l]) => [id, l.full])), [allLabels]);
   // The ladder already numbers its risers; its labels name the reaction.
   const ladderLabels = useMemo(
     () => Object.fromEntries(equationsKey.split('\u0001').filter(Boolean).map((entry) => entry.split('\u0000') as [string, string]).map(([id, eq]) => [id, eq || 'blank step'])),
@@ -173,7 +176,7 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
       </div>
       <p className="text-xs text-ink-faint">{canEdit ? SHORTCUT_HELP : 'F fits the view · select a step to read its details'}</p>
       {/* Below the board, so warnings appearing never shift the canvas under the pointer. */}
-      <RouteWarnings warnings={evaluation?.warnings ?? []} stepLabels={stepLabels} error={error} />
+      <RouteWarnings warnings={evaluation?.warnings ?? []} stepLabels={stepTitles} error={error} />
 
       <div className="grid gap-3 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <section aria-label="Free-energy ladder" className="rounded-lg border border-paper-edge bg-white p-3">
@@ -201,7 +204,7 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
           }}
         />
       </div>
-      <ReviewSection routeId={routeId} selfId={review.selfId} role={review.role} canEdit={canEdit} unit={units.energyUnit} stepLabels={stepLabels} data={reviewData} />
+      <ReviewSection routeId={routeId} selfId={review.selfId} role={review.role} canEdit={canEdit} unit={units.energyUnit} stepLabels={stepTitles} data={reviewData} />
       {canEdit ? <ConflictDialog routeId={routeId} /> : null}
     </div>
   );

@@ -1,8 +1,11 @@
+import { ChemText } from '@/components/chemistry/chem-text';
+import { relabelStepIds, type StepLabel } from '@/lib/route-editor/step-label';
 import type { RouteWarning } from '@/lib/thermo/route';
 
-// The engine names steps by id; people know them as "Step n".
+// The engine names steps by id; people know them as "Step n (what it does)".
 function withLabels(message: string, stepLabels: Record<string, string>): string {
-  return Object.entries(stepLabels).reduce((text, [id, label]) => text.split(id).join(label), message);
+  const labels = new Map<string, StepLabel>(Object.entries(stepLabels).map(([id, full], i) => [id, { number: i + 1, short: full, full }]));
+  return relabelStepIds(message, labels);
 }
 
 export function RouteWarnings({ warnings, stepLabels, error }: { warnings: RouteWarning[]; stepLabels: Record<string, string>; error: Error | null }) {
@@ -13,10 +16,14 @@ export function RouteWarnings({ warnings, stepLabels, error }: { warnings: Route
         <span aria-hidden="true">⚠ </span>Route warnings
       </h2>
       <ul className="mt-1 list-disc space-y-0.5 pl-5">
-        {error ? <li>The route could not be evaluated: {error.message} (the last result is still shown).</li> : null}
+        {error ? (
+          <li>
+            The route could not be evaluated: <ChemText text={withLabels(error.message, stepLabels)} /> (the last result is still shown).
+          </li>
+        ) : null}
         {warnings.map((w, i) => (
           <li key={`${w.code}-${i}`}>
-            {withLabels(w.message, stepLabels)}
+            <ChemText text={withLabels(w.message, stepLabels)} />
           </li>
         ))}
       </ul>
