@@ -1,6 +1,7 @@
 // A CSV file or pasted table of K(T) → rows of text cells (T, value, optional σ), with messages for what cannot be read.
 // Comma, semicolon or tab separated; a first row that is not numeric is taken as a header.
 import Papa from 'papaparse';
+import { dataRowAt, ROW_COUNTING, rowName } from '../csv/row-numbers';
 import { MAX_DATA_POINTS, MAX_DATA_TEXT_BYTES, type DataRowInput } from '../schemas/fit-data';
 
 export interface ParsedTable {
@@ -40,12 +41,16 @@ export function parseDataTable(text: string): ParsedTable {
   if (body.trim() === '') throw new TableError('The table is empty.');
   const parsed = Papa.parse<string[]>(body.trim(), { skipEmptyLines: 'greedy', delimitersToGuess: [',', ';', '\t'] });
   const quoteError = parsed.errors.find((e) => e.type === 'Quotes');
-  if (quoteError) throw new TableError(`Row ${(quoteError.row ?? 0) + 1}: an opening quote is never closed.`);
   let data = parsed.data.map((r) => r.map((c) => c.trim()));
   // One cell per line means no separator was found: try runs of spaces, as copied from a text table.
   if (data.every((r) => r.length === 1)) data = data.map((r) => r[0]!.split(/\s+/));
+  const hasHeader = data.length > 0 && !isNumericCell(data[0]![0] ?? '');
+  if (quoteError) {
+    const n = dataRowAt(body.trim(), quoteError.index ?? 0, { hasHeader, delimiter: parsed.meta.delimiter });
+    throw new TableError(`${rowName(n)}: an opening quote is never closed. ${ROW_COUNTING}`);
+  }
   let header: string[] | null = null;
-  if (data.length > 0 && !isNumericCell(data[0]![0] ?? '')) {
+  if (hasHeader) {
     header = data[0]!;
     data = data.slice(1);
   }
@@ -55,7 +60,7 @@ export function parseDataTable(text: string): ParsedTable {
   }
   if (data.length > MAX_DATA_POINTS) throw new TableError(`A data set has at most ${MAX_DATA_POINTS} points; this table has ${data.length}.`);
   const rows = data.map((r, i) => {
-    if (r.length > width) throw new TableError(`Row ${i + 1 + (header ? 1 : 0)} has ${r.length} cells; the table has ${width} columns.`);
+    if (r.length > width) throw new TableError(`${rowName(i + 1)} has ${r.length} cells; the table has ${width} columns. ${ROW_COUNTING}`);
     return { T: r[0] ?? '', value: r[1] ?? '', sigma: r[2] ?? '' };
   });
   return { rows, header };

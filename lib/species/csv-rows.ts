@@ -1,6 +1,7 @@
 // Reads a species CSV into checked rows: each cell in its column's unit (or a unit written in the cell),
 // then the same checks as the form (ranges, provenance, the ΔfG° = ΔfH° − TΔfS° consistency check).
 import Papa from 'papaparse';
+import { dataRowAt, ROW_COUNTING, rowName } from '../csv/row-numbers';
 import { TeamSpeciesInput, type TeamSpeciesValues } from '../schemas/species';
 import { buildSpecies, type BuiltSpecies } from './build-species';
 import type { ConsistencyResult } from './consistency';
@@ -107,7 +108,10 @@ export function readSpeciesCsv(text: string): CsvReading {
   }
   if (body.length === 0) return { ok: false, problems: ['The file has a header but no rows.'] };
   const { columns, problems } = readHeader(header);
-  const broken = parsed.errors.filter((e) => e.type === 'Quotes').map((e) => `Row ${e.row ?? 0}: a quoted cell is not closed.`);
+  // Papa may report one bad quote twice (invalid, then missing): one message per row.
+  const brokenRows = new Set(parsed.errors.filter((e) => e.type === 'Quotes').map((e) => dataRowAt(text, e.index ?? 0, { hasHeader: true })));
+  const broken = [...brokenRows].map((n) => `${rowName(n)}: a quoted cell is not closed.`);
+  if (broken.length) broken.push(ROW_COUNTING);
   if (problems.length || broken.length) return { ok: false, problems: [...problems, ...broken] };
   const rows = body.map((cells, i) => checkRow(cells, columns, i + 1));
   const first = new Map<string, number>();

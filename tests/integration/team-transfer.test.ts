@@ -247,6 +247,9 @@ describe('team export and import', () => {
       const fields = errorOf(res.body).fields ?? {};
       expect(Object.keys(fields), label).toEqual([field]);
       expect(fields[field], label).toMatch(message);
+      // The headline says the place in words, rows counted from 1 like every upload message: [1] is row 2.
+      const [, table, index, column] = /^tables\.(\w+)\[(\d+)\]\.(\w+)$/.exec(field)!;
+      expect(errorOf(res.body).message, label).toContain(`table ${table}, row ${Number(index) + 1}, column ${column} (row 1 is the first entry of the table): `);
       expect(await teamCounts(target.teamId), label).toEqual({ routes: 0, revisions: 0, comments: 0, flags: 0, decisions: 0, transitions: 0, species: 0 });
     }
   });

@@ -2,9 +2,10 @@
 
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
-import { useId, useState } from 'react';
+import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Dialog } from '@/components/ui/dialog';
+import { FileInput } from '@/components/ui/file-input';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/queries/api-fetch';
 import { importRouteFile, routeKeys } from '@/lib/queries/routes';
@@ -60,7 +61,6 @@ export function ImportRouteDialog({ open, onClose }: { open: boolean; onClose: (
 function ImportRouteForm({ onCancel }: { onCancel: () => void }) {
   const router = useRouter();
   const queryClient = useQueryClient();
-  const inputId = useId();
   const [read, setRead] = useState<(RouteFileRead & { name: string }) | null>(null);
   const upload = useMutation({
     mutationFn: (json: Record<string, unknown>) => importRouteFile(json),
@@ -91,22 +91,7 @@ function ImportRouteForm({ onCancel }: { onCancel: () => void }) {
         A route file is the JSON Stepwell exports for a route: the route request the command-line tool reads, plus the board’s name, notes and positions. The new route
         lands in your team as a draft.
       </p>
-      <div className="flex flex-col gap-1">
-        <label htmlFor={inputId} className="text-sm font-medium text-ink">
-          Route file
-        </label>
-        <input
-          id={inputId}
-          type="file"
-          accept=".json,application/json"
-          aria-describedby={`${inputId}-hint`}
-          onChange={(e) => void handleFile(e.target.files?.[0])}
-          className="text-sm file:mr-3 file:rounded-md file:border file:border-paper-edge file:bg-white file:px-3 file:py-1.5 file:text-sm file:font-medium hover:file:bg-paper-deep"
-        />
-        <p id={`${inputId}-hint`} className="text-xs text-ink-faint">
-          A .json file of at most 1 MB.
-        </p>
-      </div>
+      <FileInput label="Route file" accept=".json,application/json" hint="A .json file of at most 1 MB." onFile={(file) => void handleFile(file)} />
 
       <div aria-live="polite" className="flex flex-col gap-2">
         {read && !read.ok ? <Notice tone="error">{read.message}</Notice> : null}

@@ -6,6 +6,7 @@ import type { TeamExportFile } from '../../schemas/team-transfer';
 import { recordEvent } from '../audit/record-event';
 import { IMPORT_KEY_PATTERN, newImportKey } from '../species/import-storage';
 import { COLUMN_RULES, checkCell, typeRule } from './column-rules';
+import { refuseTeamFile } from './file-place';
 import { remapJsonCell } from './remap-json';
 import { contentTables, transferTables, type TransferTable } from './transfer-tables';
 
@@ -20,8 +21,9 @@ export interface ImportTeamResult {
   formerMembers: number;
 }
 
+// A function declaration, so the compiler narrows after a call as it does for `never`.
 function invalid(where: string, message: string): never {
-  throw new AppError('VALIDATION', 'The team file does not hold together.', { fields: { [where]: message } });
+  return refuseTeamFile(where, message);
 }
 
 // Everything in one transaction: any bad row rolls the whole import back, so a refused file creates nothing.

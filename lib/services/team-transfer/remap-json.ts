@@ -1,10 +1,11 @@
-import { AppError } from '../../api/errors';
 import { parseMentions } from './export-team';
+import { refuseTeamFile } from './file-place';
 
 type Cell = string | number | boolean | null;
 
+// A function declaration, so the compiler narrows after a call as it does for `never`.
 function invalid(where: string, message: string): never {
-  throw new AppError('VALIDATION', 'The team file does not hold together.', { fields: { [where]: message } });
+  return refuseTeamFile(where, message);
 }
 
 function parse(value: Cell, where: string): unknown {

@@ -23,6 +23,12 @@ describe('parseDataTable', () => {
     expect(() => parseDataTable('a,b,c,d\n1,2,3,4')).toThrow(/two or three columns/);
     expect(() => parseDataTable('x'.repeat(300 * 1024))).toThrow(/256 KB/);
   });
+
+  it('numbers rows as the species import does: row 1 is the first data row, the header and blank lines not counted', () => {
+    expect(() => parseDataTable('T,K\n300,1.5\n\n400,2,0.1,9\n')).toThrow(/^Row 2 has 4 cells.*Row 1 is the first data row under the header/);
+    expect(() => parseDataTable('300,1.5\n\n400,"2\n')).toThrow(/^Row 2: an opening quote/);
+    expect(() => parseDataTable('T,K\n300,1.5\n\n400,"2\n500,3\n')).toThrow(/^Row 2: an opening quote is never closed/);
+  });
 });
 
 describe('readRows', () => {

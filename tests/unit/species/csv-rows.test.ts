@@ -49,4 +49,9 @@ describe('species CSV rows', () => {
     const r = readSpeciesCsv(many);
     expect(r).toEqual({ ok: false, problems: [expect.stringMatching(/5,001 rows; one import takes at most 5,000/)] });
   });
+
+  it('names the data row of an unclosed quote, skipping blank lines, once, and says how rows are counted', () => {
+    const r = readSpeciesCsv(`${HEADER}\nCO2,g,ok,-393.509,-394.359,213.74,citation,NBS 1982\n\n"CO,g,broken,-110.5,-137.2,197.7,citation,NBS 1982\n`);
+    expect(r).toEqual({ ok: false, problems: ['Row 2: a quoted cell is not closed.', expect.stringMatching(/^Row 1 is the first data row under the header; the header and blank lines are not counted/)] });
+  });
 });

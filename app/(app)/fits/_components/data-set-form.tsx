@@ -2,12 +2,14 @@
 
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { useState, type ChangeEvent } from 'react';
+import { useState } from 'react';
 import { useFieldArray, useForm, type Path } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
+import { FileInput } from '@/components/ui/file-input';
 import { COMPACT_INPUT } from '@/components/ui/input-class';
 import { Notice } from '@/components/ui/notice';
 import { TextField } from '@/components/ui/text-field';
+import { ROW_COUNTING } from '@/lib/csv/row-numbers';
 import { applyServerErrors } from '@/lib/forms/apply-server-errors';
 import { apiFetch } from '@/lib/queries/api-fetch';
 import { fitKeys } from '@/lib/queries/fits';
@@ -62,8 +64,13 @@ export function DataSetFormView({ onCreated }: { onCreated(set: DataSetDto): voi
     },
   });
 
-  const onFile = async (e: ChangeEvent<HTMLInputElement>) => {
-    const file = e.target.files?.[0];
+  // A new file starts clean: the previous file's messages (its own, and the server's per row) go.
+  const onFile = async (file: File | undefined) => {
+    setBanner(null);
+    setCellErrors({});
+    create.reset();
+    form.clearErrors('text');
+    form.setValue('text', '');
     if (!file) return;
     try {
       form.setValue('text', await readCsvFile(file), { shouldValidate: true });
@@ -111,10 +118,7 @@ export function DataSetFormView({ onCreated }: { onCreated(set: DataSetDto): voi
         ))}
       </fieldset>
       {source === 'csv' ? (
-        <label className="flex flex-col gap-1 text-sm">
-          CSV file: temperature, K or ln K, and optionally σ; a header row is fine
-          <input type="file" accept=".csv,.txt,.tsv,text/csv" onChange={onFile} />
-        </label>
+        <FileInput label="CSV file: temperature, K or ln K, and optionally σ; a header row is fine" accept=".csv,.txt,.tsv,text/csv" hint={ROW_COUNTING} onFile={(file) => void onFile(file)} />
       ) : null}
       {source === 'paste' ? <textarea aria-label="Pasted table" rows={8} className={COMPACT_INPUT} placeholder={'T,K\n300,0.18\n320,0.75'} {...form.register('text')} /> : null}
       {source !== 'grid' && errors.text?.message ? <p className="text-sm text-uphill">{errors.text.message}</p> : null}
@@ -152,6 +156,7 @@ export function DataSetFormView({ onCreated }: { onCreated(set: DataSetDto): voi
           {rowMessages.map(([k, m]) => (
             <li key={k}>{m}</li>
           ))}
+          {source === 'grid' ? null : <li className="list-none text-xs text-ink-soft">{ROW_COUNTING}</li>}
         </ul>
       ) : null}
       <Button type="submit" className="self-start" disabled={create.isPending}>

@@ -2,9 +2,11 @@
 
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import Link from 'next/link';
-import { useId, useState } from 'react';
+import { useState } from 'react';
 import { Button } from '@/components/ui/button';
+import { FileInput } from '@/components/ui/file-input';
 import { Notice } from '@/components/ui/notice';
+import { ROW_COUNTING } from '@/lib/csv/row-numbers';
 import { ApiError } from '@/lib/queries/api-fetch';
 import { commitSpeciesImport, speciesKeys, uploadSpeciesCsv } from '@/lib/queries/species';
 import type { DuplicateChoice } from '@/lib/schemas/species';
@@ -20,7 +22,6 @@ function problemsOf(error: unknown): string[] {
 }
 
 export function SpeciesImportClient() {
-  const fileId = useId();
   const queryClient = useQueryClient();
   const [preview, setPreview] = useState<ImportPreviewDto | null>(null);
   const [choices, setChoices] = useState<Record<string, DuplicateChoice>>({});
@@ -31,9 +32,11 @@ export function SpeciesImportClient() {
     onSuccess: () => queryClient.invalidateQueries({ queryKey: speciesKeys.all }),
   });
 
+  // A new choice starts clean: no message from the previous file stays on screen.
   function handleFile(file: File | undefined) {
     setLocalError(null);
     setPreview(null);
+    upload.reset();
     commit.reset();
     if (!file) return;
     // Checked here too so a large file is not sent at all.
@@ -53,10 +56,7 @@ export function SpeciesImportClient() {
         <code className="block overflow-x-auto rounded bg-paper-deep px-2 py-1 text-xs text-ink">{EXAMPLE_HEADER}</code>
         <p>Leave ΔfG° blank to derive it from ΔfH° and S°. Provenance is citation, measured or estimated; the reference column says which publication, data set or method.</p>
       </div>
-      <div className="flex flex-col gap-1">
-        <label htmlFor={fileId} className="text-sm font-medium">CSV file</label>
-        <input id={fileId} type="file" accept=".csv,text/csv" onChange={(e) => handleFile(e.target.files?.[0])} disabled={upload.isPending || commit.isPending} className="text-sm" />
-      </div>
+      <FileInput label="CSV file" accept=".csv,text/csv" hint={`At most 2 MB. ${ROW_COUNTING}`} onFile={handleFile} disabled={upload.isPending || commit.isPending} />
       {upload.isPending ? <p role="status" className="text-sm text-ink-soft">Checking the file…</p> : null}
       {localError ? <Notice tone="error">{localError}</Notice> : null}
       {upload.isError ? <Notice tone="error" title="The file was not accepted">{problemsOf(upload.error).map((p) => <p key={p}>{p}</p>)}</Notice> : null}
