@@ -3,6 +3,7 @@ import { z } from 'zod';
 import type { PressureUnit, TemperatureUnit } from '../schemas/preferences';
 import { StepInput } from '../schemas/route';
 import { equationSpecies, speciesPhase } from './equation-species';
+import { readPressure, readTemperature } from './quantity-text';
 import { temperatureKOf } from './temperature-text';
 
 export interface FormUnits {
@@ -10,17 +11,37 @@ export interface FormUnits {
   pressureUnit: PressureUnit;
 }
 
-const ConditionRow = z.object({
-  species: z.string(),
-  kind: z.enum(['pressure', 'concentration']),
-  value: z.string().trim().max(64, { message: 'At most 64 characters.' }),
-});
+const CONCENTRATION = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:e[+-]?\d+)?\s*(?:mol\/L|M|mmol\/L|mM)?$/i;
+
+// Checked as people type: a pressure in any unit the engine reads ("50 atm" beside a bar field), a concentration in mol/L.
+const ConditionRow = z
+  .object({
+    species: z.string(),
+    kind: z.enum(['pressure', 'concentration']),
+    value: z.string().trim().max(64, { message: 'At most 64 characters.' }),
+  })
+  .superRefine((row, ctx) => {
+    if (!row.value) return;
+    if (row.kind === 'pressure') {
+      const read = readPressure(row.value, 'bar');
+      if (!read.ok) ctx.addIssue({ code: 'custom', path: ['value'], message: read.message });
+    } else if (!CONCENTRATION.test(row.value)) {
+      ctx.addIssue({ code: 'custom', path: ['value'], message: 'Write a concentration in mol/L, e.g. 0.5.' });
+    }
+  });
 export type ConditionRow = z.infer<typeof ConditionRow>;
 
 // Built from StepInput's own pieces, so the form and the save schema cannot drift apart.
 export const StepFormSchema = z.object({
   equation: StepInput.shape.equation,
-  temperature: z.string().trim().max(64),
+  temperature: z
+    .string()
+    .trim()
+    .max(64)
+    .superRefine((value, ctx) => {
+      const read = readTemperature(value, 'K');
+      if (!read.ok) ctx.addIssue({ code: 'custom', message: read.message });
+    }),
   standardPressure: z.enum(['1 bar', '1 atm']),
   heatCapacity: z.enum(['integrate', 'constant']),
   conditions: z.array(ConditionRow),
@@ -81,6 +102,11 @@ export function toFormValues(step: StepInput, units: FormUnits): StepFormInput {
   };
 }
 
+function temperatureText(value: string, units: FormUnits): string {
+  const read = readTemperature(value, units.temperatureUnit);
+  return read.ok ? read.text : quantity(value, TEMPERATURE_UNIT_TEXT[units.temperatureUnit]);
+}
+
 function quantity(value: string, unit: string): string {
   return PLAIN_NUMBER.test(value) ? `${value} ${unit}` : value;
 }
@@ -90,12 +116,16 @@ export function toStepPatch(values: StepFormValues, units: FormUnits): Partial<S
   const concentrations: Record<string, string> = {};
   for (const row of values.conditions) {
     if (!row.value) continue;
-    if (row.kind === 'pressure') pressures[row.species] = quantity(row.value, units.pressureUnit);
+    if (row.kind === 'pressure') {
+      // A unit typed with the number is kept (and its spelling made one the engine reads: "50 ATM" → "50 atm").
+      const read = readPressure(row.value, units.pressureUnit);
+      pressures[row.species] = read.ok ? read.text : row.value;
+    }
     else concentrations[row.species] = quantity(row.value, 'mol/L');
   }
   return {
     equation: values.equation,
-    temperature: values.temperature ? quantity(values.temperature, TEMPERATURE_UNIT_TEXT[units.temperatureUnit]) : undefined,
+    temperature: values.temperature ? temperatureText(values.temperature, units) : undefined,
     standardPressure: values.standardPressure,
     heatCapacity: values.heatCapacity === 'integrate',
     pressures: Object.keys(pressures).length > 0 ? pressures : undefined,
