@@ -2,7 +2,7 @@
 // S°(298), ΔfG°(298), Cp(T) as a Wilhoit fit, a σ measured on published data, and the groups used.
 import { R_GAS, T_REF } from '../constants';
 import { ThermoError } from '../errors';
-import type { Chem } from '../structure/chem';
+import type { Chem, ParsedStructure } from '../structure/chem';
 import { elementEntropySum } from './gani/element-entropy';
 import { cpLimits } from './rmg/cp-limits';
 import { entrySource } from './rmg/entry-source';
@@ -83,9 +83,11 @@ function withBensonAlcohols(mol: MolGraph, sum: GroupSum): GroupSum {
   return { ...sum, contributions, values };
 }
 
-export function estimateGas(chem: Chem, smiles: string, db: RmgDatabase): GasEstimate {
-  // RDKit's parse is not called: its InChI step costs more than the whole estimate
-  const built = buildMolecule(chem, smiles, db.atomTypes);
+/** `structure`: a SMILES, or the resolver's parsed structure (its molecule is reused; no second RDKit parse, no InChI). */
+export function estimateGas(chem: Chem, structure: string | ParsedStructure, db: RmgDatabase): GasEstimate {
+  // From a SMILES, chem.parse is not called: its InChI step costs more than the whole estimate
+  const built = buildMolecule(chem, structure, db.atomTypes);
+  const smiles = typeof structure === 'string' ? structure : structure.smiles;
   const mol = built.graph;
   const { formula, elements } = composition(mol.atoms);
   const charge = mol.atoms.reduce((s, a) => s + a.charge, 0);

@@ -25,6 +25,8 @@ export interface ParsedStructure {
   radicalElectrons: number;
   /** true when the SMILES carries tetrahedral or double-bond stereo */
   hasStereo: boolean;
+  /** RDKit's JSON of the parsed molecule (atoms in input order), so the estimator builds its graph without parsing again */
+  molJson: RdkitMolJson;
 }
 
 export interface Chem {
@@ -41,9 +43,14 @@ export function loadChem(): Promise<Chem> {
   return loading;
 }
 
-interface MolJson {
-  molecules: { atoms: { z?: number; impHs?: number; chg?: number; nRad?: number }[] }[];
-  defaults: { atom: { z: number; impHs: number; chg: number; nRad: number } };
+/** The parts of RDKit's commonchem JSON the engine reads. */
+export interface RdkitMolJson {
+  defaults: { atom: { z: number; impHs: number; chg: number; nRad: number }; bond: { bo: number } };
+  molecules: {
+    atoms: { z?: number; impHs?: number; chg?: number; nRad?: number }[];
+    bonds?: { bo?: number; atoms: [number, number] }[];
+    extensions?: { name: string; aromaticBonds?: number[] }[];
+  }[];
 }
 
 function hillFormula(elements: Record<string, number>, charge: number): string {
@@ -114,7 +121,7 @@ function createChem(rdkit: RDKitModule): Chem {
     return withMol(
       smiles,
       (mol) => {
-        const json = JSON.parse(mol.get_json()) as MolJson;
+        const json = JSON.parse(mol.get_json()) as RdkitMolJson;
         const defaults = json.defaults.atom;
         const atoms = json.molecules.flatMap((m) => m.atoms);
         if (atoms.length > MAX_HEAVY_ATOMS) {
@@ -147,6 +154,7 @@ function createChem(rdkit: RDKitModule): Chem {
           heavyAtoms,
           radicalElectrons,
           hasStereo: /[@/\\]/.test(canonical),
+          molJson: json,
         };
       },
       field,

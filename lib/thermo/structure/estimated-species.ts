@@ -75,9 +75,11 @@ function safeJoback(chem: Chem, smiles: string): JobackEstimate | null {
   }
 }
 
-function gasEstimate(chem: Chem, smiles: string): GasResult {
+function gasEstimate(chem: Chem, structure: ParsedStructure): GasResult {
+  const smiles = structure.smiles;
   try {
-    return fromRmg(estimateGas(chem, smiles, loadRmgDatabase()));
+    // the resolver's parse is handed on: one RDKit parse per new structure
+    return fromRmg(estimateGas(chem, structure, loadRmgDatabase()));
   } catch (err) {
     if (!isThermoError(err) || err.code !== 'UNSUPPORTED_STRUCTURE') throw err;
     // Charged, radical or outside C, H, O, N, S, halogens: no method applies, so no number.
@@ -119,7 +121,7 @@ export function estimateSpecies(chem: Chem, structure: ParsedStructure, phase: L
   if (structure.charge !== 0) {
     throw new ThermoError('UNSUPPORTED_STRUCTURE', `${structure.formula} is an ion: estimating it needs its pKa and the biochemical standard state, which Stepwell does not do yet. Give the neutral form, or enter measured values as a team species.`, { field: 'smiles' });
   }
-  const gas = gasEstimate(chem, structure.smiles);
+  const gas = gasEstimate(chem, structure);
   let values: GasValues = gas.values;
   let cp = gas.cp;
   let range = gas.cpRange;
@@ -135,7 +137,7 @@ export function estimateSpecies(chem: Chem, structure: ParsedStructure, phase: L
     info.groups.push(...groupsOf(liquid.vaporisationGroups).map((g) => ({ ...g, label: `Joback: ${g.label}` })));
     info.notes.push(...liquid.notes, ...liquid.warnings);
   } else if (phase === 'aq') {
-    const aq = aqueousFromGas(chem, structure.smiles, gas.values);
+    const aq = aqueousFromGas(chem, structure, gas.values);
     values = aq;
     cp = null;
     range = [AQUEOUS_RANGE_K[0], AQUEOUS_RANGE_K[1]];

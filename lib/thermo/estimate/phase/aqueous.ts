@@ -5,7 +5,7 @@
 //   ΔfG°(aq) = ΔfG°(g) + ΔG°_solv;  ΔfH°(aq) = ΔfH°(g) + ΔH_solv (Mintz; no standard-state term);
 //   S°(aq) = S°(g) + (ΔH_solv − ΔG°_solv)/T.
 import { T_REF } from '../../constants';
-import type { Chem } from '../../structure/chem';
+import type { Chem, ParsedStructure } from '../../structure/chem';
 import { assertNeutralClosedShell } from '../solvation/neutral-check';
 import { GROUP_DESCRIPTOR_DG_SIGMA_KJ, GROUP_DESCRIPTOR_DH_SIGMA_KJ, LSER_DG_SIGMA_KJ, MINTZ_DH_SIGMA_KJ } from '../solvation/solvation-accuracy';
 import { estimateSoluteDescriptors, type LibraryUse, type SoluteEstimate } from '../solvation/solute-descriptors';
@@ -38,9 +38,9 @@ const NOTES = [
   '298.15 K only; infinite dilution, ideal solution.',
 ];
 
-export function aqueousFromGas(chem: Chem, smiles: string, gas: GasValues, options: { library?: LibraryUse } = {}): AqueousEstimate {
-  assertNeutralClosedShell(chem, smiles);
-  const solute = estimateSoluteDescriptors(chem, smiles, options);
+export function aqueousFromGas(chem: Chem, structure: string | ParsedStructure, gas: GasValues, options: { library?: LibraryUse } = {}): AqueousEstimate {
+  assertNeutralClosedShell(chem, structure);
+  const solute = estimateSoluteDescriptors(chem, structure, options);
   const d = solute.descriptors;
   const benNaim = dGsolvBenNaim(d);
   const shift = gasStandardStateShift();

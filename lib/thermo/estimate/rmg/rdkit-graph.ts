@@ -1,6 +1,6 @@
 // Builds the RMG molecule graph from a SMILES through RDKit: explicit H, RDKit's Kekulé bond
 // orders, SSSR, RMG aromaticity, lone pairs and atom types.
-import { type Chem, MAX_HEAVY_ATOMS } from '../../structure/chem';
+import { type Chem, MAX_HEAVY_ATOMS, type ParsedStructure, type RdkitMolJson } from '../../structure/chem';
 import { ELEMENT_SYMBOLS } from '../../formula';
 import { ThermoError } from '../../errors';
 import type { AtomTypeTable } from './atom-types';
@@ -8,15 +8,6 @@ import { type BondOrder, MolGraph } from './mol-graph';
 import { applyRmgAromaticity } from './rmg-aromaticity';
 
 const ELEMENTS_BY_Z = ['', ...ELEMENT_SYMBOLS];
-
-interface RdkitJson {
-  defaults: { atom: { z: number; impHs: number; chg: number; nRad: number }; bond: { bo: number } };
-  molecules: {
-    atoms: { z?: number; impHs?: number; chg?: number; nRad?: number }[];
-    bonds?: { bo?: number; atoms: [number, number] }[];
-    extensions?: { name: string; aromaticBonds?: number[] }[];
-  }[];
-}
 
 export interface BuiltMolecule {
   graph: MolGraph;
@@ -45,8 +36,9 @@ function connected(graph: MolGraph): boolean {
   return count === graph.size;
 }
 
-export function buildMolecule(chem: Chem, smiles: string, table: AtomTypeTable): BuiltMolecule {
-  const json = chem.withMol(smiles, (mol) => JSON.parse(mol.get_json()) as RdkitJson);
+/** `structure`: a SMILES, or a structure the resolver has parsed already (its RDKit JSON is reused, no second parse). */
+export function buildMolecule(chem: Chem, structure: string | ParsedStructure, table: AtomTypeTable): BuiltMolecule {
+  const json = typeof structure === 'string' ? chem.withMol(structure, (mol) => JSON.parse(mol.get_json()) as RdkitMolJson) : structure.molJson;
   const mixture = (): ThermoError => new ThermoError('UNSUPPORTED_STRUCTURE', 'Give one molecule: the SMILES holds several disconnected parts.', { field: 'smiles' });
   if (json.molecules.length !== 1) throw mixture();
   const mol = json.molecules[0]!;

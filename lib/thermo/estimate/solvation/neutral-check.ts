@@ -1,15 +1,15 @@
 // The Abraham/Mintz relations hold for neutral, closed-shell solutes. Charge-separated neutral groups
 // (nitro, N-oxides, azides: + and − on bonded atoms) are fine; ions, zwitterions and radicals are not.
 import { ThermoError } from '../../errors';
-import type { Chem } from '../../structure/chem';
+import type { Chem, ParsedStructure } from '../../structure/chem';
 
 interface MolJson {
   defaults: { atom: { chg: number; nRad: number } };
   molecules: { atoms: { chg?: number; nRad?: number }[]; bonds?: { atoms: [number, number] }[] }[];
 }
 
-export function assertNeutralClosedShell(chem: Chem, smiles: string): void {
-  const json = chem.withMol(smiles, (mol) => JSON.parse(mol.get_json()) as MolJson);
+export function assertNeutralClosedShell(chem: Chem, structure: string | ParsedStructure): void {
+  const json: MolJson = typeof structure === 'string' ? chem.withMol(structure, (mol) => JSON.parse(mol.get_json()) as MolJson) : structure.molJson;
   const atoms = json.molecules.flatMap((m) => m.atoms);
   const bonds = json.molecules.flatMap((m) => m.bonds ?? []);
   const charge = (i: number): number => atoms[i]?.chg ?? json.defaults.atom.chg;

@@ -4,7 +4,7 @@
 // rings the parent's ring-pair terms are swapped for the halogenated molecule's (the method in the
 // solvation data README).
 import { ThermoError } from '../../errors';
-import type { Chem } from '../../structure/chem';
+import type { Chem, ParsedStructure } from '../../structure/chem';
 import type { MatchedGroup } from '../phase/matched-group';
 import type { Contribution } from '../rmg/contribution';
 import { groupAdditivity } from '../rmg/group-sum';
@@ -64,11 +64,12 @@ function unplacedError(atoms: { atom: number; element: string }[]): ThermoError 
  */
 export type LibraryUse = 'use' | 'parents only' | 'none';
 
-export function estimateSoluteDescriptors(chem: Chem, smiles: string, options: { library?: LibraryUse } = {}): SoluteEstimate {
+/** `structure`: a SMILES, or the resolver's parsed structure (reused: no second parse or InChI). */
+export function estimateSoluteDescriptors(chem: Chem, structure: string | ParsedStructure, options: { library?: LibraryUse } = {}): SoluteEstimate {
   const libraryUse = options.library ?? 'use';
-  const parsed = chem.parse(smiles);
+  const parsed = typeof structure === 'string' ? chem.parse(structure) : structure;
   const { db, halogen } = loadSoluteDatabase();
-  const built = buildMolecule(chem, parsed.smiles, db.atomTypes);
+  const built = buildMolecule(chem, parsed, db.atomTypes);
   const V = mcgowanVolume(parsed.elements, built.graph.rings.length);
   const library = libraryUse === 'none' ? undefined : soluteLibrary(chem);
   const own = libraryUse === 'use' ? library?.get(parsed.smiles) : undefined;
