@@ -6,6 +6,7 @@ import { metricText, type MetricUnits } from '@/components/compare/metric-format
 import { MetricGrid, MetricLabel, MetricValue } from '@/components/compare/metric-grid';
 import { formatTemperatureChange, type TemperatureUnit } from '@/components/ladder/energy-format';
 import type { ComparisonSnapshot } from '@/lib/compare/compare-types';
+import { ScrollRegion } from '@/components/tables/scroll-region';
 import { METRIC_ROWS, type MetricRow } from '@/lib/compare/metric-rows';
 import type { WhatIf } from '@/lib/schemas/compare';
 
@@ -50,11 +51,11 @@ export function SnapshotMetrics({ snapshot, units, chosenRouteId }: { snapshot: 
   const table = useReactTable({ data: METRIC_ROWS as MetricRow[], columns, getCoreRowModel: getCoreRowModel(), getRowId: (r) => r.key });
 
   return (
-    <div className="overflow-x-auto rounded-lg border border-paper-edge bg-white">
+    <ScrollRegion label="Metrics of the compared routes when the decision was made" className="rounded-lg border border-paper-edge bg-white">
       <MetricGrid table={table} caption="Metrics of the compared routes when the decision was made" headClassName="bg-paper-deep text-xs uppercase tracking-wide text-ink-faint" />
       <p className="border-t border-paper-edge px-3 py-2 text-xs text-ink-faint">
         “best” marks the best value of a row as the comparison ranked it; rows without a ranking (temperature span, last edit, edited by) mark none.
       </p>
-    </div>
+    </ScrollRegion>
   );
 }

@@ -25,10 +25,12 @@ import { useAutosave } from './use-autosave';
 import { SHORTCUT_HELP, useEditorShortcuts } from './use-editor-shortcuts';
 import { useRouteEvaluation } from './use-route-evaluation';
 import { ReviewSection } from './review-section';
+import { RouteReadOnlyView } from './route-read-only-view';
 import { useReviewData } from './use-review-data';
 import { WorkflowBar } from './workflow-bar';
 import { AlternativesMenu } from './alternatives-menu';
 import type { Role } from '@/lib/auth/roles';
+import { useIsPhone } from '@/lib/hooks/use-media-query';
 
 const FIT_OPTIONS = { padding: 0.2, maxZoom: 1.25, duration: 200 };
 export const LINK_REFUSAL = 'Link a product of one step to the same species consumed by the next.';
@@ -61,7 +63,9 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
   const flow = useRef<ReactFlowInstance | null>(null);
   const canvasBox = useRef<HTMLDivElement>(null);
   const fitView = useCallback(() => flow.current?.fitView(FIT_OPTIONS), []);
-  useEditorShortcuts({ canEdit, onFitView: fitView });
+  // Phones get the read-only list (route-read-only-view.tsx): no board, no shortcuts that edit.
+  const isPhone = useIsPhone();
+  useEditorShortcuts({ canEdit: canEdit && !isPhone, onFitView: fitView });
 
   // "Step n" is the step's place in route order (lib/route-editor/step-label.ts), the same function revisions,
   // notifications and mails use: the board says "Step n", the panels "Step n (what it does)".
@@ -132,7 +136,7 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
         <div className="flex items-center gap-3">
           {canEdit ? <SaveStatus isEvaluating={isEvaluating} onRetry={() => void saveNow()} /> : <p className="text-xs text-ink-faint">{isEvaluating ? 'evaluating…' : ''}</p>}
           {canEdit ? (
-            <div className="flex gap-1">
+            <div className="hidden gap-1 md:flex">
               <Button variant="secondary" disabled={!canUndo} onClick={() => store.getState().undo()}>
                 Undo
               </Button>
@@ -145,10 +149,11 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
       </header>
 
       <SafetyCaution />
+      {isPhone ? <RouteReadOnlyView results={results} stepLabels={stepLabels} units={units} /> : null}
 
-      <div className={`grid gap-3 ${canEdit ? 'lg:grid-cols-[13rem_minmax(0,1fr)_20rem]' : 'lg:grid-cols-[minmax(0,1fr)_20rem]'}`}>
+      <div className={`hidden gap-3 md:grid md:grid-cols-[minmax(0,1fr)_18rem] ${canEdit ? 'lg:grid-cols-[13rem_minmax(0,1fr)_20rem]' : 'lg:grid-cols-[minmax(0,1fr)_20rem]'}`}>
         {canEdit ? (
-          <div className="h-[34rem]">
+          <div className="h-[16rem] md:col-span-2 lg:col-span-1 lg:h-[34rem]">
             <StepPalette onAdd={handleAdd} />
           </div>
         ) : null}
@@ -174,7 +179,7 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
           <SidePanel units={units} canEdit={canEdit} evaluation={evaluation} results={results} stepLabels={stepLabels} />
         </div>
       </div>
-      <p className="text-xs text-ink-faint">{canEdit ? SHORTCUT_HELP : 'F fits the view · select a step to read its details'}</p>
+      <p className="hidden text-xs text-ink-faint md:block">{canEdit ? SHORTCUT_HELP : 'F fits the view · select a step to read its details'}</p>
       {/* Below the board, so warnings appearing never shift the canvas under the pointer. */}
       <RouteWarnings warnings={evaluation?.warnings ?? []} stepLabels={stepTitles} error={error} />
 
@@ -194,7 +199,7 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
           step={selectedResult}
           energyUnit={units.energyUnit}
           temperatureUnit={units.temperatureUnit}
-          canEdit={canEdit}
+          canEdit={canEdit && !isPhone}
           stepLabels={stepLabels}
           onApplyTemperature={(T_K) => updateSelected({ temperature: temperatureQuantity(T_K) })}
           onApplyConditions={(patch) => updateSelected(patch)}
