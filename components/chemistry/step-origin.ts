@@ -23,6 +23,8 @@ export interface StepOriginSummary {
   methods: string[];
   /** the team's own species, each once */
   team: string[];
+  /** the provenance the team recorded for them, each once */
+  teamSources: string[];
   /** the library's sources used, each once */
   sources: string[];
 }
@@ -58,6 +60,7 @@ export function stepOrigin(species: readonly StepSpeciesFacts[] | null | undefin
     estimated: once(estimated.map(speciesReaderName)),
     methods: once(estimated.map((s) => shortMethod(s.method?.trim() || s.source.replace(/^Estimated:?\s*/i, '') || 'group contribution'))),
     team: once(list.filter((s) => s.origin === 'team').map(speciesReaderName)),
+    teamSources: once(list.filter((s) => s.origin === 'team').map((s) => s.source.trim())),
     sources: once(list.filter((s) => s.origin === 'library').map((s) => s.source.trim())),
   };
 }
@@ -69,3 +72,18 @@ export const STEP_ORIGIN_WORD: Record<StepDataOrigin, string> = {
   estimated: 'estimated values',
   mixed: 'mixed origins',
 };
+
+export interface OriginLine {
+  origin: ValueOrigin;
+  /** visible words, so print and a glance say it without a hover: "Estimate: acetophenone by …; σ(ΔrG°) 6.3 kJ/mol" */
+  text: string;
+}
+
+/** One line per origin present in the step, in the order library, team, estimated. `sigma` is σ(ΔrG°) already formatted. */
+export function stepOriginLines(summary: StepOriginSummary, sigma: string | null): OriginLine[] {
+  return summary.origins.map((origin) => {
+    if (origin === 'library') return { origin, text: `Library: ${summary.sources.join('; ') || 'built-in library'}` };
+    if (origin === 'team') return { origin, text: `Team: ${summary.team.join(', ')}${summary.teamSources.length ? ` (${summary.teamSources.join('; ')})` : ''}` };
+    return { origin, text: `Estimate: ${summary.estimated.join(', ')} by ${summary.methods.join('; ')}${sigma ? `; σ(ΔrG°) ${sigma}` : '; σ not known'}` };
+  });
+}

@@ -19,25 +19,29 @@ export interface StructureBrief {
 }
 
 const MIN_HEAVY_ATOMS = 3;
+// Salts and metal compounds (CaCO3, NaHCO3) read better as formulas even when they contain carbon.
+const ORGANIC_ELEMENTS = new Set(['C', 'H', 'D', 'T', 'N', 'O', 'S', 'P', 'F', 'Cl', 'Br', 'I', 'B', 'Si', 'Se']);
 
 /** Heavy (non-hydrogen) atoms of a Hill formula ("C2H6O" → 3), and whether it has carbon. */
-export function formulaSkeleton(formula: string): { heavyAtoms: number; hasCarbon: boolean } {
+export function formulaSkeleton(formula: string): { heavyAtoms: number; hasCarbon: boolean; isOrganic: boolean } {
   let heavyAtoms = 0;
   let hasCarbon = false;
+  let isOrganic = true;
   for (const m of formula.replace(/[+-]\d*$/, '').matchAll(/([A-Z][a-z]?)(\d*)/g)) {
     const element = m[1]!;
     const count = m[2] ? Number(m[2]) : 1;
     if (element === 'C') hasCarbon = true;
+    if (!ORGANIC_ELEMENTS.has(element)) isOrganic = false;
     if (element !== 'H' && element !== 'D' && element !== 'T') heavyAtoms += count;
   }
-  return { heavyAtoms, hasCarbon };
+  return { heavyAtoms, hasCarbon, isOrganic };
 }
 
-/** A drawing says more than the formula: a carbon skeleton of three or more heavy atoms, known by structure. */
+/** A drawing says more than the formula: an organic skeleton of three or more heavy atoms, known by structure. */
 export function isDrawable(s: Pick<StructureBrief, 'smiles' | 'formula'>): s is Pick<StructureBrief, 'formula'> & { smiles: string } {
   if (!s.smiles) return false;
-  const { heavyAtoms, hasCarbon } = formulaSkeleton(s.formula);
-  return hasCarbon && heavyAtoms >= MIN_HEAVY_ATOMS;
+  const { heavyAtoms, hasCarbon, isOrganic } = formulaSkeleton(s.formula);
+  return hasCarbon && isOrganic && heavyAtoms >= MIN_HEAVY_ATOMS;
 }
 
 /** Reactants and products of a step, each species once, in equation order. */

@@ -7,7 +7,8 @@ import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { formatEnergy, type EnergyUnit } from './energy-format';
 import { axisTitle, estimatedStepsNote, ladderSummary, stepLabelOf } from './ladder-describe';
-import { downloadBlob, exportFileName, serializeLadderSvg, svgBlob, svgToPngBlob } from './ladder-export';
+import { ladderStepsCsv } from './ladder-csv';
+import { csvBlob, downloadBlob, exportFileName, serializeLadderSvg, svgBlob, svgToPngBlob } from './ladder-export';
 import { LadderAxes, LadderLegend, LadderNotes, LadderPatterns, LadderStepLabels, LadderZeroAndStart } from './ladder-frame';
 import { buildLadder, layoutLadder } from './ladder-geometry';
 import { LADDER_COLOURS as C } from './ladder-palette';
@@ -161,6 +162,9 @@ export function FreeEnergyLadder({
           </Button>
           <Button variant="secondary" onClick={() => void handleExportPng()}>
             Export PNG
+          </Button>
+          <Button variant="secondary" onClick={() => downloadBlob(csvBlob(ladderStepsCsv(evaluation, stepLabels)), exportFileName(exportName, 'csv'))} title="Steps with ΔG, σ and where each value came from">
+            Export CSV
           </Button>
         </div>
       </div>

@@ -5,7 +5,7 @@ import { EXPORT_FONT_STACK, LADDER_COLOURS } from './ladder-palette';
 const SVG_NS = 'http://www.w3.org/2000/svg';
 
 /** "Route 7 / ladder" → "route-7-ladder.svg"; never empty. */
-export function exportFileName(base: string, ext: 'svg' | 'png'): string {
+export function exportFileName(base: string, ext: 'svg' | 'png' | 'csv'): string {
   const slug = base
     .normalize('NFKD')
     .replace(/[^\w\s-]/g, '')
@@ -47,6 +47,11 @@ export function downloadBlob(blob: Blob, fileName: string): void {
   a.remove();
   // Revoked on a later tick: some browsers start the download asynchronously.
   window.setTimeout(() => URL.revokeObjectURL(url), 1000);
+}
+
+export function csvBlob(csvText: string): Blob {
+  // A byte-order mark, so spreadsheets read σ, Δ and ° as UTF-8.
+  return new Blob(['\uFEFF', csvText], { type: 'text/csv;charset=utf-8' });
 }
 
 export function svgBlob(svgText: string): Blob {

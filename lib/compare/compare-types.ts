@@ -1,6 +1,10 @@
 // Shapes of a route comparison: per route its ladder and metrics, which route is best per row, shared steps.
 import type { WhatIf } from '../schemas/compare';
+import type { SpeciesProvenance } from '../thermo/evaluate';
 import type { RouteWarning, StepClass } from '../thermo/route';
+
+/** What the comparison keeps of each species of a step: who it is, its drawing, and where its values came from. */
+export type ComparedSpecies = Pick<SpeciesProvenance, 'key' | 'as_written' | 'name' | 'formula' | 'nu' | 'origin' | 'source' | 'smiles' | 'sigma_dfG_kJ'> & { method: string | null };
 
 export interface LadderStep {
   id: string;
@@ -18,6 +22,10 @@ export interface LadderStep {
   signUncertain: boolean;
   /** ΔG uses at least one estimated species (group contribution, not measured) */
   estimated: boolean;
+  /** σ(ΔrG°) per mol of reaction as written, kJ/mol; null when none is known (or the step failed) */
+  sigma_kJ: number | null;
+  /** the step's species with their origins ([] when the step failed) */
+  species: ComparedSpecies[];
   /** the engine's message for a step it could not evaluate */
   error: string | null;
 }
@@ -25,6 +33,10 @@ export interface LadderStep {
 export interface RouteLadder {
   order: string[];
   steps: LadderStep[];
+  /** σ of the route's total ΔG per mol of target (route-sigma.ts); null when no step has a σ; absent in older answers */
+  overallSigma_kJ?: number | null;
+  /** |total ΔG| ≤ σ: within the data uncertainty the total could have either sign */
+  overallSignUncertain?: boolean;
   warnings: RouteWarning[];
 }
 

@@ -45,10 +45,19 @@ export function ladderOf(request: RouteEvaluateRequest, evaluation: RouteEvaluat
       temperature_K: stepTemperature(request, s.id, s.result?.temperature_K),
       signUncertain: s.signUncertain,
       estimated: stepEstimates(s.result) !== null,
+      sigma_kJ: s.result?.uncertainty.deltaG0_kJ ?? null,
+      species: (s.result?.species ?? []).map((p) => ({
+        key: p.key, as_written: p.as_written, name: p.name, formula: p.formula, nu: p.nu, origin: p.origin, source: p.source, smiles: p.smiles,
+        sigma_dfG_kJ: p.sigma_dfG_kJ, method: p.method ?? null,
+      })),
       error: s.error?.message ?? null,
     };
   });
-  return { order: evaluation.order, steps, warnings: evaluation.warnings };
+  const sigma = evaluation.overall.overallSigma_kJ;
+  return {
+    order: evaluation.order, steps, warnings: evaluation.warnings,
+    overallSigma_kJ: sigma === null || sigma === undefined ? null : sigma / targetMol, overallSignUncertain: evaluation.overall.overallSignUncertain === true,
+  };
 }
 
 function driversOf(evaluation: RouteEvaluateResponse): { names: string[]; uncoupled: number } {

@@ -1,4 +1,5 @@
 import { keepPreviousData, queryOptions } from '@tanstack/react-query';
+import type { StepStructures } from '../../components/chemistry/structure-brief';
 import type { ListRoutesQuery, RouteDraft, SaveRouteInput, StepInput } from '../schemas/route';
 import type { LibraryReaction } from '../services/routes/search-library-reactions';
 import type { DeletedRouteDto } from '../services/routes/list-deleted-routes';
@@ -32,6 +33,8 @@ export type BalanceAnswer = BalanceCheck | { error: { code: string; message: str
 export interface PaletteAnswer {
   recent: string[];
   library: LibraryReaction[];
+  /** equation → its structures, for entries with something to draw */
+  structures: Record<string, StepStructures>;
 }
 
 export const routeKeys = {

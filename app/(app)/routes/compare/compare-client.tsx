@@ -5,7 +5,8 @@ import Link from 'next/link';
 import { useState } from 'react';
 import type { LadderBasis } from '@/components/compare/compare-ladder';
 import { metricsCsv } from '@/components/compare/metrics-csv';
-import { downloadBlob } from '@/components/ladder/ladder-export';
+import { compareStepsCsv } from '@/components/compare/steps-csv';
+import { csvBlob, downloadBlob } from '@/components/ladder/ladder-export';
 import { SafetyCaution } from '@/components/safety/safety-caution';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
@@ -104,6 +105,9 @@ export function CompareClient({ ids }: { ids: number[] }) {
         </Link>
         <Button variant="secondary" onClick={() => downloadBlob(new Blob([metricsCsv(comparison, units, visible)], { type: 'text/csv;charset=utf-8' }), 'stepwell-comparison.csv')}>
           Download CSV
+        </Button>
+        <Button variant="secondary" onClick={() => downloadBlob(csvBlob(compareStepsCsv(comparison)), 'stepwell-comparison-steps.csv')}>
+          Download steps CSV (with data origins)
         </Button>
         {comparison.routes.map((r) => (
           <a key={r.id} href={`/api/routes/${r.id}/export`} className="text-sm text-pine-700 underline" download>

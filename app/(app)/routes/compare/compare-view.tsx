@@ -2,9 +2,11 @@
 
 import Link from 'next/link';
 import { CompareLadder, sharedDomain, type LadderBasis } from '@/components/compare/compare-ladder';
+import { CompareStepList } from '@/components/compare/compare-step-list';
 import { MetricsTable } from '@/components/compare/metrics-table';
 import type { MetricUnits } from '@/components/compare/metric-format';
 import { StatusBadge } from '@/components/review/status-badge';
+import { ScrollRegion } from '@/components/tables/scroll-region';
 import type { Comparison, MetricKey } from '@/lib/compare/compare-types';
 
 /** Step ids of each route that share an equation with another compared route. */
@@ -30,7 +32,7 @@ export function CompareView({ comparison, basis, units, visible }: { comparison:
   const cols = comparison.routes.length <= 2 ? 'md:grid-cols-2' : comparison.routes.length === 3 ? 'md:grid-cols-3' : 'md:grid-cols-2 xl:grid-cols-4';
   return (
     <div className="flex flex-col gap-4">
-      <div className={`grid gap-3 ${cols}`}>
+      <div className={`grid grid-cols-1 gap-3 ${cols}`}>
         {comparison.routes.map((route) => (
           <figure key={route.id} className="compare-card flex flex-col gap-1 rounded-lg border border-paper-edge bg-white p-2" aria-label={`Ladder of ${route.name}`}>
             <figcaption className="flex flex-wrap items-center justify-between gap-1 text-sm">
@@ -46,30 +48,16 @@ export function CompareView({ comparison, basis, units, visible }: { comparison:
                 Could not evaluate this route: {route.error?.message ?? 'unknown reason'}.
               </p>
             )}
-            {route.ladder ? (
-              <ol className="list-decimal pl-5 font-mono text-[11px] text-ink-soft">
-                {route.ladder.order.map((id) => {
-                  const s = route.ladder!.steps.find((x) => x.id === id);
-                  if (!s) return null;
-                  const isShared = shared.get(route.id)?.has(id);
-                  return (
-                    <li key={id} className={isShared ? 'font-semibold text-brass-700' : ''}>
-                      {s.equation || 'blank step'}
-                      {isShared ? <span className="font-sans"> (shared)</span> : null}
-                    </li>
-                  );
-                })}
-              </ol>
-            ) : null}
+            {route.ladder ? <CompareStepList ladder={route.ladder} sharedStepIds={shared.get(route.id) ?? new Set()} unit={units.energyUnit} /> : null}
           </figure>
         ))}
       </div>
       <p className="text-xs text-ink-faint">
-        Every ladder uses the same scale, per mol of target. Shaded bands and “(shared)” mark steps with the same equation in more than one route. Uphill risers are hatched, marginal ones dotted.
+        Every ladder uses the same scale, per mol of target. Shaded bands and “(shared)” mark steps with the same equation in more than one route. Uphill risers are hatched, marginal ones dotted. Under each step, where its values came from: ■ library (with its source), ◇ team (with its provenance), ◌ estimate (method and σ).
       </p>
-      <div className="overflow-x-auto rounded-lg border border-paper-edge bg-white p-2">
+      <ScrollRegion label="Metrics of the compared routes" className="rounded-lg border border-paper-edge bg-white p-2">
         <MetricsTable comparison={comparison} units={units} visible={visible} caption="Compared routes, one column each" />
-      </div>
+      </ScrollRegion>
     </div>
   );
 }

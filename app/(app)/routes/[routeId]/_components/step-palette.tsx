@@ -3,10 +3,13 @@
 import { useQuery } from '@tanstack/react-query';
 import { useId, useState } from 'react';
 import { writeStepPayload, type StepDragPayload } from '@/components/canvas/step-drop';
+import { EquationText } from '@/components/chemistry/equation-text';
+import { namesOf, type StepStructures } from '@/components/chemistry/structure-brief';
+import { StructureStrip } from '@/components/chemistry/structure-strip';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { paletteQuery } from '@/lib/queries/routes';
 
-function PaletteItem({ title, equation, onAdd }: { title: string | null; equation: string; onAdd: (payload: StepDragPayload) => void }) {
+function PaletteItem({ title, equation, structures, onAdd }: { title: string | null; equation: string; structures?: StepStructures; onAdd: (payload: StepDragPayload) => void }) {
   const name = title ?? equation;
   return (
     <li
@@ -15,10 +18,11 @@ function PaletteItem({ title, equation, onAdd }: { title: string | null; equatio
       className="group flex cursor-grab items-start justify-between gap-2 rounded-md border border-paper-edge bg-white px-2 py-1.5 text-xs hover:border-pine-500 active:cursor-grabbing"
       data-testid="palette-item"
     >
-      <span className="min-w-0">
+      <div className="min-w-0">
         {title ? <span className="block font-medium text-ink">{title}</span> : null}
-        {equation ? <span className="block break-words font-mono text-[11px] text-ink-soft">{equation}</span> : null}
-      </span>
+        {structures ? <StructureStrip structures={structures} label={name} max={2} className="my-0.5" /> : null}
+        {equation ? <EquationText equation={equation} names={namesOf(structures)} className="block break-words text-[11px] text-ink-soft" /> : null}
+      </div>
       <button
         type="button"
         onClick={() => onAdd({ equation })}
@@ -51,7 +55,7 @@ export function StepPalette({ onAdd }: { onAdd: (payload: StepDragPayload) => vo
         {palette.data && palette.data.recent.length > 0 ? (
           <ul className="flex flex-col gap-1">
             {palette.data.recent.map((equation) => (
-              <PaletteItem key={equation} title={null} equation={equation} onAdd={onAdd} />
+              <PaletteItem key={equation} title={null} equation={equation} structures={palette.data.structures?.[equation]} onAdd={onAdd} />
             ))}
           </ul>
         ) : (
@@ -76,7 +80,7 @@ export function StepPalette({ onAdd }: { onAdd: (payload: StepDragPayload) => vo
           palette.data.library.length > 0 ? (
             <ul className="flex flex-col gap-1" aria-busy={palette.isFetching}>
               {palette.data.library.map((reaction) => (
-                <PaletteItem key={reaction.id} title={reaction.name} equation={reaction.equation} onAdd={onAdd} />
+                <PaletteItem key={reaction.id} title={reaction.name} equation={reaction.equation} structures={palette.data.structures?.[reaction.equation]} onAdd={onAdd} />
               ))}
             </ul>
           ) : (
