@@ -3,6 +3,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useEffect, useRef, type KeyboardEvent } from 'react';
+import { ChemText } from '@/components/chemistry/chem-text';
 import { When } from '@/components/ui/when';
 import { discussionKeys, markNotificationsRead, notificationsQuery } from '@/lib/queries/comments';
 import type { NotificationDto } from '@/lib/schemas/notification';
@@ -69,7 +70,7 @@ export function NotificationBell() {
                 <button type="button" onClick={() => open(n)} className={`flex w-full flex-col gap-0.5 px-3 py-2 text-left hover:bg-paper ${n.isRead ? 'text-ink-soft' : ''}`}>
                   <span className={n.isRead ? '' : 'font-semibold'}>
                     {n.isRead ? null : <span className="sr-only">Unread: </span>}
-                    {n.title}
+                    <ChemText text={n.title} />
                   </span>
                   {n.text ? <span className="line-clamp-2 text-xs text-ink-soft">{n.text}</span> : null}
                   <When iso={n.createdAt} />

@@ -10,7 +10,8 @@ export interface NotificationMail {
   /** The comment or note, as written (shown as quoted plain text, never as HTML). */
   quote: string;
   routeName: string;
-  stepKey: string | null;
+  /** the step as people name it ("Step 3 (ethanol dehydrogenation)"), never its key */
+  stepLabel: string | null;
   /** Absolute link straight to the step (or the route). */
   link: string;
   settingsLink: string;
@@ -26,8 +27,8 @@ const WHY: Record<NotificationKind, string> = {
 };
 
 export function renderNotificationMail(mail: NotificationMail): { subject: string; text: string; html: string } {
-  const where = mail.stepKey ? `${mail.routeName}, step ${mail.stepKey}` : mail.routeName;
-  const openLabel = mail.stepKey ? `Open step ${mail.stepKey} of ${mail.routeName}` : `Open ${mail.routeName}`;
+  const where = mail.stepLabel ? `${mail.routeName}, ${mail.stepLabel}` : mail.routeName;
+  const openLabel = mail.stepLabel ? `Open ${mail.stepLabel} of ${mail.routeName}` : `Open ${mail.routeName}`;
   const quoted = mail.quote.trim();
   const text = [
     mail.title,

@@ -32,25 +32,37 @@ describe('a new comment', () => {
 
     const [owner] = await forRoute(team.designerId, route.id);
     expect(owner).toMatchObject({ kind: 'comment_on_owned_route', stepKey: 's1', actor: { id: team.reviewerId, name: 'Hanne Vasquez-Lind' }, link: `/routes/${route.id}?step=s1`, isRead: false });
-    expect(owner!.title).toBe(`Hanne Vasquez-Lind commented on ${route.name} · step s1`);
+    expect(owner!.title).toBe(`Hanne Vasquez-Lind commented on ${route.name} · Step 1 (steam reforming of methane)`);
     const [mentioned] = await forRoute(team.leadId, route.id);
-    expect(mentioned).toMatchObject({ kind: 'mention', title: `Hanne Vasquez-Lind mentioned you on ${route.name} · step s1` });
+    expect(mentioned).toMatchObject({ kind: 'mention', title: `Hanne Vasquez-Lind mentioned you on ${route.name} · Step 1 (steam reforming of methane)` });
     expect(await forRoute(team.reviewerId, route.id)).toEqual([]);
 
     const ownerMail = mailsAbout(team.email.designer, route.name);
     expect(ownerMail).toHaveLength(1);
-    expect(ownerMail[0]!.subject).toBe(`[Stepwell] Hanne Vasquez-Lind commented on ${route.name} · step s1`);
-    expect(ownerMail[0]!.text).toContain(`Route: ${route.name}, step s1`);
-    expect(ownerMail[0]!.text).toContain(`Open step s1 of ${route.name}: ${link}`);
+    expect(ownerMail[0]!.subject).toBe(`[Stepwell] Hanne Vasquez-Lind commented on ${route.name} · Step 1 (steam reforming of methane)`);
+    expect(ownerMail[0]!.text).toContain(`Route: ${route.name}, Step 1 (steam reforming of methane)`);
+    expect(ownerMail[0]!.text).toContain(`Open Step 1 (steam reforming of methane) of ${route.name}: ${link}`);
     expect(ownerMail[0]!.html).toContain(`href="${link}"`);
     // The comment's own markup arrives escaped, never as HTML.
     expect(ownerMail[0]!.html).toContain('&lt;b&gt;1100 K&lt;/b&gt;');
     expect(ownerMail[0]!.html).not.toContain('<b>1100 K</b>');
 
     const leadMail = mailsAbout(team.email.lead, route.name);
-    expect(leadMail.map((m) => m.subject)).toEqual([`[Stepwell] Hanne Vasquez-Lind mentioned you on ${route.name} · step s1`]);
+    expect(leadMail.map((m) => m.subject)).toEqual([`[Stepwell] Hanne Vasquez-Lind mentioned you on ${route.name} · Step 1 (steam reforming of methane)`]);
     expect(leadMail[0]!.to).toEqual([team.email.lead]);
     expect(mailsAbout(team.email.reviewer, route.name)).toEqual([]);
+    // People read the step's label, never its key (which only goes into the link).
+    expect(ownerMail[0]!.text.replace(link, '')).not.toMatch(/\bs1\b/);
+  });
+
+  it('reads a title stored with a step key ("step s2") with that step\'s label, or "a removed step"', async () => {
+    const route = await makeOwnedRoute(team, team.designerId);
+    await comment(route.id, team.reviewerId, { body: 'Older wording.', stepKey: 's2' });
+    const { Notification } = getDb().models;
+    await Notification.update({ title: `Hanne Vasquez-Lind commented on ${route.name} · step s2` }, { where: { routeId: route.id, stepKey: 's2' } });
+    expect((await forRoute(team.designerId, route.id))[0]!.title).toBe(`Hanne Vasquez-Lind commented on ${route.name} · Step 2 (methanol from carbon monoxide)`);
+    await Notification.update({ title: `Hanne Vasquez-Lind commented on ${route.name} · step gone`, stepKey: 'gone' }, { where: { routeId: route.id, stepKey: 's2' } });
+    expect((await forRoute(team.designerId, route.id))[0]!.title).toBe(`Hanne Vasquez-Lind commented on ${route.name} · a removed step`);
   });
 
   it('gives a mentioned owner one notification, not two, and mails nobody for a handle outside the team', async () => {
@@ -100,7 +112,7 @@ describe('mutes', () => {
 
       // A different kind still mails.
       await comment(route.id, team.reviewerId, { body: `@${handle(team.email.designer)} this one is a mention.`, stepKey: 's2' });
-      expect(mailsAbout(team.email.designer, route.name).map((m) => m.subject)).toEqual([`[Stepwell] Hanne Vasquez-Lind mentioned you on ${route.name} · step s2`]);
+      expect(mailsAbout(team.email.designer, route.name).map((m) => m.subject)).toEqual([`[Stepwell] Hanne Vasquez-Lind mentioned you on ${route.name} · Step 2 (methanol from carbon monoxide)`]);
     } finally {
       await callRoute(patchPreferences, { method: 'PATCH', userId: team.designerId, body: { notificationMutes: { comment_on_owned_route: false } } });
     }

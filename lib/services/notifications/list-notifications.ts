@@ -2,7 +2,9 @@ import 'server-only';
 import { Op, type WhereOptions } from 'sequelize';
 import { getDb } from '../../../db';
 import type { Notification } from '../../../db/models/notification';
+import { AFTER_STEP_WORD, relabelStepIds, type StepLabel } from '../../route-editor/step-label';
 import type { ListNotificationsQuery, NotificationDto, NotificationPageDto } from '../../schemas/notification';
+import { readStepLabels } from '../routes/read-step-labels';
 
 // Only the caller's own, and only from teams they still belong to.
 export async function ownNotificationsWhere(userId: number): Promise<WhereOptions<Notification>> {
@@ -27,14 +29,23 @@ export async function listNotifications({ userId, query }: { userId: number; que
     Notification.count({ where: { ...own, readAt: null } }),
   ]);
   const page = rows.slice(0, query.limit);
+  // Titles written before step labels say "step s-8ab5e2fd": they read with today's label of that step.
+  const old = page.filter((r) => r.routeId !== null && r.stepKey && r.title.includes(`step ${r.stepKey}`));
+  const labels = await readStepLabels(old.map((r) => r.routeId!));
   return {
-    items: page.map(toNotificationDto),
+    items: page.map((row) => toNotificationDto(row, row.routeId === null ? undefined : labels.get(row.routeId))),
     unreadCount: unread,
     nextBefore: rows.length > query.limit ? page[page.length - 1]!.id : null,
   };
 }
 
-function toNotificationDto(row: Notification): NotificationDto {
+function readableTitle(row: Notification, labels: ReadonlyMap<string, StepLabel> | undefined): string {
+  if (!row.stepKey || !labels) return row.title;
+  const label = labels.get(row.stepKey) ?? { number: 0, short: 'a removed step', full: 'a removed step' };
+  return relabelStepIds(row.title, new Map([[row.stepKey, label]]), AFTER_STEP_WORD);
+}
+
+function toNotificationDto(row: Notification, labels?: ReadonlyMap<string, StepLabel>): NotificationDto {
   const actor = row.get('actor') as { id: number; name: string } | null | undefined;
   return {
     id: row.id,
@@ -43,7 +54,7 @@ function toNotificationDto(row: Notification): NotificationDto {
     routeId: row.routeId,
     stepKey: row.stepKey,
     actor: actor ? { id: actor.id, name: actor.name } : null,
-    title: row.title,
+    title: readableTitle(row, labels),
     text: row.text,
     link: row.link,
     isRead: row.readAt !== null,

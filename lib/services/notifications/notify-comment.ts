@@ -3,6 +3,7 @@ import type { Transaction } from 'sequelize';
 import { getDb } from '../../../db';
 import type { Comment } from '../../../db/models/comment';
 import type { Route } from '../../../db/models/route';
+import { readStepLabel } from '../routes/read-step-labels';
 import { recordNotifications, type NotificationEntry, type RecordedNotifications } from './record-notifications';
 
 /**
@@ -26,8 +27,10 @@ export async function notifyNewComment({
 }): Promise<RecordedNotifications> {
   const actor = await getDb().models.User.findByPk(actorId, { attributes: ['name'], transaction });
   const actorName = actor?.name ?? 'Someone';
-  const where = comment.stepKey ? `${route.name} · step ${comment.stepKey}` : route.name;
+  // People know a step as "Step 3 (ethanol dehydrogenation)", never by its key.
+  const stepLabel = comment.stepKey ? ((await readStepLabel({ routeId: route.id, stepKey: comment.stepKey, transaction })) ?? 'a removed step') : null;
+  const where = stepLabel ? `${route.name} · ${stepLabel}` : route.name;
   const entries: NotificationEntry[] = mentionIds.map((userId) => ({ userId, kind: 'mention', title: `${actorName} mentioned you on ${where}`, text: comment.body }));
   if (includeOwner) entries.push({ userId: route.createdById, kind: 'comment_on_owned_route', title: `${actorName} commented on ${where}`, text: comment.body });
-  return recordNotifications({ teamId: route.teamId, route: { id: route.id, name: route.name }, stepKey: comment.stepKey, actorId, entries, transaction });
+  return recordNotifications({ teamId: route.teamId, route: { id: route.id, name: route.name }, stepKey: comment.stepKey, stepLabel, actorId, entries, transaction });
 }

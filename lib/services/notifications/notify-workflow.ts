@@ -33,7 +33,7 @@ async function notify({ teamId, routeId, actorId, build }: { teamId: number; rou
     const route = await findRouteRow({ teamId, routeId, transaction });
     const actor = await models.User.findByPk(actorId, { attributes: ['name'], transaction });
     const entries = build(actor?.name ?? 'Someone', route);
-    return recordNotifications({ teamId, route: { id: route.id, name: route.name }, stepKey: null, actorId, entries, transaction });
+    return recordNotifications({ teamId, route: { id: route.id, name: route.name }, stepKey: null, stepLabel: null, actorId, entries, transaction });
   });
   return { notified, mailed: await deliverNotificationMails(mails) };
 }

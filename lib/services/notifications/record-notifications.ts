@@ -37,6 +37,7 @@ export async function recordNotifications({
   teamId,
   route,
   stepKey,
+  stepLabel,
   actorId,
   entries,
   transaction,
@@ -44,6 +45,8 @@ export async function recordNotifications({
   teamId: number;
   route: { id: number; name: string };
   stepKey: string | null;
+  /** how people name the step ("Step 3 (ethanol dehydrogenation)"); the key only goes into the link */
+  stepLabel: string | null;
   actorId: number;
   entries: NotificationEntry[];
   transaction: Transaction;
@@ -66,7 +69,7 @@ export async function recordNotifications({
       title: clip(e.title, TITLE_MAX),
       quote: clip(e.text, TEXT_MAX),
       routeName: route.name,
-      stepKey,
+      stepLabel,
       link: absoluteLink(link),
       settingsLink: absoluteLink('/settings'),
       caution: e.caution,
