@@ -1,5 +1,6 @@
 import 'server-only';
 import type { Transaction } from 'sequelize';
+import { stepLabels } from '../../route-editor/step-label';
 import type { SpeciesLookup } from '../../thermo/species-library';
 import { evaluateRouteDocument } from '../routes/evaluate-route-document';
 import { getRoute } from '../routes/get-route';
@@ -7,6 +8,8 @@ import { speciesUses } from './species-usage';
 
 export interface StepChange {
   stepKey: string;
+  /** how people name the step: "Step 3 (ethanol dehydrogenation)" */
+  label: string;
   before_kJ: number | null;
   after_kJ: number | null;
 }
@@ -48,8 +51,10 @@ export async function speciesImpact({
     const a = evaluateRouteDocument(doc, after);
     const eb = stepEnergies(b);
     const ea = stepEnergies(a);
+    const labels = stepLabels(doc.steps, doc.links);
     const steps = doc.steps
-      .map((s) => ({ stepKey: s.id, before_kJ: eb.get(s.id) ?? null, after_kJ: ea.get(s.id) ?? null }))
+      .map((s) => ({ stepKey: s.id, label: labels.get(s.id)!.full, before_kJ: eb.get(s.id) ?? null, after_kJ: ea.get(s.id) ?? null }))
+      .sort((a, b) => labels.get(a.stepKey)!.number - labels.get(b.stepKey)!.number)
       .filter((s) => differ(s.before_kJ, s.after_kJ));
     const overallBefore = 'error' in b || b.totalsWithheld ? null : b.overall.deltaG_kJ;
     const overallAfter = 'error' in a || a.totalsWithheld ? null : a.overall.deltaG_kJ;

@@ -98,10 +98,13 @@ describe('the import preview', () => {
 
   it('lists routes whose ΔG changes, step by step', () => {
     const html = renderToStaticMarkup(createElement(RouteImpactList, {
-      impact: [{ routeId: 7, routeName: 'Methanol from syngas', overallBefore_kJ: -20, overallAfter_kJ: -25, steps: [{ stepKey: 's2', before_kJ: -20, after_kJ: -25 }] }], done: false,
+      impact: [{ routeId: 7, routeName: 'Methanol from syngas', overallBefore_kJ: -20, overallAfter_kJ: -25, steps: [{ stepKey: 's2', label: 'Step 2 (methanol from carbon monoxide)', before_kJ: -20, after_kJ: -25 }] }], done: false,
     }));
     expect(html).toContain('1 route would get different ΔG values');
-    expect(html).toContain('ΔG −20.00 kJ → −25.00 kJ');
+    expect(html).toContain('route ΔG −20.0 → −25.0 kJ');
+    expect(html).toContain('ΔG −20.0 → −25.0 kJ/mol');
+    expect(html).toContain('Step 2 (methanol from carbon monoxide)');
+    expect(html).not.toContain('>s2<');
     expect(renderToStaticMarkup(createElement(RouteImpactList, { impact: [], done: true }))).toContain('No route of your team changed its ΔG.');
   });
 });

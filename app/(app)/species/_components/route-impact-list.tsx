@@ -1,8 +1,11 @@
 import Link from 'next/link';
-import { formatNumber } from '@/components/tables/species-columns';
+import { ChemText } from '@/components/chemistry/chem-text';
+import { formatKJ } from '@/lib/format/numbers';
 import type { RouteImpact } from '@/lib/services/species/species-impact';
 
-const kj = (x: number | null) => (x === null ? 'no value' : `${formatNumber(x, 2)} kJ`);
+// To 0.1 kJ, the unit once after the arrow; a route the engine refuses has no value (and says so).
+const change = (from: number | null, to: number | null, unit: string) =>
+  from === null && to === null ? 'not evaluated' : `${from === null ? 'not evaluated' : formatKJ(from)} → ${to === null ? 'not evaluated' : formatKJ(to)} ${unit}`;
 
 /** The routes whose ΔG an edit changes (or would change), step by step. */
 export function RouteImpactList({ impact, done }: { impact: RouteImpact[]; done: boolean }) {
@@ -18,11 +21,14 @@ export function RouteImpactList({ impact, done }: { impact: RouteImpact[]; done:
         {impact.map((r) => (
           <li key={r.routeId} className="rounded-md border border-paper-edge bg-white px-3 py-2">
             <Link href={`/routes/${r.routeId}`} className="font-medium text-pine-700 underline-offset-2 hover:underline">{r.routeName}</Link>
-            <span className="text-ink-soft"> — overall {kj(r.overallBefore_kJ)} → {kj(r.overallAfter_kJ)}</span>
+            <span className="text-ink-soft"> — route ΔG {change(r.overallBefore_kJ, r.overallAfter_kJ, 'kJ')}</span>
             <ul className="mt-1 flex flex-col gap-0.5 text-ink-soft">
               {r.steps.map((s) => (
                 <li key={s.stepKey}>
-                  step <Link href={`/routes/${r.routeId}?step=${encodeURIComponent(s.stepKey)}`} className="text-pine-700 underline-offset-2 hover:underline">{s.stepKey}</Link>: ΔG {kj(s.before_kJ)} → {kj(s.after_kJ)}
+                  <Link href={`/routes/${r.routeId}?step=${encodeURIComponent(s.stepKey)}`} className="text-pine-700 underline-offset-2 hover:underline">
+                    <ChemText text={s.label ?? 'a step'} />
+                  </Link>
+                  : ΔG {change(s.before_kJ, s.after_kJ, 'kJ/mol')}
                 </li>
               ))}
             </ul>
