@@ -37,9 +37,12 @@ export function RouteCanvas({
   onDropStep,
   onInit,
   reviewMarks,
+  stale,
 }: {
   /** open flags and unresolved comments per step, shown on the nodes */
   reviewMarks?: ReviewMarksByStep;
+  /** steps edited since their result was computed: their nodes show no class or ΔG */
+  stale?: ReadonlySet<string>;
   steps: StepInput[];
   links: LinkInput[];
   results: Map<string, RouteStepResult>;
@@ -63,7 +66,7 @@ export function RouteCanvas({
   // Fit once on load; an empty board keeps a 1:1 view, so the first drop does not jump the viewport.
   const [shouldFitOnLoad] = useState(() => steps.length > 0);
 
-  const nodes = useStepNodes({ steps, results, selectedStepId, sizes, stepLabels, energyUnit, temperatureUnit, reviewMarks });
+  const nodes = useStepNodes({ steps, results, stale, selectedStepId, sizes, stepLabels, energyUnit, temperatureUnit, reviewMarks });
   const edges = useLinkEdges(links, steps, selectedEdgeId);
 
   const handleNodesChange = useCallback(

@@ -30,6 +30,12 @@ export interface StepNodeData {
   hasFlags: boolean;
   /** the step's species from its evaluation (names, formulas, SMILES, origins); null before the first answer */
   structures: StepStructures | null;
+  /** edited since its result: no class or ΔG is shown until the new answer */
+  isStale?: boolean;
+  /** why the step could not be evaluated, naming the cause ("unknown species", "check temperature"); "" when it was */
+  problemLabel?: string;
+  /** the engine's message for it, in words ("" when none) */
+  problemText?: string;
 }
 
 export const reactantHandleId = (species: string) => `r:${species}`;
@@ -61,7 +67,16 @@ function StepNodeView({ id, data, selected }: NodeProps<StepNodeData>) {
     >
       <div className="flex items-center justify-between gap-2 border-b border-paper-edge px-2 py-1">
         <span className="font-semibold text-ink-soft">{data.label}</span>
-        <NodeClassBadge cls={data.cls} signUncertain={data.signUncertain} signUncertainText={data.signUncertainText} />
+        {data.isStale ? (
+          <span className="rounded border border-dashed border-paper-edge px-1.5 text-[11px] text-ink-faint" data-testid="step-node-stale">changed · re-evaluating</span>
+        ) : data.problemLabel ? (
+          <span className="rounded border border-uphill/40 bg-paper-deep px-1.5 text-[11px] font-semibold text-uphill" data-testid="step-node-problem-label">
+            <span aria-hidden="true">! </span>
+            {data.problemLabel}
+          </span>
+        ) : (
+          <NodeClassBadge cls={data.cls} signUncertain={data.signUncertain} signUncertainText={data.signUncertainText} />
+        )}
       </div>
       {data.reviewText ? (
         <p className={`border-b border-paper-edge px-2 py-0.5 text-[11px] font-medium ${data.hasFlags ? 'bg-brass-100 text-brass-700' : 'text-pine-700'}`} data-testid="step-review-marks">
@@ -72,6 +87,11 @@ function StepNodeView({ id, data, selected }: NodeProps<StepNodeData>) {
       <p className="break-words px-2 py-1.5 text-[12px] leading-snug text-ink" data-testid="step-equation">
         {data.equation ? <EquationText equation={data.equation} names={names} /> : <span className="text-ink-faint">blank step: type an equation</span>}
       </p>
+      {data.problemText ? (
+        <p className="break-words px-2 pb-1 text-[11px] leading-snug text-uphill" data-testid="step-node-problem">
+          {data.problemText}
+        </p>
+      ) : null}
       <div className="flex justify-between gap-2 px-2 pb-1 text-ink-soft">
         <span>T {data.temperatureText}</span>
         <span className="tabular-nums">

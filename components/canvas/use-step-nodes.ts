@@ -4,6 +4,7 @@ import { useMemo, useRef } from 'react';
 import { MarkerType, type Edge, type Node } from 'reactflow';
 import { structuresFromSpecies, structuresKey } from '@/components/chemistry/structure-brief';
 import { equationSpecies } from '@/lib/route-editor/equation-species';
+import { CAUSE_LABEL, causeOf, messageAtField } from '@/lib/route-editor/step-errors';
 import { temperatureKOf } from '@/lib/route-editor/temperature-text';
 import type { LinkInput, StepInput } from '@/lib/schemas/route';
 import type { RouteStepResult } from '@/lib/thermo/route';
@@ -14,10 +15,13 @@ import { productHandleId, reactantHandleId, type StepNodeData } from './step-nod
 
 export type NodeSize = { width: number; height: number };
 
-function nodeData(step: StepInput, label: string, result: RouteStepResult | undefined, marks: StepReviewMarks | undefined, energyUnit: EnergyUnit, temperatureUnit: TemperatureUnit): StepNodeData {
+// A stale step (edited since its result) shows no class or ΔG: the old figures must not read as current.
+function nodeData(step: StepInput, label: string, evaluated: RouteStepResult | undefined, isStale: boolean, marks: StepReviewMarks | undefined, energyUnit: EnergyUnit, temperatureUnit: TemperatureUnit): StepNodeData {
   const { reactants, products } = equationSpecies(step.equation);
+  const result = isStale ? undefined : evaluated;
   const T = result?.result?.temperature_K ?? temperatureKOf(step.temperature);
   const engine = result?.result ?? null;
+  const error = result?.error ?? null;
   const deltaG = engine ? (engine.deltaG_kJ ?? engine.deltaG0_kJ) : null;
   return {
     label,
@@ -33,7 +37,11 @@ function nodeData(step: StepInput, label: string, result: RouteStepResult | unde
     estimatedText: estimateSpoken(engine, energyUnit) ?? '',
     reviewText: reviewMarkText(marks),
     hasFlags: (marks?.flags ?? 0) > 0,
-    structures: engine && engine.species.length ? structuresFromSpecies(engine.species) : null,
+    // Drawings stay through an edit (they follow the species, not the figures) so the node does not flicker.
+    structures: evaluated?.result && evaluated.result.species.length ? structuresFromSpecies(evaluated.result.species) : null,
+    isStale,
+    problemLabel: error ? CAUSE_LABEL[causeOf(error)] : '',
+    problemText: error ? messageAtField(error) : '',
   };
 }
 
@@ -49,6 +57,8 @@ function sameData(a: StepNodeData, b: StepNodeData): boolean {
     a.signUncertainText === b.signUncertainText &&
     a.estimatedText === b.estimatedText &&
     a.reviewText === b.reviewText &&
+    a.isStale === b.isStale &&
+    a.problemText === b.problemText &&
     structuresKey(a.structures) === structuresKey(b.structures) &&
     a.reactants.join('|') === b.reactants.join('|') &&
     a.products.join('|') === b.products.join('|')
@@ -58,6 +68,7 @@ function sameData(a: StepNodeData, b: StepNodeData): boolean {
 interface CachedNode {
   step: StepInput;
   result: RouteStepResult | undefined;
+  isStale: boolean;
   marks: StepReviewMarks | undefined;
   label: string;
   data: StepNodeData;
@@ -73,8 +84,11 @@ export function useStepNodes({
   energyUnit,
   temperatureUnit,
   reviewMarks,
+  stale,
 }: {
   reviewMarks?: ReviewMarksByStep;
+  /** steps edited since their result was computed */
+  stale?: ReadonlySet<string>;
   steps: StepInput[];
   stepLabels: Record<string, string>;
   results: Map<string, RouteStepResult>;
@@ -89,17 +103,18 @@ export function useStepNodes({
     const byId = new Map<string, CachedNode>();
     const nodes = steps.map((step, index) => {
       const result = results.get(step.id);
+      const isStale = stale?.has(step.id) ?? false;
       const marks = reviewMarks?.[step.id];
       const label = stepLabels[step.id] ?? `Step ${index + 1}`;
       const hit = previous.get(step.id);
       let data: StepNodeData;
-      if (hit && hit.result === result && hit.marks === marks && hit.label === label && (hit.step === step || hit.step.equation === step.equation && hit.step.temperature === step.temperature)) {
+      if (hit && hit.result === result && hit.isStale === isStale && hit.marks === marks && hit.label === label && (hit.step === step || hit.step.equation === step.equation && hit.step.temperature === step.temperature)) {
         data = hit.data;
       } else {
-        const fresh = nodeData(step, label, result, marks, energyUnit, temperatureUnit);
+        const fresh = nodeData(step, label, result, isStale, marks, energyUnit, temperatureUnit);
         data = hit && sameData(hit.data, fresh) ? hit.data : fresh;
       }
-      byId.set(step.id, { step, result, marks, label, data });
+      byId.set(step.id, { step, result, isStale, marks, label, data });
       const size = sizes[step.id];
       return {
         id: step.id,
@@ -108,13 +123,13 @@ export function useStepNodes({
         data,
         selected: step.id === selectedStepId,
         deletable: false,
-        ariaLabel: `${data.label}: ${step.equation || 'blank'}${data.estimatedText ? `; ${data.estimatedText}` : ''}${data.reviewText ? ` (${data.reviewText})` : ''}`,
+        ariaLabel: `${data.label}: ${step.equation || 'blank'}${data.isStale ? '; changed, re-evaluating' : ''}${data.problemText ? `; not evaluated: ${data.problemText}` : ''}${data.estimatedText ? `; ${data.estimatedText}` : ''}${data.reviewText ? ` (${data.reviewText})` : ''}`,
         ...(size ? { width: size.width, height: size.height } : {}),
       } satisfies Node<StepNodeData>;
     });
     cache.current = { energyUnit, temperatureUnit, byId };
     return nodes;
-  }, [steps, results, reviewMarks, selectedStepId, sizes, stepLabels, energyUnit, temperatureUnit]);
+  }, [steps, results, stale, reviewMarks, selectedStepId, sizes, stepLabels, energyUnit, temperatureUnit]);
 }
 
 export const linkEdgeId = (link: LinkInput) => `${link.from}>${link.to}:${link.species}`;

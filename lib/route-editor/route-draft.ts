@@ -20,6 +20,18 @@ export function engineFingerprint(draft: RouteDraft): string {
   return `${text.length.toString(36)}-${fnv1a(text)}-${djb2(text)}`;
 }
 
+/** What the engine reads of one step: two steps with the same key evaluate alike. */
+export function stepEngineKey(step: RouteDraft['steps'][number]): string {
+  const { position: _position, notes: _notes, ...fields } = step;
+  return JSON.stringify(fields);
+}
+
+/** Steps of `current` whose engine fields differ from (or are missing in) `evaluated`: their results are out of date. */
+export function staleStepIds(current: Pick<RouteDraft, 'steps'>, evaluated: Pick<RouteDraft, 'steps'>): Set<string> {
+  const before = new Map(evaluated.steps.map((s) => [s.id, stepEngineKey(s)]));
+  return new Set(current.steps.filter((s) => before.get(s.id) !== stepEngineKey(s)).map((s) => s.id));
+}
+
 function fnv1a(text: string): string {
   let h = 0x811c9dc5;
   for (let i = 0; i < text.length; i++) {

@@ -14,7 +14,7 @@ export interface BalanceCheck {
 }
 
 /** "Not in the species library: X (closest: A, B)" for each species the lookup lacks; balance alone is not enough. */
-function unknownOf(parsed: ReturnType<typeof parseEquation>, lookup: StructureLookup): { keys: string[]; message: string } {
+function unknownOf(parsed: ReturnType<typeof parseEquation>, lookup: Pick<StructureLookup, 'get' | 'suggest'>): { keys: string[]; message: string } {
   const keys = [...new Set([...parsed.reactants, ...parsed.products].map((t) => t.species.key).filter((key) => !lookup.get(key)))];
   const message = keys
     .map((key) => {
@@ -26,7 +26,7 @@ function unknownOf(parsed: ReturnType<typeof parseEquation>, lookup: StructureLo
 }
 
 // Parse problems are answers here, not errors: the editor shows them while the user types.
-export function checkEquationBalance(text: string, base: StructureLookup, species?: Record<string, SpeciesDefinition>): BalanceCheck | { error: { code: string; message: string; position: number | null } } {
+export function checkEquationBalance(text: string, base: StructureLookup, species?: Record<string, SpeciesDefinition>): BalanceCheck | { error: { code: string; message: string; position: number | null; details?: Record<string, unknown> } } {
   try {
     // The step's labels are read as the step defines them; a bad definition is an answer like a parse error.
     const lookup = species && Object.keys(species).length ? base.withLabels(species) : base;
@@ -49,6 +49,8 @@ export function checkEquationBalance(text: string, base: StructureLookup, specie
     return { equation: formatEquation(parsed), isBalanced: false, message: `${describeImbalance(report)}.${extra}${unknownText}`, balanced, unknownSpecies: unknown.keys };
   } catch (error) {
     if (!isThermoError(error)) throw error;
-    return { error: { code: error.code, message: error.message, position: error.position ?? null } };
+    // An ambiguous name keeps its choices, so the editor can offer them at the field.
+    const details = error.code === 'AMBIGUOUS_NAME' && error.details ? { details: error.details } : {};
+    return { error: { code: error.code, message: error.message, position: error.position ?? null, ...details } };
   }
 }

@@ -51,7 +51,7 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
   const target = useRouteEditorStore((s) => s.doc.target);
   const selectedStepId = useRouteEditorStore((s) => s.selectedStepId);
   const { canUndo, canRedo } = useRouteEditorStore(useShallow((s) => ({ canUndo: s.past.length > 0, canRedo: s.future.length > 0 })));
-  const { evaluation, results, isEvaluating, error } = useRouteEvaluation(routeId);
+  const { evaluation, results, stale, isEvaluating, error } = useRouteEvaluation(routeId);
   const { saveNow } = useAutosave(routeId, { enabled: canEdit });
   const reviewData = useReviewData(routeId, review.teamId);
   // Links from mails and notifications name a step: open the route with it selected.
@@ -160,6 +160,7 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
         <div ref={canvasBox} className="h-[34rem] overflow-hidden rounded-lg border border-paper-edge bg-white">
           <BoardCanvas
             results={results}
+            stale={stale}
             stepLabels={stepLabels}
             energyUnit={units.energyUnit}
             temperatureUnit={units.temperatureUnit}
