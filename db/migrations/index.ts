@@ -9,6 +9,7 @@ import * as teamSpecies from './20261202-0006-team-species';
 import * as passwordResetSessions from './20261203-0008-password-reset-sessions';
 import * as rateLimitWindows from './20261204-0009-rate-limit-windows';
 import * as revokedSessions from './20261205-0010-revoked-sessions';
+import * as teamSpeciesStructure from './20261206-0011-team-species-structure';
 import * as cautionCollapsed from './20261206-0012-caution-collapsed';
 
 export interface MigrationModule {
@@ -28,5 +29,6 @@ export const MIGRATIONS: ReadonlyArray<{ name: string; module: MigrationModule }
   { name: '20261202-0007-fits', module: fits },
   { name: '20261204-0009-rate-limit-windows', module: rateLimitWindows },
   { name: '20261205-0010-revoked-sessions', module: revokedSessions },
+  { name: '20261206-0011-team-species-structure', module: teamSpeciesStructure },
   { name: '20261206-0012-caution-collapsed', module: cautionCollapsed },
 ];

@@ -27,6 +27,9 @@ export class TeamSpecies extends Model<InferAttributes<TeamSpecies>, InferCreati
   declare fitId: number | null;
   declare importId: number | null;
   declare notes: string;
+  /** RDKit canonical SMILES, for species known by structure */
+  declare smiles: string | null;
+  declare inchikey: string | null;
   declare version: CreationOptional<number>;
   declare createdById: number | null;
   declare updatedById: number | null;
@@ -62,6 +65,8 @@ export function initTeamSpecies(sequelize: Sequelize): typeof TeamSpecies {
       fitId: { type: DataTypes.INTEGER, allowNull: true, field: 'fit_id' },
       importId: { type: DataTypes.INTEGER, allowNull: true, field: 'import_id' },
       notes: { type: DataTypes.TEXT, allowNull: false },
+      smiles: { type: DataTypes.STRING(600), allowNull: true },
+      inchikey: { type: DataTypes.STRING(27), allowNull: true },
       version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
       createdById: { type: DataTypes.INTEGER, allowNull: true, field: 'created_by_id' },
       updatedById: { type: DataTypes.INTEGER, allowNull: true, field: 'updated_by_id' },

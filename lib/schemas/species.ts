@@ -50,7 +50,12 @@ export const TeamSpeciesInput = z.strictObject({
 export type TeamSpeciesInput = z.input<typeof TeamSpeciesInput>;
 export type TeamSpeciesValues = z.output<typeof TeamSpeciesInput>;
 
-export const TeamSpeciesUpdate = z.strictObject({ version: z.number().int().positive(), species: TeamSpeciesInput });
+export const TeamSpeciesUpdate = z.strictObject({
+  version: z.number().int().positive(),
+  species: TeamSpeciesInput,
+  /** the structure as SMILES: absent keeps it, null removes it (the species is then known by its formula only) */
+  smiles: z.string().trim().min(1, { message: 'Paste a SMILES, or clear the structure.' }).max(600, { message: 'A SMILES may be at most 600 characters.' }).nullable().optional(),
+});
 export type TeamSpeciesUpdate = z.infer<typeof TeamSpeciesUpdate>;
 
 export const SpeciesListQuery = z.strictObject({
@@ -74,7 +79,12 @@ export const SpeciesImportCommit = z.strictObject({
 export type SpeciesImportCommit = z.infer<typeof SpeciesImportCommit>;
 
 /** "What would change": the species as it would be saved, and the team species it would replace (none for a new one). */
-export const SpeciesImpactRequest = z.strictObject({ species: TeamSpeciesInput, teamSpeciesId: z.number().int().positive().nullable().default(null) });
+export const SpeciesImpactRequest = z.strictObject({
+  species: TeamSpeciesInput,
+  teamSpeciesId: z.number().int().positive().nullable().default(null),
+  /** as in TeamSpeciesUpdate: absent keeps the species' structure, null removes it */
+  smiles: TeamSpeciesUpdate.shape.smiles,
+});
 export type SpeciesImpactRequest = z.input<typeof SpeciesImpactRequest>;
 
 /** The form's shape: one provenance text whose meaning follows the kind; `toTeamSpeciesInput` makes the API body. */

@@ -232,6 +232,7 @@ const TABLE: Row[] = [
   { route: 'species', method: 'POST', expect: editorsOwnTeam(201), prepare: async () => ({ body: speciesInput() }) },
   { route: 'species/[key]', method: 'GET', expect: signedIn(200), prepare: async () => ({ params: { key: 'H2O(l)' } }) },
   { route: 'species/resolve', method: 'GET', expect: signedIn(200), prepare: async () => ({ path: '/api/species/resolve?smiles=CCOC(C)%3DO&phase=l' }) },
+  { route: 'species/search', method: 'GET', expect: signedIn(200), prepare: async () => ({ path: '/api/species/search?q=ethanol&limit=5' }) },
   { route: 'structures/svg', method: 'GET', expect: signedIn(200), prepare: async () => ({ path: '/api/structures/svg?smiles=CCO&w=120&h=90' }) },
   { route: 'species/impact', method: 'POST', expect: editorsOwnTeam(200), prepare: async () => ({ body: { species: speciesInput() } }) },
   { route: 'species/team/[teamSpeciesId]', method: 'GET', expect: readersOfResource(200), prepare: async (w) => ({ params: { teamSpeciesId: String((await makeTeamSpecies(w)).id) } }) },
@@ -241,6 +242,24 @@ const TABLE: Row[] = [
       const made = await makeTeamSpecies(w);
       return { params: { teamSpeciesId: String(made.id) }, body: { version: made.version, species: { ...speciesInput(), notes: 'Edited.' } } };
     },
+  },
+  {
+    route: 'species/team/[teamSpeciesId]', method: 'DELETE', expect: editorsOfResource(200),
+    prepare: async (w) => {
+      const made = await makeTeamSpecies(w);
+      return { params: { teamSpeciesId: String(made.id) }, path: `/api/species/team/${made.id}?version=${made.version}` };
+    },
+  },
+  { route: 'species/resolve', method: 'POST', expect: signedIn(200), prepare: async () => ({ body: { smiles: 'CCOC(C)=O', phase: 'l' } }) },
+  {
+    // A long n-alkane per call (no library row, entered values), so callers never collide on a structure.
+    route: 'species/team', method: 'POST', expect: editorsOwnTeam(201),
+    prepare: async () => ({
+      body: {
+        smiles: 'C'.repeat(30 + (seq += 1)), phase: 'g', name: `role chain ${seq}`,
+        source: { kind: 'entered', values: { dfH: -400, S: 900 }, provenance: { kind: 'citation', citation: 'Invented for the role matrix, not a value' } },
+      },
+    }),
   },
   { route: 'species/imports', method: 'GET', expect: signedIn(200) },
   { route: 'species/imports', method: 'POST', expect: editorsOwnTeam(201), prepare: async () => ({ rawBody: `${CSV_HEADER}\n${csvRow()}\n`, headers: { 'content-type': 'text/csv' } }) },

@@ -32,6 +32,9 @@ export type TeamSpeciesDto = Omit<BuiltSpecies, 'elements'> & {
   overridesBuiltin: boolean;
   updatedAt: string;
   updatedBy: string | null;
+  /** canonical SMILES and InChIKey when the species is known by structure */
+  smiles: string | null;
+  inchikey: string | null;
 };
 
 export function toTeamSpeciesDto(row: TeamSpecies): TeamSpeciesDto {
@@ -44,6 +47,8 @@ export function toTeamSpeciesDto(row: TeamSpecies): TeamSpeciesDto {
     overridesBuiltin: builtinLookup.get(row.key) !== undefined,
     updatedAt: row.updatedAt.toISOString(),
     updatedBy: updatedBy?.name ?? null,
+    smiles: row.smiles ?? null,
+    inchikey: row.inchikey ?? null,
   };
 }
 

@@ -4,6 +4,7 @@ import { getDb } from '../../../db';
 import { isThermoError } from '../../thermo/errors';
 import { resolveReaction } from '../../thermo/resolve-reaction';
 import type { SpeciesLookup } from '../../thermo/species-library';
+import { isStructureLookup, type SpeciesDefinition } from '../../thermo/structure/structure-lookup-type';
 
 export interface SpeciesUse {
   routeId: number;
@@ -11,6 +12,8 @@ export interface SpeciesUse {
   archived: boolean;
   /** the steps whose equation has the species */
   stepKeys: string[];
+  /** the same steps by their place in the route (1-based) and equation, as people name them */
+  steps: { number: number; equation: string }[];
 }
 
 // Reading every step of a large team is the slow part, so the whole index is kept per lookup (lookups are
@@ -54,29 +57,35 @@ async function buildIndex(teamId: number, lookup: SpeciesLookup, transaction?: T
   const routes = await Route.findAll({
     where: { teamId, deletedAt: null },
     attributes: ['id', 'name', 'archivedAt'],
-    include: [{ model: Step, as: 'steps', attributes: ['stepKey', 'equation', 'sortOrder'] }],
+    include: [{ model: Step, as: 'steps', attributes: ['stepKey', 'equation', 'sortOrder', 'conditions'] }],
     order: [['name', 'ASC'], ['id', 'ASC']],
     transaction,
   });
   const out = new Map<string, SpeciesUse[]>();
   for (const route of routes) {
-    const byKey = new Map<string, string[]>();
-    const steps = ((route.get('steps') as { stepKey: string; equation: string; sortOrder: number }[]) ?? []).sort((a, b) => a.sortOrder - b.sortOrder);
-    for (const step of steps) {
+    const byKey = new Map<string, { key: string; number: number; equation: string }[]>();
+    type StepRow = { stepKey: string; equation: string; sortOrder: number; conditions: { species?: Record<string, SpeciesDefinition> } | null };
+    const steps = ((route.get('steps') as StepRow[]) ?? []).sort((a, b) => a.sortOrder - b.sortOrder);
+    for (const [index, step] of steps.entries()) {
       let speciesKeys: string[];
       try {
-        speciesKeys = resolveReaction(step.equation, lookup).species.map((s) => s.key);
+        // A step may name species by labels bound to a structure ("Boc-AMP" → SMILES); read it as the engine does.
+        const labels = step.conditions?.species;
+        const stepLookup = labels && Object.keys(labels).length && isStructureLookup(lookup) ? lookup.withLabels(labels) : lookup;
+        speciesKeys = resolveReaction(step.equation, stepLookup).species.map((s) => s.key);
       } catch (error) {
         // A step the engine cannot read uses nothing; its route shows the error where it is edited.
         if (isThermoError(error)) continue;
         throw error;
       }
       for (const key of speciesKeys) {
-        byKey.set(key, [...(byKey.get(key) ?? []), step.stepKey]);
+        byKey.set(key, [...(byKey.get(key) ?? []), { key: step.stepKey, number: index + 1, equation: step.equation }]);
       }
     }
-    for (const [key, stepKeys] of byKey) {
-      out.set(key, [...(out.get(key) ?? []), { routeId: route.id, routeName: route.name, archived: route.archivedAt !== null, stepKeys }]);
+    for (const [key, used] of byKey) {
+      out.set(key, [...(out.get(key) ?? []), {
+        routeId: route.id, routeName: route.name, archived: route.archivedAt !== null, stepKeys: used.map((u) => u.key), steps: used.map(({ number, equation }) => ({ number, equation })),
+      }]);
     }
   }
   return out;

@@ -78,6 +78,9 @@ export const COLUMN_RULES: Record<string, Record<string, ColumnRule>> = {
     dfg_kj: finite,
     s_j_per_k: finite,
     version,
+    // A species known by structure: canonical SMILES and a standard InChIKey (both null for one known by formula).
+    smiles: z.string().trim().min(1).max(600, { message: 'A SMILES has at most 600 characters.' }),
+    inchikey: z.string().regex(/^[A-Z]{14}-[A-Z]{10}-[A-Z]$/, { message: 'An InChIKey is 14, 10 and 1 capital letters joined by hyphens.' }),
   },
   fit_data_sets: {
     temperature_unit: z.enum(TEMPERATURE_UNITS),

@@ -26,6 +26,7 @@ const TEAM: TeamSpeciesDto = {
   dfH_kJ: -205, dfG_kJ: -166.3, dfGDerived: true, S_J_per_K: 239.81, Cp_J_per_K: null, cpTmin_K: null, cpTmax_K: null,
   sigmaDfH_kJ: 2, sigmaDfG_kJ: null, sigmaS_J_per_K: null, provenance: { kind: 'estimated', method: 'Kestrel Ridge group additivity, sheet 4' },
   importId: null, notes: '', version: 2, overridesBuiltin: true, updatedAt: '2026-12-02T09:00:00.000Z', updatedBy: 'Baptiste Osei',
+  smiles: null, inchikey: null,
 };
 
 describe('the species table', () => {
@@ -46,7 +47,7 @@ describe('the species detail', () => {
   const detail: SpeciesDetailDto = {
     key: 'CH3OH(g)', inUse: 'team', team: TEAM, builtin: builtinMethanol,
     series: formationSeries(builtinMethanol, nbsLookup), builtinSeries: formationSeries(builtinMethanol, nbsLookup),
-    routes: [{ routeId: 7, routeName: 'Methanol from syngas', archived: false, stepKeys: ['s2'] }],
+    routes: [{ routeId: 7, routeName: 'Methanol from syngas', archived: false, stepKeys: ['s2'], steps: [{ number: 2, equation: 'CO(g) + 2 H2(g) -> CH3OH(g)' }] }],
   };
 
   it('shows team and built-in values with σ and sources, both plots, the routes using it and the caution', () => {

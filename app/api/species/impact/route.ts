@@ -7,7 +7,7 @@ import { previewSpeciesChange } from '@/lib/services/species/preview-species-cha
 export const runtime = 'nodejs';
 
 export const POST = withRoute({ access: 'team', permission: 'species.edit', body: SpeciesImpactRequest }, async ({ team, body }) =>
-  previewSpeciesChange({ teamId: team.id, input: body.species, teamSpeciesId: body.teamSpeciesId }),
+  previewSpeciesChange({ teamId: team.id, input: body.species, teamSpeciesId: body.teamSpeciesId, smiles: body.smiles }),
 );
 
 export const { GET, PUT, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ POST });
