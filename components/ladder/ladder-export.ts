@@ -1,5 +1,7 @@
 // Export of the ladder as a standalone SVG file or a 2× PNG. The chart draws with literal colours and
 // attributes, so a clone of its SVG only needs the page-only parts removed and a font stack every viewer has.
+import { writeCsv } from '@/lib/csv/write-csv';
+import { CAUTION_SHORT } from '@/lib/safety/caution-text';
 import { EXPORT_FONT_STACK, LADDER_COLOURS } from './ladder-palette';
 
 const SVG_NS = 'http://www.w3.org/2000/svg';
@@ -50,8 +52,8 @@ export function downloadBlob(blob: Blob, fileName: string): void {
 }
 
 export function csvBlob(csvText: string): Blob {
-  // A byte-order mark, so spreadsheets read σ, Δ and ° as UTF-8.
-  return new Blob(['\uFEFF', csvText], { type: 'text/csv;charset=utf-8' });
+  // A byte-order mark, so spreadsheets read σ, Δ and ° as UTF-8; a last row with the caution, since the file travels without the page.
+  return new Blob(['\uFEFF', csvText, '\r\n', writeCsv([['Caution', CAUTION_SHORT]])], { type: 'text/csv;charset=utf-8' });
 }
 
 export function svgBlob(svgText: string): Blob {

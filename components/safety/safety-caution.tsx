@@ -5,7 +5,7 @@ import { Notice } from '@/components/ui/notice';
 import { apiFetch } from '@/lib/queries/api-fetch';
 import { meKeys, useProfile } from '@/lib/queries/me';
 import type { ProfileDto } from '@/lib/services/users/get-profile';
-import { CAUTION_FULL, CAUTION_SHORT, CAUTION_TITLE } from './caution-text';
+import { CAUTION_FULL, CAUTION_SHORT, CAUTION_TITLE } from '@/lib/safety/caution-text';
 
 // Saves the fold on the server (per person, every device) and shows it at once.
 function useCautionFold() {

@@ -15,6 +15,8 @@ export const StepwellHeader = z.strictObject({
   name: z.string().trim().min(1, { message: 'Name the route.' }).max(160),
   positions: safeRecord(StepKey, Position).optional(),
   notes: safeRecord(StepKey, z.string().max(4000)).optional(),
+  /** the screen's limits, written into every exported file; read back as nothing more than text */
+  caution: z.string().max(1000).optional(),
 });
 export type StepwellHeader = z.infer<typeof StepwellHeader>;
 

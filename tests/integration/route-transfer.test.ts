@@ -77,6 +77,7 @@ describe('GET /api/routes/[routeId]/export', () => {
         format: 'stepwell.route/1', name: route.name,
         positions: { reform: { x: 10, y: 20 }, synthesis: { x: 360.5, y: -40 } },
         notes: { reform: 'Tube reformer; temperature still to be fixed.' },
+        caution: expect.stringMatching(/^Thermodynamic screen only: it says nothing of rates, runaway/),
       },
     });
     expect((file.steps as unknown[])[1]).toEqual({

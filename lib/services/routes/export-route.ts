@@ -1,5 +1,6 @@
 import 'server-only';
 import { AppError } from '../../api/errors';
+import { CAUTION_SHORT } from '../../safety/caution-text';
 import { ROUTE_FILE_FORMAT, type StepwellHeader } from '../../schemas/route-transfer';
 import type { RouteEvaluateRequest } from '../../thermo/route';
 import { toRouteEvaluateRequest } from './evaluate-route-document';
@@ -23,6 +24,8 @@ export async function exportRoute({ teamId, routeId }: { teamId: number; routeId
       name: doc.name,
       positions: Object.fromEntries(doc.steps.map((s) => [s.id, s.position])),
       ...(Object.keys(notes).length ? { notes } : {}),
+      // The file travels without the page around it, so it carries the caution itself.
+      caution: CAUTION_SHORT,
     },
   };
   const slug = doc.name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 60) || 'route';

@@ -103,7 +103,7 @@ export function CompareClient({ ids }: { ids: number[] }) {
         <Link href={reportHref(ids, comparison.whatIf, basis)} className="rounded-md border border-paper-edge bg-white px-3 py-1.5 text-sm font-medium hover:bg-paper-deep">
           Printable report
         </Link>
-        <Button variant="secondary" onClick={() => downloadBlob(new Blob([metricsCsv(comparison, units, visible)], { type: 'text/csv;charset=utf-8' }), 'stepwell-comparison.csv')}>
+        <Button variant="secondary" onClick={() => downloadBlob(csvBlob(metricsCsv(comparison, units, visible)), 'stepwell-comparison.csv')}>
           Download CSV
         </Button>
         <Button variant="secondary" onClick={() => downloadBlob(csvBlob(compareStepsCsv(comparison)), 'stepwell-comparison-steps.csv')}>

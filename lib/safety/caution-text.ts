@@ -1,4 +1,4 @@
-// The caution's words, kept in one place so the page, the printed reports and file headers say the same thing.
+// The caution's words, kept in one place so the page, the printed reports and exported files say the same thing.
 export const CAUTION_TITLE = 'A thermodynamic screen only';
 
 export const CAUTION_FULL =
