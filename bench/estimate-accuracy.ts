@@ -1,5 +1,7 @@
-// Gas group-additivity estimator against published data: every organic gas row of the organics
-// library (species.csv; ATcT, JANAF, NASA, WebBook, API, CRC as named per row) with 2–20 carbons.
+// Gas group-additivity estimator against published data, on two sets: every organic gas row of the
+// organics library (species.csv; ATcT, JANAF, NASA, WebBook, API, CRC as named per row) with 2–20
+// carbons, and the fine-chemical / drug-like set that tests/reference/fine-chemical-set.ts picks from
+// the app's library by a written rule (functional groups in, energetic and strained classes out).
 // Prints coverage, MAE, RMS, worst case and the share within 2σ for ΔfH°, S° and ΔfG°, the same by
 // weak class, and the time per estimate (parse + graph + groups + symmetry + Cp fit) after a
 // warm-up pass. Asserts nothing. Run: npx tsx bench/estimate-accuracy.ts [--list]
@@ -8,6 +10,7 @@ import { readDataText } from '../lib/thermo/data/data-files';
 import { estimateGas, type GasEstimate, loadRmgDatabase } from '../lib/thermo/estimate/gas-estimate';
 import { wilhoitCp } from '../lib/thermo/estimate/wilhoit';
 import { loadChem } from '../lib/thermo/structure/chem';
+import { EXCLUDE, fineChemicalSet, INCLUDE } from '../tests/reference/fine-chemical-set';
 
 interface Row {
   name: string;
@@ -131,6 +134,7 @@ async function main(): Promise<void> {
     stats(`ΔfH° ${k}`, dH.filter(has));
     stats(`S°   ${k}`, S.filter(has));
   }
+  fineChemicals(chem, db, list);
   const times = done.map((o) => o.ms);
   console.log(`\ntime per estimate after warm-up (library rows): best of 3 p50 ${percentile(times, 50).toFixed(2)} ms, p95 ${percentile(times, 95).toFixed(2)} ms, max ${Math.max(...times).toFixed(1)} ms; one pass p50 ${percentile(singlePass, 50).toFixed(2)}, p95 ${percentile(singlePass, 95).toFixed(2)} ms`);
   const drugTimes = DRUG_LIKE.map((smiles) => {
@@ -154,6 +158,39 @@ async function main(): Promise<void> {
     };
     show('ΔfH°', dH, (r) => r.dfH_source);
     show('S°', S, (r) => r.S_source);
+  }
+}
+
+/** The #17 targets are stated on this set: ΔfH°, ΔfG° MAE ≤ 6 kJ/mol, S° MAE ≤ 6 J/(mol K), ≥ 85 % within 2σ, ≥ 95 % estimated. */
+function fineChemicals(chem: Awaited<ReturnType<typeof loadChem>>, db: ReturnType<typeof loadRmgDatabase>, list: boolean): void {
+  const set = fineChemicalSet(chem);
+  console.log(`\nfine-chemical / drug-like set (rule in tests/reference/fine-chemical-set.ts): ${set.molecules.length} molecules`);
+  console.log(`  in: ${Object.keys(INCLUDE).join(', ')}`);
+  console.log(`  out: ${[...Object.keys(EXCLUDE), 'bridged or caged rings'].join(', ')}; excluded ${set.excluded.length}: ${set.excluded.map((e) => `${e.name} (${e.classes.join(', ')})`).join('; ')}`);
+  const rows = set.molecules.map((m) => {
+    try {
+      return { m, est: estimateGas(chem, m.smiles, db) };
+    } catch (e) {
+      return { m, error: (e as Error).message };
+    }
+  });
+  const done = rows.filter((r) => r.est);
+  console.log(`estimated ${done.length} / ${rows.length} (${((100 * done.length) / rows.length).toFixed(1)} %)`);
+  for (const r of rows.filter((x) => x.error)) console.log(`  not estimated: ${r.m.name} ${r.m.smiles}: ${r.error}`);
+  const pairs = (pick: (e: GasEstimate) => [number, number], ref: (m: (typeof rows)[number]['m']) => number) =>
+    done.map((r) => ({ err: pick(r.est!)[0] - ref(r.m), sigma: pick(r.est!)[1], name: r.m.name, r }));
+  const dH = pairs((e) => [e.dfH_kJ, e.sigma_dfH_kJ], (m) => m.dfH_kJ);
+  const S = pairs((e) => [e.S_J_per_K, e.sigma_S_J_per_K], (m) => m.S_J_per_K);
+  const dG = pairs((e) => [e.dfG_kJ, e.sigma_dfG_kJ], (m) => m.dfG_kJ);
+  stats('ΔfH° (kJ/mol)', dH);
+  stats('S° (J/(mol K))', S);
+  stats('ΔfG° (kJ/mol)', dG);
+  if (list) {
+    console.log('\nfine-chemical set, largest |ΔfG° error| first: ΔfH°, S°, ΔfG° errors (σ) and the row\'s sources');
+    for (const p of [...dG].sort((a, b) => Math.abs(b.err) - Math.abs(a.err))) {
+      const i = dG.indexOf(p);
+      console.log(`${dH[i]!.err.toFixed(1).padStart(7)} (${dH[i]!.sigma.toFixed(1)}) ${S[i]!.err.toFixed(1).padStart(7)} (${S[i]!.sigma.toFixed(1)}) ${p.err.toFixed(1).padStart(7)} (${p.sigma.toFixed(1)})  ${p.name} ${p.r.m.smiles} [${p.r.m.groups.join(', ')}] ${p.r.m.source}`);
+    }
   }
 }
 

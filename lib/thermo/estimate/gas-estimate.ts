@@ -7,6 +7,7 @@ import { elementEntropySum } from './gani/element-entropy';
 import { cpLimits } from './rmg/cp-limits';
 import { entrySource } from './rmg/entry-source';
 import { bensonAlcoholEnthalpies } from './rmg/alcohol-enthalpy';
+import { bensonAmineEntropies } from './rmg/amine-entropy';
 import { groupAdditivity, type GroupSum } from './rmg/group-sum';
 import type { MolGraph } from './rmg/mol-graph';
 import { addThermo, zeroThermo } from './rmg/thermo-values';
@@ -76,8 +77,9 @@ function composition(atoms: readonly { element: string }[]): { formula: string; 
   return { formula: order.map((e) => (elements[e] === 1 ? e : `${e}${elements[e]}`)).join(''), elements };
 }
 
-function withBensonAlcohols(mol: MolGraph, sum: GroupSum): GroupSum {
-  const contributions = bensonAlcoholEnthalpies(mol, sum.contributions);
+/** Benson's own pairs where the tree's mix of sources is off: alcohol ΔfH° (O–C pair), aliphatic amine S° (N and α-C). */
+function withBensonPairs(mol: MolGraph, sum: GroupSum): GroupSum {
+  const contributions = bensonAmineEntropies(mol, bensonAlcoholEnthalpies(mol, sum.contributions));
   const values = zeroThermo();
   for (const c of contributions) addThermo(values, c.values, c.sign);
   return { ...sum, contributions, values };
@@ -101,7 +103,7 @@ export function estimateGas(chem: Chem, structure: string | ParsedStructure, db:
   }
   const tree = groupAdditivity(db, mol);
   // Thermochemistry only (the solvation code sums other quantities on the same machinery).
-  const sum = withBensonAlcohols(mol, tree);
+  const sum = withBensonPairs(mol, tree);
   if (sum.unplaced.length > 0 || !sum.contributions.some((c) => c.file === 'group')) {
     const atoms = sum.unplaced.map((u) => `atom ${u.atom + 1} (${u.element}): ${u.reason}`);
     throw unsupported(atoms.length > 0 ? `No group can centre ${atoms.join('; ')}.` : `${formula} has no atom a group can centre.`, { atoms });
