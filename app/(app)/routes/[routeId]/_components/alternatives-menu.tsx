@@ -111,7 +111,7 @@ export function AlternativesMenu({ routeId }: { routeId: number }) {
           {isOpen ? '▲' : '▼'}
         </span>
       </Button>
-      <div id={panelId} hidden={!isOpen} className="absolute right-0 z-20 mt-1 w-80 rounded-lg border border-paper-edge bg-white p-3 shadow-lg">
+      <div id={panelId} hidden={!isOpen} className="absolute left-0 z-20 mt-1 w-80 max-w-[calc(100vw-2rem)] rounded-lg border border-paper-edge bg-white p-3 shadow-lg">
         {alternatives.isPending ? (
           <p className="text-sm text-ink-soft" role="status">
             Loading alternatives…
