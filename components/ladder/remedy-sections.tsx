@@ -2,8 +2,9 @@
 // action button when the user may edit the route.
 import type { ReactNode } from 'react';
 import type { ConditionMapsOut, ConditionsRemedy, CouplingRemedy, TemperatureRemedy } from '@/lib/thermo/route';
+import { ChemText } from '@/components/chemistry/chem-text';
 import { Button } from '@/components/ui/button';
-import { formatEnergy, formatNumber, formatTemperature, type EnergyUnit, type TemperatureUnit } from './energy-format';
+import { formatEnergy, formatFold, formatNumber, formatTemperature, type EnergyUnit, type TemperatureUnit } from './energy-format';
 import { conditionsActionText, lnQExponent, sampleDeltaG, samplesAround, warningWords, SAMPLE_OFFSET_K } from './remedy-groups';
 
 export const COUPLING_NOTE = 'Coupling is bookkeeping: the two reactions need a real shared mechanism or intermediate.';
@@ -54,7 +55,9 @@ export function TemperatureSection({ remedies, units, canEdit, onApply }: { reme
         const way = r.direction === 'raise' ? '↑ Raise' : r.direction === 'lower' ? '↓ Lower' : 'No temperature in the data range';
         return (
           <Card key={i}>
-            <p className="text-sm text-ink">{r.summary}</p>
+            <p className="text-sm text-ink">
+              <ChemText text={r.summary} />
+            </p>
             <Facts
               rows={[
                 ['Which way', r.direction ? `${way} the temperature (now ${t(r.current_K)})` : way],
@@ -132,11 +135,13 @@ export function ConditionsSection({
         {remedies.map((r, i) => (
           <Card key={i}>
             <p className="text-xs font-semibold uppercase tracking-wide text-ink-soft">{conditionsActionText(r.action)}</p>
-            <p className="mt-1 text-sm text-ink">{r.summary}</p>
+            <p className="mt-1 text-sm text-ink">
+              <ChemText text={r.summary} />
+            </p>
             <Facts
               rows={[
-                conditionValue(r) ? ['Change', conditionValue(r)] : null,
-                r.factor === null ? null : [FACTOR_TERM[r.action] ?? 'Factor', `${formatNumber(r.factor)}-fold`],
+                conditionValue(r) ? ['Change', <ChemText text={conditionValue(r)!} />] : null,
+                r.factor === null ? null : [FACTOR_TERM[r.action] ?? 'Factor', formatFold(r.factor)],
                 r.activity_current === null || r.activity_target === null
                   ? null
                   : ['Activity', `${formatNumber(r.activity_current)} → ${formatNumber(r.activity_target)}`],
@@ -163,14 +168,16 @@ function CouplingCard({ r, units, canEdit, onAdd }: { r: CouplingRemedy; units: 
   return (
     <Card>
       <p className="text-sm font-semibold text-ink">{r.driverName}</p>
-      <p className="mt-1 text-sm text-ink">{r.summary}</p>
+      <p className="mt-1 text-sm text-ink">
+        <ChemText text={r.summary} />
+      </p>
       <Facts
         rows={[
-          ['Driver', <span className="font-mono">{r.driverEquation}</span>],
+          ['Driver', <ChemText text={r.driverEquation} />],
           ['Driver ΔG°', e(r.driverDeltaG0_kJ)],
           ['Multiple', `× ${formatNumber(r.multiple)} (at least × ${formatNumber(r.exactMultiple)})`],
           ['Step ΔG', e(r.stepDeltaG_kJ)],
-          ['Combined', <span className="break-words font-mono">{r.combinedEquation}</span>],
+          ['Combined', <ChemText className="break-words" text={r.combinedEquation} />],
           ['Combined ΔG', e(r.combinedDeltaG_kJ)],
         ]}
       />

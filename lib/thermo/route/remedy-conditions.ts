@@ -6,6 +6,7 @@ import { R_GAS } from '../constants';
 import { evaluateStep, type EvaluateResponse } from '../evaluate';
 import { isThermoError } from '../errors';
 import type { SpeciesLookup } from '../species-library';
+import { formatFold, formatScientific, formatSignificant, superscript } from '../../format/numbers';
 import { num, round3 } from './route-format';
 import type { ConditionsRemedy } from './route-types';
 import { conditionMaps, stepActivities, withConditions, type SpeciesActivity } from './step-activities';
@@ -50,13 +51,13 @@ function sentence(o: Offer, goalText: string): string {
   const now = o.s.pressure ?? o.s.concentration ?? (o.unit === 'bar' ? 'the standard 1 bar' : 'the standard 1 mol/L');
   const rest = 'with the other species as given (or at standard state)';
   if (o.action === 'reactant-excess') {
-    const what = o.unit === 'bar' ? `p(${o.s.key}) = ${num(o.value, 3)} bar` : `c(${o.s.key}) = ${num(o.value, 3)} mol/L`;
-    return `Use a ${num(o.factor, 3)}-fold excess of ${o.s.key} (${what} instead of ${now}), ${rest}: ΔG falls below ${goalText}`;
+    const what = o.unit === 'bar' ? `p(${o.s.key}) = ${formatSignificant(o.value, 3)} bar` : `c(${o.s.key}) = ${formatSignificant(o.value, 3)} mol/L`;
+    return `Use a ${formatFold(o.factor)} excess of ${o.s.key} (${what} instead of ${now}), ${rest}: ΔG falls below ${goalText}`;
   }
   if (o.action === 'product-pressure') {
-    return `Keep p(${o.s.key}) below ${num(o.value, 3)} bar (remove it as it forms), ${rest}: ΔG falls below ${goalText}`;
+    return `Keep p(${o.s.key}) below ${formatSignificant(o.value, 3)} bar (remove it as it forms), ${rest}: ΔG falls below ${goalText}`;
   }
-  return `Remove ${o.s.key} as it forms: keep its activity below ${num(o.activity, 3)} (c below ${num(o.value, 3)} mol/L), ${rest}: ΔG falls below ${goalText}`;
+  return `Remove ${o.s.key} as it forms: keep its activity below ${formatSignificant(o.activity, 3)} (c below ${formatSignificant(o.value, 3)} mol/L), ${rest}: ΔG falls below ${goalText}`;
 }
 
 export function conditionsRemedies(request: EvaluateRequest, result: EvaluateResponse, goal_kJ: number, lookup: SpeciesLookup): ConditionsRemedy[] {
@@ -65,7 +66,7 @@ export function conditionsRemedies(request: EvaluateRequest, result: EvaluateRes
   const lnQ_max = (goal_kJ - result.deltaG0_kJ) / RT_kJ;
   const excess_ln = lnQ_current - lnQ_max;
   if (!(excess_ln > 0)) return [];
-  const goalText = goal_kJ === 0 ? '0' : `${num(goal_kJ)} kJ/mol`;
+  const goalText = goal_kJ === 0 ? '0' : `${formatSignificant(goal_kJ, 4)} kJ/mol`;
   const species = stepActivities(request, result, lookup);
   const base = { kind: 'conditions' as const, goal_kJ, lnQ_current, lnQ_max };
 
@@ -104,7 +105,8 @@ export function conditionsRemedies(request: EvaluateRequest, result: EvaluateRes
       ...base,
       action: 'out-of-reach',
       species: null,
-      summary: `Q would have to fall 10^${num(excess_ln / Math.LN10, 3)}-fold (ln Q from ${num(lnQ_current)} to below ${num(lnQ_max)}); no single pressure or concentration change within practical bounds (≤ ${MAX_REACTANT_PRESSURE_BAR} bar, ≤ ${MAX_REACTANT_CONCENTRATION_M} mol/L, products ≥ ${MIN_PRODUCT_PRESSURE_BAR.toExponential(0)} bar or ${MIN_PRODUCT_CONCENTRATION_M.toExponential(0)} mol/L) gets there`,
+      // Read as a chemist writes it: "Q would have to fall 1.7 million-fold", never "10^6.24-fold".
+      summary: `Q would have to fall ${Number.isFinite(fold) ? formatFold(fold) : `10${superscript(String(Math.round(excess_ln / Math.LN10)))}-fold`} (ln Q from ${formatSignificant(lnQ_current, 4)} to below ${formatSignificant(lnQ_max, 4)}); no single pressure or concentration change within practical bounds (≤ ${MAX_REACTANT_PRESSURE_BAR} bar, ≤ ${MAX_REACTANT_CONCENTRATION_M} mol/L, products ≥ ${formatScientific(MIN_PRODUCT_PRESSURE_BAR, 1)} bar or ${formatScientific(MIN_PRODUCT_CONCENTRATION_M, 1)} mol/L) gets there`,
       activity_current: null,
       activity_target: null,
       factor: Number.isFinite(fold) ? fold : null,
