@@ -3,10 +3,12 @@
 // accurate the forced estimate is on the library's organic gas rows (ATcT, JANAF, NASA, WebBook… per row) and on
 // the fine-chemical / drug-like set (rule in tests/reference/fine-chemical-set.ts), where the #17 targets apply.
 // Prints figures, asserts nothing. The full per-class accuracy table: npx tsx bench/estimate-accuracy.ts
+import { loadavg } from 'node:os';
 import Papa from 'papaparse';
 import { readDataText } from '../lib/thermo/data/data-files';
 import { builtinLookup } from '../lib/thermo/species-library';
 import { loadChem } from '../lib/thermo/structure/chem';
+import { estimateSpecies } from '../lib/thermo/structure/estimated-species';
 import { identifierIndex } from '../lib/thermo/structure/identifiers';
 import { structureLookup } from '../lib/thermo/structure/structure-lookup';
 import { fineChemicalSet } from '../tests/reference/fine-chemical-set';
@@ -90,12 +92,14 @@ export async function runStructureBench(): Promise<Figures> {
   let within2sigma = 0;
   let estimated = 0;
   const times: number[] = [];
+  const timed: string[] = [];
   rows.forEach((row) => {
     const t = performance.now();
     try {
       const key = lookup.resolveDefinition({ smiles: row.smiles, phase: 'g', estimate: true }, 'bench');
       // every row is a structure the process has not seen (none was in the warm-up), timed
       times.push(performance.now() - t);
+      timed.push(row.smiles);
       const r = lookup.get(key)!;
       estimated += 1;
       errors.dfH.push(r.dfH_kJ - Number(row.dfH_kJ_per_mol));
@@ -122,6 +126,22 @@ export async function runStructureBench(): Promise<Figures> {
   Object.assign(figures, fineChemicalFigures(lookup, chem));
   figures.resolve_new_smiles_p50_ms = round(quantile(times, 0.5));
   figures.resolve_new_smiles_p95_ms = round(quantile(times, 0.95));
+  // The same work again without the estimate memo (parse, InChIKey, library match, estimate), twice more; per
+  // molecule the quickest of the three counts, which takes out pauses from other processes on a shared machine.
+  const best = timed.map((smiles, i) => {
+    let quickest = times[i]!;
+    for (let k = 0; k < 2; k += 1) {
+      const t = performance.now();
+      const structure = chem.parse(smiles);
+      lookup.findStructure(structure.inchikey, 'g');
+      estimateSpecies(chem, structure, 'g', null);
+      quickest = Math.min(quickest, performance.now() - t);
+    }
+    return quickest;
+  });
+  figures.resolve_new_smiles_best_of_3_p50_ms = round(quantile(best, 0.5));
+  figures.resolve_new_smiles_best_of_3_p95_ms = round(quantile(best, 0.95));
+  figures.load_average_1min = round(loadavg()[0]!, 1);
 
   // Name search over the whole identifier table: exact names and prefixes, as the species field types them.
   const names = index.compounds.filter((_, i) => i % 97 === 0).map((c) => c.name).slice(0, 600);
