@@ -53,6 +53,7 @@ async function main() {
   };
   await section('route (in-process)', results, () => optional('route.bench.ts', 'runRouteBench'));
   await section('species by structure', results, () => optional('structure.bench.ts', 'runStructureBench'));
+  await section('species search', results, () => optional('species-search.bench.ts', 'runSpeciesSearchBench'));
   await section('JS budget (build output)', results, () => optional('js-budget.ts', 'runJsBudget'));
   await withServer(async () => {
     await section('route endpoint (HTTP)', results, () => runRouteEndpointBench(E2E_BASE_URL));

@@ -6,6 +6,8 @@ import { useForm, useWatch } from 'react-hook-form';
 import { temperatureUnitLabel } from '@/components/ladder/energy-format';
 import { conditionRowsFor, StepFormSchema, stepSignature, toFormValues, toStepPatch, type FormUnits, type StepFormInput, type StepFormValues } from '@/lib/route-editor/step-form';
 import { StepInput } from '@/lib/schemas/route';
+import { AddSpecies } from './add-species';
+import { AmbiguousNameChoices } from './ambiguous-name-choices';
 import { BalanceCheck } from './balance-check';
 import { COMPACT_INPUT } from '@/components/ui/input-class';
 
@@ -74,6 +76,9 @@ function StepFormView({
   }, [watch, getValues, setValue, units, canEdit, onChange]);
 
   const equation = useWatch({ control, name: 'equation' }) ?? '';
+  // A species picked from the search (or a choice for an ambiguous name) changes the equation and the labels together,
+  // as one edit; the form follows the step through the reset above.
+  const handleSpeciesInsert = (next: { equation: string; species: StepInput['species'] }) => onChange({ equation: next.equation, species: next.species }, 'species');
   const conditions = useWatch({ control, name: 'conditions' }) ?? [];
   const errors = formState.errors;
   const tUnit = temperatureUnitLabel(units.temperatureUnit);
@@ -95,6 +100,8 @@ function StepFormView({
           />
           <FieldError id={`${id}-equation-error`} message={errors.equation?.message} />
           <BalanceCheck equation={equation} species={step.species} canEdit={canEdit} onApply={(balanced) => setValue('equation', balanced, { shouldValidate: true, shouldDirty: true })} />
+          <AmbiguousNameChoices equation={equation} species={step.species} canEdit={canEdit} onChoose={handleSpeciesInsert} />
+          <AddSpecies equation={equation} species={step.species} canEdit={canEdit} onAdd={handleSpeciesInsert} />
         </div>
 
         <div className="grid grid-cols-2 gap-2">
