@@ -2,6 +2,7 @@
 
 import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
+import type { ListRoutesQuery } from '@/lib/schemas/route';
 import type { RouteSummaryDto } from '@/lib/services/routes/route-dto';
 import { formatEnergy, type EnergyUnit } from '../ladder/energy-format';
 import { Button } from '../ui/button';
@@ -9,6 +10,17 @@ import type { CardLayout } from './row-cards';
 import { When } from '@/components/ui/when';
 
 export const ROUTE_NUMERIC_COLUMNS = ['steps', 'overallDeltaG', 'uphillSteps'];
+
+// The columns the server sorts by (ListRoutesQuery.sort, the same ids); the values only make react-table offer it.
+const SORT_VALUES: Record<ListRoutesQuery['sort'], (route: RouteSummaryDto) => string | number | null> = {
+  name: (r) => r.name,
+  target: (r) => r.target,
+  updatedAt: (r) => r.updatedAt,
+  steps: (r) => r.stepCount,
+  overallDeltaG: (r) => r.overallDeltaG_kJ,
+  uphillSteps: (r) => r.uphillSteps,
+};
+
 /** On phones each route is a card: tick and name on top, actions at the foot (DataTable `cards`). */
 export const ROUTE_CARD_LAYOUT: CardLayout = { title: ['select', 'name'], footer: ['actions'], labels: { overallDeltaG: 'Overall ΔG' } };
 
@@ -119,6 +131,11 @@ export function routeColumns({
       ),
     },
   ];
+  // react-table offers a header (or the phone's sort menu) as a sort control only where the column reads a value.
+  for (const column of columns) {
+    const read = column.id ? SORT_VALUES[column.id as ListRoutesQuery['sort']] : undefined;
+    if (read) Object.assign(column, { accessorFn: read });
+  }
   const hasDelete = canDelete && onDelete !== undefined;
   if (!canEdit && !hasDelete) return columns;
   return [

@@ -23,12 +23,8 @@ const columns = routeColumns({
   selection: { isSelected: () => false, onToggle: noop },
 });
 
-// react-table sorts only columns that read a value (accessorFn); two of them do here.
-const SORTABLE = new Set(['name', 'overallDeltaG']);
-const sortableColumns = columns.map((c) => (c.id && SORTABLE.has(c.id) ? { ...c, accessorFn: (r: RouteSummaryDto) => (c.id === 'name' ? r.name : r.overallDeltaG_kJ) } : c));
-
 function Cards({ sorting }: { sorting: SortingState }) {
-  const table = useReactTable({ data: [ROUTE], columns: sortableColumns, state: { sorting }, manualSorting: true, getCoreRowModel: getCoreRowModel(), getRowId: (r) => String(r.id) });
+  const table = useReactTable({ data: [ROUTE], columns, state: { sorting }, manualSorting: true, getCoreRowModel: getCoreRowModel(), getRowId: (r) => String(r.id) });
   return createElement(RowCards<RouteSummaryDto>, { table, caption: 'Routes of your team', layout: ROUTE_CARD_LAYOUT, sorting, isBusy: false });
 }
 
@@ -50,10 +46,22 @@ describe('routes as cards on a phone', () => {
     const sortBy = html.match(/<select[^>]*>[\s\S]*?<\/select>/)?.[0] ?? '';
     expect(sortBy).toContain('<option value="overallDeltaG" selected="">Overall ΔG</option>');
     expect(sortBy).toContain('<option value="name">Name</option>');
-    expect(sortBy).not.toContain('value="target"');
+    for (const id of ['target', 'steps', 'uphillSteps', 'updatedAt']) expect(sortBy).toContain(`value="${id}"`);
     expect(sortBy).not.toContain('value="status"');
     expect(sortBy).not.toContain('value="actions"');
     expect(html).toContain('<option value="desc" selected="">Descending</option>');
+  });
+});
+
+describe('the routes table sorts by its headers', () => {
+  it('makes each column the server sorts by a header button, and marks the sort in force', () => {
+    const html = renderToStaticMarkup(
+      createElement(DataTable<RouteSummaryDto>, { caption: 'Routes', data: [ROUTE], columns, sorting: [{ id: 'updatedAt', desc: true }], onSortingChange: noop, getRowId: (r) => String(r.id) }),
+    );
+    const headers = html.match(/<th[\s\S]*?<\/th>/g) ?? [];
+    const buttons = headers.filter((h) => h.includes('<button')).map((h) => h.replace(/<[^>]+>/g, '').replace(/[▲▼↕]/g, ''));
+    expect(buttons).toEqual(['Name', 'Target', 'Steps', 'Overall ΔG', 'Uphill steps', 'Last edited']);
+    expect(headers.find((h) => h.includes('Last edited'))).toContain('aria-sort="descending"');
   });
 });
 
