@@ -22,26 +22,29 @@ const MIN_HEAVY_ATOMS = 3;
 // Salts and metal compounds (CaCO3, NaHCO3) read better as formulas even when they contain carbon.
 const ORGANIC_ELEMENTS = new Set(['C', 'H', 'D', 'T', 'N', 'O', 'S', 'P', 'F', 'Cl', 'Br', 'I', 'B', 'Si', 'Se']);
 
-/** Heavy (non-hydrogen) atoms of a Hill formula ("C2H6O" → 3), and whether it has carbon. */
-export function formulaSkeleton(formula: string): { heavyAtoms: number; hasCarbon: boolean; isOrganic: boolean } {
+/** Heavy (non-hydrogen) atoms of a Hill formula ("C2H6O" → 3), its carbons, whether it has hydrogen, and whether only organic elements. */
+export function formulaSkeleton(formula: string): { heavyAtoms: number; carbons: number; hasHydrogen: boolean; isOrganic: boolean } {
   let heavyAtoms = 0;
-  let hasCarbon = false;
+  let carbons = 0;
+  let hasHydrogen = false;
   let isOrganic = true;
   for (const m of formula.replace(/[+-]\d*$/, '').matchAll(/([A-Z][a-z]?)(\d*)/g)) {
     const element = m[1]!;
     const count = m[2] ? Number(m[2]) : 1;
-    if (element === 'C') hasCarbon = true;
+    if (element === 'C') carbons += count;
+    if (element === 'H' || element === 'D' || element === 'T') hasHydrogen = true;
     if (!ORGANIC_ELEMENTS.has(element)) isOrganic = false;
     if (element !== 'H' && element !== 'D' && element !== 'T') heavyAtoms += count;
   }
-  return { heavyAtoms, hasCarbon, isOrganic };
+  return { heavyAtoms, carbons, hasHydrogen, isOrganic };
 }
 
 /** A drawing says more than the formula: an organic skeleton of three or more heavy atoms, known by structure. */
 export function isDrawable(s: Pick<StructureBrief, 'smiles' | 'formula'>): s is Pick<StructureBrief, 'formula'> & { smiles: string } {
   if (!s.smiles) return false;
-  const { heavyAtoms, hasCarbon, isOrganic } = formulaSkeleton(s.formula);
-  return hasCarbon && isOrganic && heavyAtoms >= MIN_HEAVY_ATOMS;
+  const { heavyAtoms, carbons, hasHydrogen, isOrganic } = formulaSkeleton(s.formula);
+  // One carbon and no hydrogen (CO2, CS2, COCl2) is an inorganic small molecule; its formula says it.
+  return isOrganic && heavyAtoms >= MIN_HEAVY_ATOMS && (carbons >= 2 || (carbons === 1 && hasHydrogen));
 }
 
 /** Reactants and products of a step, each species once, in equation order. */
