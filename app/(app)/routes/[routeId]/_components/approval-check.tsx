@@ -1,6 +1,7 @@
 'use client';
 
 import { useQuery } from '@tanstack/react-query';
+import { ChemText } from '@/components/chemistry/chem-text';
 import { commentsQuery, flagsQuery } from '@/lib/queries/comments';
 import { approvalSummary, type ApprovalItem } from '@/lib/review/approval-summary';
 
@@ -11,7 +12,10 @@ function Items({ items, total, noun }: { items: ApprovalItem[]; total: number; n
     <ul className="ml-4 list-disc text-xs">
       {items.map((item, i) => (
         <li key={i}>
-          <span className="font-medium">{item.place}</span>: {item.text}
+          <span className="font-medium">
+            <ChemText text={item.place} />
+          </span>
+          : {item.text}
         </li>
       ))}
       {total > items.length ? <li className="list-none text-ink-faint">…and {plural(total - items.length, `more ${noun}`, `more ${noun}s`)} in the review tabs below.</li> : null}
