@@ -73,6 +73,15 @@ describe('which species get a drawing', () => {
   });
 });
 
+describe('structure strip', () => {
+  it('shows at most `max` per side and names the rest for screen readers; nothing for a step without species', () => {
+    const html = unescape(renderToStaticMarkup(createElement(StructureStrip, { structures: kred, label: 'KRED', max: 1 })));
+    expectNamedDrawings(html, 2);
+    expect(html).toMatch(/\+1<span class="sr-only"> more: [^<]+ \(C3H8O\)<\/span>/);
+    expect(renderToStaticMarkup(createElement(StructureStrip, { structures: { reactants: [], products: [] }, label: 'empty' }))).toBe('');
+  });
+});
+
 describe('equations typeset as typed', () => {
   it('keeps every character and marks the species terms', () => {
     const equation = 'CO(g) + 2 H2(g) -> CH3OH(g)';
