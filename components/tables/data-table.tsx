@@ -49,7 +49,8 @@ export function DataTable<T>({
     <ScrollRegion label={caption} className="rounded-lg border border-paper-edge bg-white">
       <table className={`w-full text-sm transition-opacity ${isBusy ? 'opacity-70' : ''}`} aria-busy={isBusy}>
         <caption className="sr-only">{caption}</caption>
-        <thead className="bg-paper-deep text-left text-xs uppercase tracking-wide text-ink-faint">
+        {/* Header case as written: units such as "kJ/mol" must not read "KJ/MOL". */}
+        <thead className="bg-paper-deep text-left text-xs text-ink-soft">
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>
               {group.headers.map((header) => {
@@ -67,7 +68,7 @@ export function DataTable<T>({
                       <button
                         type="button"
                         onClick={header.column.getToggleSortingHandler()}
-                        className={`inline-flex items-center gap-1 uppercase tracking-wide hover:text-ink ${sorted ? 'text-ink' : ''}`}
+                        className={`inline-flex items-center gap-1 hover:text-ink ${sorted ? 'text-ink' : ''}`}
                       >
                         {label}
                         <span aria-hidden="true" className="w-3 text-[10px]">

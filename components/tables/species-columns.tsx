@@ -4,13 +4,14 @@ import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
 import { FormulaText, formulaPlain } from '@/components/chemistry/formula-text';
 import { OriginMark } from '@/components/chemistry/origin-mark';
+import { formatFixed } from '@/lib/format/numbers';
 import type { SpeciesRowDto } from '@/lib/services/species/species-dto';
 
 export const PHASE_WORDS: Record<string, string> = { g: 'gas', l: 'liquid', s: 'solid', aq: 'aqueous' };
 
+/** Table values to a fixed precision with the true minus (lib/format): kJ/mol to 0.1, J/(mol K) to 0.01. */
 export function formatNumber(x: number | null | undefined, digits = 2): string {
-  if (x === null || x === undefined) return '—';
-  return x.toLocaleString('en-GB', { minimumFractionDigits: digits, maximumFractionDigits: digits }).replace('-', '−');
+  return formatFixed(x, digits);
 }
 
 export const speciesHref = (key: string) => `/species/${encodeURIComponent(key)}`;
@@ -45,8 +46,8 @@ export function speciesColumns(): ColumnDef<SpeciesRowDto>[] {
     },
     { id: 'name', header: 'Name', enableSorting: false, cell: ({ row }) => row.original.name },
     { id: 'phase', header: 'Phase', enableSorting: false, cell: ({ row }) => row.original.form ?? PHASE_WORDS[row.original.phase] ?? row.original.phase },
-    { id: 'dfH', header: 'ΔfH° kJ/mol', enableSorting: false, cell: ({ row }) => formatNumber(row.original.dfH_kJ) },
-    { id: 'dfG', header: 'ΔfG° kJ/mol', enableSorting: false, cell: ({ row }) => formatNumber(row.original.dfG_kJ) },
+    { id: 'dfH', header: 'ΔfH° kJ/mol', enableSorting: false, cell: ({ row }) => formatNumber(row.original.dfH_kJ, 1) },
+    { id: 'dfG', header: 'ΔfG° kJ/mol', enableSorting: false, cell: ({ row }) => formatNumber(row.original.dfG_kJ, 1) },
     { id: 'S', header: 'S° J/(mol K)', enableSorting: false, cell: ({ row }) => formatNumber(row.original.S_J_per_K) },
     { id: 'source', header: 'Source', enableSorting: false, cell: ({ row }) => <span className="line-clamp-2 max-w-64 text-ink-soft">{row.original.source}</span> },
     { id: 'origin', header: 'Origin', enableSorting: false, cell: ({ row }) => <OriginBadge row={row.original} /> },

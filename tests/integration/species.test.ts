@@ -114,6 +114,8 @@ describe('team species', () => {
     expect(d.builtinSeries).not.toBeNull();
     expect(d.series.range_K).toEqual([198.15, 398.15]); // no Cp° given: our convention, 298.15 ± 100 K
     expect(d.routes).toEqual([expect.objectContaining({ routeId: route.id, stepKeys: ['s2'] })]);
+    // s2 follows s1 along the links, so it is Step 2; the page names it so, never by its key.
+    expect((d.routes[0] as unknown as { steps: unknown[] }).steps).toEqual([{ number: 2, equation: 'CO(g) + 2 H2(g) -> CH3OH(g)', label: 'Step 2 (methanol from carbon monoxide)' }]);
     // A route saved since is seen at once (the usage index follows the team's routes).
     const later = await makeRoute(w.teamId, w.leadId);
     const again = (await callRoute(speciesDetail.GET, { userId: w.reviewerId, params: { key: 'CH3OH(g)' } })).body as typeof d;

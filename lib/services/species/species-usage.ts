@@ -3,6 +3,7 @@ import { col, fn, type Transaction } from 'sequelize';
 import { getDb } from '../../../db';
 import { isThermoError } from '../../thermo/errors';
 import { resolveReaction } from '../../thermo/resolve-reaction';
+import { stepLabels } from '../../route-editor/step-label';
 import type { SpeciesLookup } from '../../thermo/species-library';
 import { isStructureLookup, type SpeciesDefinition } from '../../thermo/structure/structure-lookup-type';
 
@@ -12,8 +13,8 @@ export interface SpeciesUse {
   archived: boolean;
   /** the steps whose equation has the species */
   stepKeys: string[];
-  /** the same steps by their place in the route (1-based) and equation, as people name them */
-  steps: { number: number; equation: string }[];
+  /** the same steps as people name them: place in route order (1-based, as the board numbers it), equation, and label */
+  steps: { number: number; equation: string; label: string }[];
 }
 
 // Reading every step of a large team is the slow part, so the whole index is kept per lookup (lookups are
@@ -53,20 +54,26 @@ function pick(index: Map<string, SpeciesUse[]>, keys?: ReadonlySet<string>): Map
 }
 
 async function buildIndex(teamId: number, lookup: SpeciesLookup, transaction?: Transaction): Promise<Map<string, SpeciesUse[]>> {
-  const { Route, Step } = getDb().models;
+  const { Route, Step, StepLink } = getDb().models;
   const routes = await Route.findAll({
     where: { teamId, deletedAt: null },
     attributes: ['id', 'name', 'archivedAt'],
-    include: [{ model: Step, as: 'steps', attributes: ['stepKey', 'equation', 'sortOrder', 'conditions'] }],
+    include: [
+      { model: Step, as: 'steps', attributes: ['stepKey', 'equation', 'sortOrder', 'conditions'] },
+      // The links give the route order that numbers the steps (lib/route-editor/step-label.ts).
+      { model: StepLink, as: 'links', attributes: ['id', 'fromKey', 'toKey'] },
+    ],
     order: [['name', 'ASC'], ['id', 'ASC']],
     transaction,
   });
   const out = new Map<string, SpeciesUse[]>();
   for (const route of routes) {
-    const byKey = new Map<string, { key: string; number: number; equation: string }[]>();
+    const byKey = new Map<string, { key: string; number: number; equation: string; label: string }[]>();
     type StepRow = { stepKey: string; equation: string; sortOrder: number; conditions: { species?: Record<string, SpeciesDefinition> } | null };
     const steps = ((route.get('steps') as StepRow[]) ?? []).sort((a, b) => a.sortOrder - b.sortOrder);
-    for (const [index, step] of steps.entries()) {
+    const links = ((route.get('links') as { id: number; fromKey: string; toKey: string }[]) ?? []).sort((a, b) => a.id - b.id);
+    const names = stepLabels(steps.map((s) => ({ id: s.stepKey, equation: s.equation })), links.map((l) => ({ from: l.fromKey, to: l.toKey })));
+    for (const step of steps) {
       let speciesKeys: string[];
       try {
         // A step may name species by labels bound to a structure ("Boc-AMP" → SMILES); read it as the engine does.
@@ -79,12 +86,14 @@ async function buildIndex(teamId: number, lookup: SpeciesLookup, transaction?: T
         throw error;
       }
       for (const key of speciesKeys) {
-        byKey.set(key, [...(byKey.get(key) ?? []), { key: step.stepKey, number: index + 1, equation: step.equation }]);
+        const name = names.get(step.stepKey)!;
+        byKey.set(key, [...(byKey.get(key) ?? []), { key: step.stepKey, number: name.number, equation: step.equation, label: name.full }]);
       }
     }
     for (const [key, used] of byKey) {
+      used.sort((a, b) => a.number - b.number);
       out.set(key, [...(out.get(key) ?? []), {
-        routeId: route.id, routeName: route.name, archived: route.archivedAt !== null, stepKeys: used.map((u) => u.key), steps: used.map(({ number, equation }) => ({ number, equation })),
+        routeId: route.id, routeName: route.name, archived: route.archivedAt !== null, stepKeys: used.map((u) => u.key), steps: used.map(({ number, equation, label }) => ({ number, equation, label })),
       }]);
     }
   }

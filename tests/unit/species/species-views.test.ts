@@ -39,7 +39,8 @@ describe('the species table', () => {
     expect(html).toContain('replaced by your team’s');
     expect(html).toContain('href="/species/CH3OH(g)"');
     expect(html).toContain('href="/species/SO4-2(aq)"');
-    expect(html).toContain('−205.00');
+    expect(html).toContain('−205.0<');
+    expect(html).not.toContain('−205.00');
   });
 });
 
@@ -47,19 +48,21 @@ describe('the species detail', () => {
   const detail: SpeciesDetailDto = {
     key: 'CH3OH(g)', inUse: 'team', team: TEAM, builtin: builtinMethanol,
     series: formationSeries(builtinMethanol, nbsLookup), builtinSeries: formationSeries(builtinMethanol, nbsLookup),
-    routes: [{ routeId: 7, routeName: 'Methanol from syngas', archived: false, stepKeys: ['s2'], steps: [{ number: 2, equation: 'CO(g) + 2 H2(g) -> CH3OH(g)' }] }],
+    routes: [{ routeId: 7, routeName: 'Methanol from syngas', archived: false, stepKeys: ['s2'], steps: [{ number: 2, equation: 'CO(g) + 2 H2(g) -> CH3OH(g)', label: 'Step 2 (methanol from carbon monoxide)' }] }],
   };
 
   it('shows team and built-in values with σ and sources, both plots, the routes using it and the caution', () => {
     const html = renderToStaticMarkup(createElement(SpeciesDetail, { detail, canEdit: true }));
     expect(html).toContain('Built-in (not used)');
-    expect(html).toContain('± 2.000');
+    expect(html).toContain('± 2<');
     expect(html).toContain('none published');
     expect(html).toContain('Estimated by Kestrel Ridge group additivity, sheet 4');
     expect(html).toContain('NBS 1982');
     expect(html).toContain('team value derived from ΔfH° and S°');
     expect(html.match(/<svg/g)).toHaveLength(2);
     expect(html).toContain('href="/routes/7?step=s2"');
+    expect(html).toContain('Step 2 (methanol from carbon monoxide)</span></a>');
+    expect(html).not.toContain('>s2<');
     expect(html).toContain('href="/species/team/4/edit"');
     expect(html).toContain('says nothing of rates, runaway or toxicity');
   });

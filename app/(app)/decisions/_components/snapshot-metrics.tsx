@@ -52,7 +52,7 @@ export function SnapshotMetrics({ snapshot, units, chosenRouteId }: { snapshot: 
 
   return (
     <ScrollRegion label="Metrics of the compared routes when the decision was made" className="rounded-lg border border-paper-edge bg-white">
-      <MetricGrid table={table} caption="Metrics of the compared routes when the decision was made" headClassName="bg-paper-deep text-xs uppercase tracking-wide text-ink-faint" />
+      <MetricGrid table={table} caption="Metrics of the compared routes when the decision was made" headClassName="bg-paper-deep text-xs text-ink-soft" />
       <p className="border-t border-paper-edge px-3 py-2 text-xs text-ink-faint">
         “best” marks the best value of a row as the comparison ranked it; rows without a ranking (temperature span, last edit, edited by) mark none.
       </p>

@@ -3,7 +3,8 @@
 import { useQuery } from '@tanstack/react-query';
 import Link from 'next/link';
 import { formulaPlain, isStructureKey } from '@/components/chemistry/formula-text';
-import { formatNumber } from '@/components/tables/species-columns';
+import { ChemText } from '@/components/chemistry/chem-text';
+import { formatKelvin } from '@/lib/format/numbers';
 import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page-header';
 import { can } from '@/lib/auth/permissions';
@@ -56,7 +57,7 @@ export function SpeciesDetail({ detail, canEdit }: { detail: SpeciesDetailDto; c
       </div>
       <SpeciesValues team={team} builtin={builtin} />
       <section aria-labelledby="plots" className="flex flex-col gap-2">
-        <h2 id="plots" className="text-base font-semibold">Over the data range ({formatNumber(lo, 2)}–{formatNumber(hi, 2)} K)</h2>
+        <h2 id="plots" className="text-base font-semibold">Over the data range ({formatKelvin(lo)}–{formatKelvin(hi)} K)</h2>
         <p className="text-sm text-ink-soft">
           {detail.series.cpBasis === 'nasa9' ? 'Cp° from the NASA Glenn polynomial.' : detail.series.cpBasis === 'constant' ? 'Cp° is one constant value over this range.' : detail.series.cpBasis === 'form' ? 'Cp° from the published Cp(T) form named in the sources (or the estimate’s fitted curve).' : 'No Cp° data: ΔfG°(T) takes ΔCp = 0.'}{' '}
           ΔfG°(T) is the formation reaction from the elements in their reference states, as the engine computes it.
@@ -76,11 +77,14 @@ export function SpeciesDetail({ detail, canEdit }: { detail: SpeciesDetailDto; c
               <li key={r.routeId}>
                 <Link href={`/routes/${r.routeId}`} className="font-medium text-pine-700 underline-offset-2 hover:underline">{r.routeName}</Link>
                 {r.archived ? <span className="ml-1 rounded bg-paper-deep px-1 text-[11px] text-ink-faint">archived</span> : null}
-                <span className="text-ink-soft"> — step{r.stepKeys.length > 1 ? 's' : ''} </span>
+                <span className="text-ink-soft"> — </span>
                 {r.stepKeys.map((s, i) => (
                   <span key={s}>
                     {i ? ', ' : ''}
-                    <Link href={`/routes/${r.routeId}?step=${encodeURIComponent(s)}`} className="text-pine-700 underline-offset-2 hover:underline">{s}</Link>
+                    {/* People know a step by its place and what it does ("Step 3 (ethanol dehydrogenation)"), never by its key. */}
+                    <Link href={`/routes/${r.routeId}?step=${encodeURIComponent(s)}`} className="text-pine-700 underline-offset-2 hover:underline">
+                      <ChemText text={r.steps?.[i]?.label ?? `Step ${r.steps?.[i]?.number ?? i + 1}`} />
+                    </Link>
                   </span>
                 ))}
               </li>

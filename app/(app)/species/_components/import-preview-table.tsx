@@ -21,7 +21,7 @@ export function ImportPreviewTable({ rows, choices, onChoice, disabled }: {
     <div className="overflow-x-auto rounded-lg border border-paper-edge bg-white">
       <table className="w-full text-sm">
         <caption className="sr-only">Rows of the uploaded file, checked</caption>
-        <thead className="bg-paper-deep text-left text-xs uppercase tracking-wide text-ink-faint">
+        <thead className="bg-paper-deep text-left text-xs text-ink-soft">
           <tr>
             <th scope="col" className="px-3 py-2">Row</th>
             <th scope="col" className="px-3 py-2">Species</th>
@@ -47,19 +47,19 @@ export function ImportPreviewTable({ rows, choices, onChoice, disabled }: {
                   ) : null}
                   {r.warnings.map((w) => <p key={w} className="mt-1 text-xs text-marginal">Note: {w}</p>)}
                 </td>
-                <td className="px-3 py-2 text-right tabular-nums">{formatNumber(r.dfH_kJ, 3)}</td>
-                <td className="px-3 py-2 text-right tabular-nums">{formatNumber(r.dfG_kJ, 3)}{r.dfGDerived ? <span className="block text-xs text-ink-faint">derived</span> : null}</td>
-                <td className="px-3 py-2 text-right tabular-nums">{formatNumber(r.S_J_per_K, 3)}</td>
+                <td className="px-3 py-2 text-right tabular-nums">{formatNumber(r.dfH_kJ, 1)}</td>
+                <td className="px-3 py-2 text-right tabular-nums">{formatNumber(r.dfG_kJ, 1)}{r.dfGDerived ? <span className="block text-xs text-ink-faint">derived</span> : null}</td>
+                <td className="px-3 py-2 text-right tabular-nums">{formatNumber(r.S_J_per_K, 2)}</td>
                 <td className="px-3 py-2 text-xs text-ink-soft">
                   {r.consistency ? CHECK_WORDS[r.consistency] : '—'}
-                  {r.consistencyDifference_kJ !== null ? <span className="block">difference {formatNumber(r.consistencyDifference_kJ, 3)} kJ/mol</span> : null}
+                  {r.consistencyDifference_kJ !== null ? <span className="block">difference {formatNumber(r.consistencyDifference_kJ, 1)} kJ/mol</span> : null}
                 </td>
                 <td className="px-3 py-2">
                   {r.duplicate && r.key ? (
                     <div className="flex flex-col gap-1">
                       <span className="text-xs">
                         <Link href={speciesHref(r.key)} className="text-pine-700 underline-offset-2 hover:underline">{r.duplicate.of === 'team' ? 'Your team’s' : 'Built-in'} {r.duplicate.name}</Link>
-                        <span className="block text-ink-faint">ΔfG° {formatNumber(r.duplicate.dfG_kJ, 3)} kJ/mol, {r.duplicate.source}</span>
+                        <span className="block text-ink-faint">ΔfG° {formatNumber(r.duplicate.dfG_kJ, 1)} kJ/mol, {r.duplicate.source}</span>
                       </span>
                       <label className="text-xs">
                         <span className="sr-only">What to do with row {r.row}</span>

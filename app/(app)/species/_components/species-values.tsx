@@ -1,8 +1,12 @@
 import { formatNumber } from '@/components/tables/species-columns';
+import { formatSignificant } from '@/lib/format/numbers';
 import type { TeamSpeciesDto } from '@/lib/services/species/species-dto';
 import type { SpeciesRecord } from '@/lib/thermo/species-types';
 
-const sigma = (x: number | null, digits = 2) => (x === null ? <span className="text-ink-faint">none published</span> : <>± {formatNumber(x, digits)}</>);
+// An uncertainty to two significant figures ("± 0.04", "± 2"): its own size, not the value's decimals.
+const sigma = (x: number | null) => (x === null ? <span className="text-ink-faint">none published</span> : <>± {formatSignificant(x, 2)}</>);
+// kJ/mol to 0.1, J/(mol K) to 0.01.
+const decimals = (unit: string) => (unit.startsWith('kJ') ? 1 : 2);
 
 export function provenanceText(team: TeamSpeciesDto): string {
   const p = team.provenance;
@@ -28,7 +32,7 @@ export function SpeciesValues({ team, builtin }: { team: TeamSpeciesDto | null; 
       <div className="overflow-x-auto rounded-lg border border-paper-edge bg-white">
         <table className="w-full text-sm">
           <caption className="sr-only">Standard values with uncertainty</caption>
-          <thead className="bg-paper-deep text-left text-xs uppercase tracking-wide text-ink-faint">
+          <thead className="bg-paper-deep text-left text-xs text-ink-soft">
             <tr>
               <th scope="col" className="px-3 py-2">Quantity</th>
               {team ? <th scope="col" className="px-3 py-2 text-right">Team value</th> : null}
@@ -41,10 +45,10 @@ export function SpeciesValues({ team, builtin }: { team: TeamSpeciesDto | null; 
             {rows.map((r) => (
               <tr key={r.label} className="border-t border-paper-edge">
                 <th scope="row" className="px-3 py-2 text-left font-medium">{r.label} <span className="font-normal text-ink-faint">{r.unit}</span>{r.note ? <span className="block text-xs font-normal text-ink-faint">{r.note}</span> : null}</th>
-                {r.team ? <td className="px-3 py-2 text-right tabular-nums">{formatNumber(r.team[0], 3)}</td> : null}
-                {r.team ? <td className="px-3 py-2">{r.label === 'Cp°' ? '' : sigma(r.team[1], 3)}</td> : null}
-                {r.builtin ? <td className={`px-3 py-2 text-right tabular-nums ${team ? 'text-ink-faint' : ''}`}>{formatNumber(r.builtin[0], 3)}</td> : null}
-                {r.builtin ? <td className="px-3 py-2">{r.label === 'Cp°' ? '' : sigma(r.builtin[1], 3)}</td> : null}
+                {r.team ? <td className="px-3 py-2 text-right tabular-nums">{formatNumber(r.team[0], decimals(r.unit))}</td> : null}
+                {r.team ? <td className="px-3 py-2">{r.label === 'Cp°' ? '' : sigma(r.team[1])}</td> : null}
+                {r.builtin ? <td className={`px-3 py-2 text-right tabular-nums ${team ? 'text-ink-faint' : ''}`}>{formatNumber(r.builtin[0], decimals(r.unit))}</td> : null}
+                {r.builtin ? <td className="px-3 py-2">{r.label === 'Cp°' ? '' : sigma(r.builtin[1])}</td> : null}
               </tr>
             ))}
           </tbody>
@@ -66,7 +70,7 @@ export function SpeciesValues({ team, builtin }: { team: TeamSpeciesDto | null; 
               {builtin.uncertaintyRef ? <span className="block text-xs text-ink-faint">Uncertainty: {builtin.uncertaintyRef}</span> : null}
               {builtin.compilationDifference ? (
                 <span className="block text-xs text-ink-faint">
-                  |ΔfH°| differs by {formatNumber(builtin.compilationDifference.dfH_kJ, 3)} kJ/mol from {builtin.compilationDifference.against}; the engine uses that spread as σ where nothing is published.
+                  |ΔfH°| differs by {formatNumber(builtin.compilationDifference.dfH_kJ, 1)} kJ/mol from {builtin.compilationDifference.against}; the engine uses that spread as σ where nothing is published.
                 </span>
               ) : null}
             </dd>
