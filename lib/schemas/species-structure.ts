@@ -63,3 +63,33 @@ export function toEnteredSource(form: z.output<typeof EnteredValuesForm>): Struc
     provenanceKind === 'citation' ? { kind: 'citation', citation: provenanceText } : { kind: 'measured', reference: provenanceText, fitId: null };
   return { kind: 'entered', values, provenance };
 }
+
+/** The save step of the page as one form: name and notes, and the values by the chosen way. */
+const saveCommon = {
+  name: TeamSpeciesInput.shape.name,
+  /** other names, comma-separated as typed */
+  aliasesText: z.string().max(1000).default(''),
+  notes: TeamSpeciesInput.shape.notes,
+};
+export const StructureSaveForm = z.discriminatedUnion('choice', [
+  z.object({ choice: z.literal('estimate'), ...saveCommon }),
+  EnteredValuesForm.extend({ choice: z.literal('entered'), ...saveCommon, overrideLibrary: z.boolean().default(false) }),
+  z.object({
+    choice: z.literal('fit'),
+    ...saveCommon,
+    fitId: z.number({ message: 'Choose a saved fit.' }).int().positive({ message: 'Choose a saved fit.' }),
+    fitSpecies: z.string().trim().min(1, { message: 'Say which species of the fitted reaction this structure is.' }).max(120),
+    overrideLibrary: z.boolean().default(false),
+  }),
+]);
+export type StructureSaveForm = z.input<typeof StructureSaveForm>;
+
+/** The API body for a filled-in save form and the structure it is for. */
+export function toStructureRequest(form: z.output<typeof StructureSaveForm>, structure: { smiles: string } | { molfile: string }, phase: (typeof SPECIES_PHASES)[number]): TeamSpeciesFromStructure {
+  const aliases = [...new Set(form.aliasesText.split(',').map((a) => a.trim()).filter(Boolean))].slice(0, 12);
+  const common = { ...structure, phase, name: form.name, aliases, notes: form.notes };
+  if (form.choice === 'estimate') return { ...common, source: { kind: 'estimate' } };
+  if (form.choice === 'fit') return { ...common, overrideLibrary: form.overrideLibrary, source: { kind: 'fit', fitId: form.fitId, species: form.fitSpecies } };
+  const { choice: _c, name: _n, aliasesText: _a, notes: _t, overrideLibrary, ...values } = form;
+  return { ...common, overrideLibrary, source: toEnteredSource(values) };
+}

@@ -213,7 +213,7 @@ describe('migration 20261206-0011-team-species-structure', () => {
     const indexes = (await qi.showIndex('team_species')) as { name: string }[];
     expect(indexes.map((i) => i.name)).toContain('team_species_team_inchikey');
     // Rows written before the migration read back with no structure.
-    const [{ n }] = await getDb().sequelize.query<{ n: number }>('SELECT COUNT(*) AS n FROM team_species WHERE inchikey IS NULL', { type: QueryTypes.SELECT });
-    expect(Number(n)).toBeGreaterThan(0);
+    const [row] = await getDb().sequelize.query<{ n: number }>('SELECT COUNT(*) AS n FROM team_species WHERE inchikey IS NULL', { type: QueryTypes.SELECT });
+    expect(Number(row?.n)).toBeGreaterThan(0);
   });
 });
