@@ -28,14 +28,14 @@ export function perMolDeltaG(step: Pick<RouteStepResult, 'result'>): number | nu
 /** What the riser says: its class glyph and the step's ΔG for the route, e.g. "↑ +12.3". */
 export function riserText(step: LadderStep): string {
   const glyph = CLASS_STYLES[step.cls].glyph;
-  if (step.gap === 'error') return `${glyph} check equation`;
+  if (step.gap === 'error') return `${glyph} ${step.problemLabel ?? 'not evaluated'}`;
   if (step.gap === 'not-counted') return 'not in totals';
   return `${glyph} ${formatSigned(step.to - step.from, 1)}`;
 }
 
 export function stepAriaLabel(step: LadderStep, label: string, unit: EnergyUnit, isSelected: boolean): string {
   const parts = [`Step ${step.slot}, ${label}`];
-  if (step.gap === 'error') parts.push('not evaluated, check equation');
+  if (step.gap === 'error') parts.push(`not evaluated, ${step.problemLabel ?? 'see the step'}`);
   else {
     parts.push(CLASS_TEXT[step.cls].toLowerCase());
     if (step.gap === 'not-counted') parts.push('no extent, not in the totals');

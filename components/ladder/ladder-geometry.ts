@@ -2,11 +2,12 @@
 // layout (bands, risers, treads, the dashed standard ladder, ticks). No React, no DOM, so it is unit-tested.
 import { scaleBand, scaleLinear } from 'd3-scale';
 import type { RouteStepResult, StepClass } from '@/lib/thermo/route';
+import { CAUSE_LABEL, causeOf } from '@/lib/route-editor/step-errors';
 import { stepEstimates } from '@/lib/thermo/route/step-estimates';
 import { energyFromKJ, type EnergyUnit } from './energy-format';
 
 export type LadderStepInput = Pick<RouteStepResult, 'id' | 'class' | 'cumulative_kJ' | 'cumulative0_kJ' | 'extent_mol'> &
-  Partial<Pick<RouteStepResult, 'result' | 'signUncertain'>>;
+  Partial<Pick<RouteStepResult, 'result' | 'signUncertain' | 'error'>>;
 
 /** Why a step has no riser: the engine could not evaluate it, or it has no extent and is left out of the totals. */
 export type GapReason = 'error' | 'not-counted';
@@ -29,6 +30,8 @@ export interface LadderStep {
   signUncertain: boolean;
   /** σ(ΔrG°) per mol of reaction in kJ (the engine's unit); null when none is known */
   sigma_kJ: number | null;
+  /** for a step that could not be evaluated, its cause in words ("check temperature", "unknown species") */
+  problemLabel?: string;
 }
 
 export interface LadderModel {
@@ -69,6 +72,7 @@ export function buildLadder(order: readonly string[], steps: readonly LadderStep
       estimated: stepEstimates(s?.result) !== null,
       signUncertain: s?.signUncertain === true && gap !== 'error',
       sigma_kJ: sigma !== null && Number.isFinite(sigma) ? sigma : null,
+      ...(gap === 'error' ? { problemLabel: s?.error ? CAUSE_LABEL[causeOf(s.error)] : 'not evaluated' } : {}),
     };
   });
   return { steps: out, hasEstimates: out.some((s) => s.estimated), end: level, end0: level0, domain: ladderDomain(out) };
@@ -103,7 +107,7 @@ export const LEGEND_ITEMS: readonly { key: LegendKey; label: string }[] = [
   { key: 'downhill', label: '↓ downhill' },
   { key: 'marginal', label: '≈ marginal' },
   { key: 'uphill', label: '↑ uphill' },
-  { key: 'error', label: 'check equation' },
+  { key: 'error', label: 'not evaluated' },
   { key: 'estimated', label: '◌ estimated values' },
 ];
 

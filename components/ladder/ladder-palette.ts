@@ -36,5 +36,5 @@ export const CLASS_STYLES: Record<StepClass, ClassStyle> = {
   downhill: { stroke: LADDER_COLOURS.downhill, fill: LADDER_COLOURS.downhill, pattern: null, glyph: '↓', label: 'downhill' },
   marginal: { stroke: LADDER_COLOURS.marginal, fill: LADDER_COLOURS.marginalBg, pattern: 'dots', glyph: '≈', label: 'marginal' },
   uphill: { stroke: LADDER_COLOURS.uphill, fill: LADDER_COLOURS.uphillBg, pattern: 'hatch', glyph: '↑', label: 'uphill' },
-  error: { stroke: LADDER_COLOURS.inkFaint, fill: LADDER_COLOURS.paperDeep, pattern: null, glyph: '!', label: 'check equation' },
+  error: { stroke: LADDER_COLOURS.inkFaint, fill: LADDER_COLOURS.paperDeep, pattern: null, glyph: '!', label: 'not evaluated' },
 };

@@ -114,7 +114,7 @@ export function LadderStepMark(props: StepMarkProps) {
         </text>
         {fits ? (
           <text x={cx} y={textY} textAnchor="middle" dominantBaseline="middle" fontSize={10} fill={C.inkSoft}>
-            {isError ? 'check equation' : text}
+            {isError ? (r.step.problemLabel ?? 'not evaluated') : text}
           </text>
         ) : null}
         {hasFocusRing ? (

@@ -4,6 +4,7 @@
 import type { ReactNode } from 'react';
 import type { CouplingRemedy, RouteStepResult } from '@/lib/thermo/route';
 import { Notice } from '@/components/ui/notice';
+import { CAUSE_LABEL, causeOf, fieldOfPath, messageAtField } from '@/lib/route-editor/step-errors';
 import { ClassBadge } from './class-badge';
 import { formatEnergy, formatNumber, temperatureQuantity, type EnergyUnit, type TemperatureUnit } from './energy-format';
 import { perMolDeltaG, stepLabelOf } from './ladder-describe';
@@ -24,6 +25,15 @@ export interface RemediesPanelProps {
   onApplyConditions: (patch: { pressures?: Record<string, string>; concentrations?: Record<string, string> }) => void;
   onAddCoupledStep: (equation: string, temperature: string) => void;
   stepLabels?: Record<string, string>;
+}
+
+/** The step panel's field an error belongs to, in words: "temperature field", "pressure of CO(g)". */
+function fieldWords(path: string | null): string {
+  const field = fieldOfPath(path);
+  if (field.startsWith('pressure:')) return `pressure of ${field.slice('pressure:'.length)}`;
+  if (field.startsWith('concentration:')) return `concentration of ${field.slice('concentration:'.length)}`;
+  const words: Record<string, string> = { equation: 'equation', temperature: 'temperature', yieldPct: 'yield', electrons: 'electrons', standardPressure: 'standard pressure' };
+  return `${words[field] ?? 'equation'} field`;
 }
 
 function Section({ title, children }: { title: string; children: ReactNode }) {
@@ -100,9 +110,9 @@ export function RemediesPanel({
       <StepHeader step={step} label={label} unit={energyUnit} />
 
       {step.class === 'error' ? (
-        <Notice tone="error" title="This step could not be evaluated">
-          {step.error?.message ?? 'The engine gave no reason.'}
-          {step.error?.field ? <span className="block text-xs opacity-80">Field: {step.error.field}</span> : null}
+        <Notice tone="error" title={`This step could not be evaluated${step.error ? `: ${CAUSE_LABEL[causeOf(step.error)]}` : ''}`}>
+          {step.error ? messageAtField(step.error) : 'The engine gave no reason.'}
+          {step.error ? <span className="block text-xs opacity-80">Marked at the {fieldWords(step.error.field)} in the step panel.</span> : null}
         </Notice>
       ) : null}
 

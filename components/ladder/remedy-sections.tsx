@@ -1,10 +1,11 @@
-// One section per remedy kind: the engine's sentence, the numbers behind it in the user's units, and the
-// action button when the user may edit the route.
+// One section per remedy kind, kept compact: the best remedy of the kind with its sentence, the figure that matters
+// and the action button; the other figures and the other remedies of the kind wait behind "more" buttons.
 import type { ReactNode } from 'react';
 import type { ConditionMapsOut, ConditionsRemedy, CouplingRemedy, TemperatureRemedy } from '@/lib/thermo/route';
 import { ChemText } from '@/components/chemistry/chem-text';
 import { Button } from '@/components/ui/button';
 import { formatEnergy, formatFold, formatNumber, formatTemperature, type EnergyUnit, type TemperatureUnit } from './energy-format';
+import { RemedyDisclosure } from './remedy-disclosure';
 import { conditionsActionText, lnQExponent, sampleDeltaG, samplesAround, warningWords, SAMPLE_OFFSET_K } from './remedy-groups';
 
 export const COUPLING_NOTE = 'Coupling is bookkeeping: the two reactions need a real shared mechanism or intermediate.';
@@ -31,6 +32,30 @@ function Facts({ rows }: { rows: readonly (Fact | null)[] }) {
 
 function Card({ children }: { children: ReactNode }) {
   return <li className="rounded-md border border-paper-edge bg-white p-3">{children}</li>;
+}
+
+/** The figures behind a remedy's sentence, one click away. */
+function MoreFigures({ rows }: { rows: readonly (Fact | null)[] }) {
+  return (
+    <RemedyDisclosure label="Figures" openLabel="Hide figures" className="mt-1">
+      <Facts rows={rows} />
+    </RemedyDisclosure>
+  );
+}
+
+/** The first item of a kind shows; the rest wait behind one button ("2 more drivers"). */
+function FirstAndMore<T>({ items, render, noun }: { items: readonly T[]; render: (item: T, i: number) => ReactNode; noun: [one: string, many: string] }) {
+  const rest = items.slice(1);
+  return (
+    <>
+      <ul className="flex flex-col gap-2">{items.slice(0, 1).map((item, i) => render(item, i))}</ul>
+      {rest.length > 0 ? (
+        <RemedyDisclosure label={`${rest.length} more ${rest.length === 1 ? noun[0] : noun[1]}`} openLabel={`Fewer ${noun[1]}`}>
+          <ul className="flex flex-col gap-2">{rest.map((item, i) => render(item, i + 1))}</ul>
+        </RemedyDisclosure>
+      ) : null}
+    </>
+  );
 }
 
 function Cautions({ words }: { words: string[] }) {
@@ -60,11 +85,15 @@ export function TemperatureSection({ remedies, units, canEdit, onApply }: { reme
             </p>
             <Facts
               rows={[
+                r.suggested_K === null ? null : ['Suggested', `${t(r.suggested_K)}, ΔG ${e(r.suggestedDeltaG_kJ)}`],
+                ['Goal', `ΔG ${goalText(r.goal_kJ, units.energy)} (downhill)`],
+              ]}
+            />
+            <MoreFigures
+              rows={[
                 ['Which way', r.direction ? `${way} the temperature (now ${t(r.current_K)})` : way],
-                ['Goal', `ΔG ${goalText(r.goal_kJ, units.energy)}`],
                 ['ΔG° = 0 at', r.crossover_K === null ? 'no crossover in the data range' : t(r.crossover_K)],
                 r.target_K === null ? null : ['Goal reached at', t(r.target_K)],
-                r.suggested_K === null ? null : ['Suggested', `${t(r.suggested_K)}, ΔG ${e(r.suggestedDeltaG_kJ)}`],
                 [`${SAMPLE_OFFSET_K} K lower`, sampleText(around.below)],
                 [`${SAMPLE_OFFSET_K} K higher`, sampleText(around.above)],
                 r.dataRange_K ? ['Data range', `${t(r.dataRange_K[0])} – ${t(r.dataRange_K[1])}`] : null,
@@ -131,16 +160,18 @@ export function ConditionsSection({
           ).
         </p>
       ) : null}
-      <ul className="flex flex-col gap-2">
-        {remedies.map((r, i) => (
+      <FirstAndMore
+        items={remedies}
+        noun={['way', 'ways']}
+        render={(r, i) => (
           <Card key={i}>
             <p className="text-xs font-semibold uppercase tracking-wide text-ink-soft">{conditionsActionText(r.action)}</p>
             <p className="mt-1 text-sm text-ink">
               <ChemText text={r.summary} />
             </p>
-            <Facts
+            <Facts rows={[conditionValue(r) ? ['Change', <ChemText text={conditionValue(r)!} />] : null]} />
+            <MoreFigures
               rows={[
-                conditionValue(r) ? ['Change', <ChemText text={conditionValue(r)!} />] : null,
                 r.factor === null ? null : [FACTOR_TERM[r.action] ?? 'Factor', formatFold(r.factor)],
                 r.activity_current === null || r.activity_target === null
                   ? null
@@ -154,31 +185,35 @@ export function ConditionsSection({
               </Button>
             ) : null}
           </Card>
-        ))}
-      </ul>
+        )}
+      />
     </div>
   );
 }
 
-// The engine sorts drivers by combined ΔG; the best few show, the rest wait behind a disclosure.
-const COUPLING_SHOWN = 3;
+// The engine ranks drivers by how plausible a partner each is for the step (shared species, same phase, stable
+// states); the first shows, the rest wait behind "more".
 
 function CouplingCard({ r, units, canEdit, onAdd }: { r: CouplingRemedy; units: Units; canEdit: boolean; onAdd: (remedy: CouplingRemedy) => void }) {
   const e = (kJ: number | null | undefined) => formatEnergy(kJ, units.energy, { perMol: true });
   return (
     <Card>
-      <p className="text-sm font-semibold text-ink">{r.driverName}</p>
-      <p className="mt-1 text-sm text-ink">
-        <ChemText text={r.summary} />
+      <p className="text-sm font-semibold text-ink">
+        {formatNumber(r.multiple)} × {r.driverName}
       </p>
+      {r.partnerReasons?.length ? <p className="text-xs text-ink-soft">Why this partner: {r.partnerReasons.join('; ')}</p> : null}
       <Facts
+        rows={[
+          ['Combined', <ChemText className="break-words" text={r.combinedEquation} />],
+          ['Combined ΔG', e(r.combinedDeltaG_kJ)],
+        ]}
+      />
+      <MoreFigures
         rows={[
           ['Driver', <ChemText text={r.driverEquation} />],
           ['Driver ΔG°', e(r.driverDeltaG0_kJ)],
           ['Multiple', `× ${formatNumber(r.multiple)} (at least × ${formatNumber(r.exactMultiple)})`],
           ['Step ΔG', e(r.stepDeltaG_kJ)],
-          ['Combined', <ChemText className="break-words" text={r.combinedEquation} />],
-          ['Combined ΔG', e(r.combinedDeltaG_kJ)],
         ]}
       />
       <Cautions words={warningWords(r.warnings)} />
@@ -203,19 +238,10 @@ export function CouplingSection({
   onAdd: (remedy: CouplingRemedy) => void;
 }) {
   const card = (r: CouplingRemedy, i: number) => <CouplingCard key={`${r.driverId}-${i}`} r={r} units={units} canEdit={canEdit} onAdd={onAdd} />;
-  const rest = remedies.slice(COUPLING_SHOWN);
   return (
     <div className="flex flex-col gap-2">
       <p className="rounded-md border border-brass-500/40 bg-brass-100 px-3 py-2 text-xs text-brass-700">{COUPLING_NOTE}</p>
-      <ul className="flex flex-col gap-2">{remedies.slice(0, COUPLING_SHOWN).map(card)}</ul>
-      {rest.length > 0 ? (
-        <details className="group">
-          <summary className="cursor-pointer rounded text-sm text-pine-700 hover:underline">
-            {rest.length} more {rest.length === 1 ? 'driver' : 'drivers'}
-          </summary>
-          <ul className="mt-2 flex flex-col gap-2">{rest.map((r, i) => card(r, i + COUPLING_SHOWN))}</ul>
-        </details>
-      ) : null}
+      <FirstAndMore items={remedies} render={card} noun={['driver', 'drivers']} />
     </div>
   );
 }

@@ -82,7 +82,8 @@ describe('RemediesPanel', () => {
     expect(html).toContain('Coupling with a driver reaction');
     expect(html).toContain(SAFETY_NOTE);
     expect(html).toContain(COUPLING_NOTE);
-    expect(html).toContain('Use this temperature (619.85 °C)');
+    // The offer reaches the −17 kJ/mol downhill threshold, beyond ΔG° = 0 (619 °C): steam reforming at 688 °C.
+    expect(html).toContain('Use this temperature (688 °C)');
     expect(html).toContain('Apply coupling to this step');
     expect(html).toContain('Gas evolution');
   });
@@ -105,6 +106,9 @@ describe('RemediesPanel', () => {
     const html = unescape(panel('bad'));
     expect(html).toContain('This step could not be evaluated');
     expect(html).toContain('Unknown element symbol "Xx"');
+    // Where it was caused, in words; never the request path.
+    expect(html).toContain('Marked at the equation field in the step panel');
+    expect(html).not.toMatch(/steps\.\d+\./);
   });
 
   it('asks for a selection when no step is selected', () => {

@@ -14,8 +14,10 @@ describe('groupRemedies', () => {
     expect(g.temperature).toHaveLength(1);
     expect(g.conditions.length).toBeGreaterThan(0);
     expect(g.coupling.length).toBeGreaterThan(1);
-    const combined = g.coupling.map((r) => r.combinedDeltaG_kJ);
-    expect([...combined].sort((a, b) => a - b)).toEqual(combined);
+    // The engine's order is kept: the most plausible partner first (lib/thermo/route/coupling-partners.ts).
+    const scores = g.coupling.map((r) => r.partnerScore);
+    expect([...scores].sort((a, b) => b - a)).toEqual(scores);
+    expect(g.coupling.map((r) => r.driverId)).toEqual(step('reform').remedies.filter((r) => r.kind === 'coupling').map((r) => (r as { driverId: string }).driverId));
   });
 
   it('reads unknown or malformed entries defensively', () => {

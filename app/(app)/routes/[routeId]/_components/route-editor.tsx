@@ -177,7 +177,7 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
           />
         </div>
         <div className="h-[34rem] overflow-y-auto rounded-lg border border-paper-edge bg-white p-3">
-          <SidePanel units={units} canEdit={canEdit} evaluation={evaluation} results={results} stepLabels={stepLabels} />
+          <SidePanel units={units} canEdit={canEdit} evaluation={evaluation} results={results} stale={stale} stepLabels={stepLabels} />
         </div>
       </div>
       <p className="hidden text-xs text-ink-faint md:block">{canEdit ? SHORTCUT_HELP : 'F fits the view · select a step to read its details'}</p>

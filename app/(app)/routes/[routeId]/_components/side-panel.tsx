@@ -5,6 +5,7 @@ import { useShallow } from 'zustand/react/shallow';
 import { formatEnergy, type EnergyUnit, type TemperatureUnit } from '@/components/ladder/energy-format';
 import { Button } from '@/components/ui/button';
 import type { FormUnits } from '@/lib/route-editor/step-form';
+import { stepFieldErrors, temperatureRangeNote } from '@/lib/route-editor/step-errors';
 import type { PressureUnit } from '@/lib/schemas/preferences';
 import type { StepInput } from '@/lib/schemas/route';
 import type { RouteEvaluateResponse, RouteStepResult } from '@/lib/thermo/route';
@@ -24,6 +25,18 @@ export interface PanelUnits {
 function RouteOverview({ evaluation, energyUnit }: { evaluation: RouteEvaluateResponse | undefined; energyUnit: EnergyUnit }) {
   if (!evaluation) return null;
   const o = evaluation.overall;
+  // Each step is evaluated on its own; the totals wait until the route is complete, and say why in words.
+  if (evaluation.totalsWithheld) {
+    return (
+      <div className="rounded-md bg-paper px-2 py-1.5 text-xs" data-testid="route-totals-withheld">
+        <p className="font-medium text-ink">Route totals wait for a complete route.</p>
+        <p className="text-ink-soft">
+          {evaluation.totalsWithheld.message.replace(/^target: /, 'Target: ')}
+          {evaluation.totalsWithheld.hint ? ` (${evaluation.totalsWithheld.hint})` : ''}
+        </p>
+      </div>
+    );
+  }
   return (
     <dl className="grid grid-cols-[1fr_auto] gap-x-2 gap-y-0.5 rounded-md bg-paper px-2 py-1.5 text-xs">
       <dt className="text-ink-soft">Overall ΔG at conditions</dt>
@@ -43,12 +56,15 @@ export function SidePanel({
   canEdit,
   evaluation,
   results,
+  stale,
   stepLabels,
 }: {
   units: PanelUnits;
   canEdit: boolean;
   evaluation: RouteEvaluateResponse | undefined;
   results: Map<string, RouteStepResult>;
+  /** steps edited since their result: its errors and figures are out of date */
+  stale?: ReadonlySet<string>;
   stepLabels: Record<string, string>;
 }) {
   const selectedId = useRouteEditorStore((s) => s.selectedStepId);
@@ -63,6 +79,11 @@ export function SidePanel({
   const { updateStep, updateMeta, removeStep, selectStep, addLink, removeLink } = useRouteEditorStore(
     useShallow((s) => ({ updateStep: s.updateStep, updateMeta: s.updateMeta, removeStep: s.removeStep, selectStep: s.selectStep, addLink: s.addLink, removeLink: s.removeLink })),
   );
+  const selectedResult = step ? results.get(step.id) : undefined;
+  const isStale = step ? (stale?.has(step.id) ?? false) : false;
+  // An edited step's old errors may already be fixed: they show again only if the new answer still has them.
+  const engineErrors = useMemo(() => (isStale ? {} : stepFieldErrors(selectedResult?.error)), [isStale, selectedResult]);
+  const temperatureNote = isStale ? null : temperatureRangeNote(selectedResult?.result?.warnings ?? []);
   const formUnits: FormUnits = useMemo(() => ({ temperatureUnit: units.temperatureUnit, pressureUnit: units.pressureUnit }), [units.temperatureUnit, units.pressureUnit]);
 
   const handleStepChange = useCallback(
@@ -99,11 +120,11 @@ export function SidePanel({
           ) : null}
         </div>
       </div>
-      <StepForm key={step.id} step={step} units={formUnits} canEdit={canEdit} onChange={handleStepChange} />
+      <StepForm key={step.id} step={step} units={formUnits} canEdit={canEdit} onChange={handleStepChange} engineErrors={engineErrors} temperatureNote={temperatureNote} />
       <fieldset disabled={!canEdit}>
         <FitPicker value={step.fitId ?? null} onChange={(fitId) => handleStepChange({ fitId }, 'fitId')} />
       </fieldset>
-      <StepResult result={results.get(step.id)} energyUnit={units.energyUnit} temperatureUnit={units.temperatureUnit} />
+      <StepResult result={selectedResult} isStale={isStale} energyUnit={units.energyUnit} temperatureUnit={units.temperatureUnit} />
       <StepLinks step={step} steps={others} links={links} stepLabels={stepLabels} canEdit={canEdit} onAddLink={addLink} onRemoveLink={removeLink} />
     </aside>
   );

@@ -6,6 +6,8 @@ import { useForm, useWatch } from 'react-hook-form';
 import { temperatureUnitLabel } from '@/components/ladder/energy-format';
 import { conditionRowsFor, StepFormSchema, stepSignature, toFormValues, toStepPatch, type FormUnits, type StepFormInput, type StepFormValues } from '@/lib/route-editor/step-form';
 import { StepInput } from '@/lib/schemas/route';
+import { readPressure } from '@/lib/route-editor/quantity-text';
+import type { StepFieldKey } from '@/lib/route-editor/step-errors';
 import { AddSpecies } from './add-species';
 import { AmbiguousNameChoices } from './ambiguous-name-choices';
 import { BalanceCheck } from './balance-check';
@@ -22,17 +24,27 @@ function FieldError({ id, message }: { id: string; message?: string }) {
   ) : null;
 }
 
+type EngineErrors = Partial<Record<StepFieldKey, string>>;
+const NO_ERRORS: EngineErrors = {};
+
 // Every valid change goes straight into the store (undoable); outside changes (undo, remedies) reset the form.
+// The engine's problems with the saved step show at the field that caused them (engineErrors, lib/route-editor/step-errors.ts).
 function StepFormView({
   step,
   units,
   canEdit,
   onChange,
+  engineErrors = NO_ERRORS,
+  temperatureNote = null,
 }: {
   step: StepInput;
   units: FormUnits;
   canEdit: boolean;
   onChange: (patch: Partial<StepInput>, field: string) => void;
+  /** messages by field from the last evaluation of this step */
+  engineErrors?: EngineErrors;
+  /** the engine's word on the temperature that is not an error: outside a species' data range, with the range */
+  temperatureNote?: string | null;
 }) {
   const id = useId();
   const form = useForm<StepFormInput, unknown, StepFormValues>({ resolver: zodResolver(StepFormSchema), defaultValues: toFormValues(step, units), mode: 'onChange' });
@@ -81,7 +93,18 @@ function StepFormView({
   const handleSpeciesInsert = (next: { equation: string; species: StepInput['species'] }) => onChange({ equation: next.equation, species: next.species }, 'species');
   const conditions = useWatch({ control, name: 'conditions' }) ?? [];
   const errors = formState.errors;
+  const equationError = errors.equation?.message ?? engineErrors.equation;
+  const temperatureError = errors.temperature?.message ?? engineErrors.temperature;
+  const yieldError = errors.yieldPct?.message ?? engineErrors.yieldPct;
   const tUnit = temperatureUnitLabel(units.temperatureUnit);
+  const conditionError = (i: number, row: { kind: string; species: string }): string | undefined =>
+    errors.conditions?.[i]?.value?.message ?? engineErrors[`${row.kind === 'pressure' ? 'pressure' : 'concentration'}:${row.species}` as StepFieldKey];
+  // "50 atm" beside a bar field is kept in atm; the note says what that is in the field's unit.
+  const conditionNote = (row: { kind: string; value: string }): string | null => {
+    if (row.kind !== 'pressure' || !row.value) return null;
+    const read = readPressure(row.value, units.pressureUnit);
+    return read.ok ? read.note : null;
+  };
 
   return (
     <form onSubmit={(e) => e.preventDefault()} aria-label="Step" noValidate>
@@ -96,9 +119,11 @@ function StepFormView({
             spellCheck={false}
             className={`${INPUT} font-mono text-[13px]`}
             placeholder="CO(g) + 2 H2(g) -> CH3OH(g)"
+            aria-invalid={equationError ? true : undefined}
+            aria-describedby={equationError ? `${id}-equation-error` : undefined}
             {...register('equation')}
           />
-          <FieldError id={`${id}-equation-error`} message={errors.equation?.message} />
+          <FieldError id={`${id}-equation-error`} message={equationError} />
           <BalanceCheck equation={equation} species={step.species} canEdit={canEdit} onApply={(balanced) => setValue('equation', balanced, { shouldValidate: true, shouldDirty: true })} />
           <AmbiguousNameChoices equation={equation} species={step.species} canEdit={canEdit} onChoose={handleSpeciesInsert} />
           <AddSpecies equation={equation} species={step.species} canEdit={canEdit} onAdd={handleSpeciesInsert} />
@@ -113,13 +138,20 @@ function StepFormView({
               id={`${id}-temperature`}
               inputMode="decimal"
               placeholder={units.temperatureUnit === 'degC' ? '25' : '298.15'}
-              aria-describedby={`${id}-temperature-hint`}
+              aria-invalid={temperatureError ? true : undefined}
+              aria-describedby={[`${id}-temperature-hint`, temperatureError ? `${id}-temperature-error` : '', temperatureNote ? `${id}-temperature-note` : ''].filter(Boolean).join(' ')}
               className={`${INPUT} tabular-nums`}
               {...register('temperature')}
             />
             <p id={`${id}-temperature-hint`} className="text-[11px] text-ink-faint">
               Empty means 298.15 K.
             </p>
+            <FieldError id={`${id}-temperature-error`} message={temperatureError} />
+            {temperatureNote && !temperatureError ? (
+              <p id={`${id}-temperature-note`} className="text-[11px] text-marginal" data-testid="temperature-range-note">
+                {temperatureNote}
+              </p>
+            ) : null}
           </div>
           <div className="flex flex-col gap-1">
             <label htmlFor={`${id}-standard`} className={LABEL}>
@@ -156,9 +188,22 @@ function StepFormView({
                     {row.kind === 'pressure' ? 'p' : 'c'} {row.species}
                   </label>
                   <div className="flex items-center gap-1">
-                    <input id={`${id}-cond-${i}`} inputMode="decimal" placeholder="standard" className={`${INPUT} tabular-nums`} {...register(`conditions.${i}.value`)} />
+                    <input
+                      id={`${id}-cond-${i}`}
+                      inputMode="decimal"
+                      placeholder="standard"
+                      aria-invalid={conditionError(i, row) ? true : undefined}
+                      aria-describedby={conditionError(i, row) || conditionNote(row) ? `${id}-cond-${i}-note` : undefined}
+                      className={`${INPUT} tabular-nums`}
+                      {...register(`conditions.${i}.value`)}
+                    />
                     <span className="w-9 text-[11px] text-ink-faint">{row.kind === 'pressure' ? units.pressureUnit : 'mol/L'}</span>
                   </div>
+                  {conditionError(i, row) || conditionNote(row) ? (
+                    <p id={`${id}-cond-${i}-note`} className={`col-span-2 text-[11px] ${conditionError(i, row) ? 'text-uphill' : 'text-ink-soft'}`}>
+                      {conditionError(i, row) ?? conditionNote(row)}
+                    </p>
+                  ) : null}
                 </div>
               ))}
               <p className="text-[11px] text-ink-faint">Empty means the standard state (1 bar or 1 mol/L).</p>
@@ -177,12 +222,12 @@ function StepFormView({
               min={0}
               max={100}
               step="any"
-              aria-invalid={errors.yieldPct ? true : undefined}
-              aria-describedby={errors.yieldPct ? `${id}-yield-error` : undefined}
+              aria-invalid={yieldError ? true : undefined}
+              aria-describedby={yieldError ? `${id}-yield-error` : undefined}
               className={INPUT}
               {...register('yieldPct', { valueAsNumber: true })}
             />
-            <FieldError id={`${id}-yield-error`} message={errors.yieldPct?.message} />
+            <FieldError id={`${id}-yield-error`} message={yieldError} />
           </div>
           <div className="flex flex-col gap-1">
             <label htmlFor={`${id}-electrons`} className={LABEL}>
@@ -217,5 +262,11 @@ function StepFormView({
 // A drag moves the selected step every frame; the form only cares when its own fields change.
 export const StepForm = memo(
   StepFormView,
-  (a, b) => a.canEdit === b.canEdit && a.units === b.units && a.onChange === b.onChange && stepSignature(a.step) === stepSignature(b.step),
+  (a, b) =>
+    a.canEdit === b.canEdit &&
+    a.units === b.units &&
+    a.onChange === b.onChange &&
+    stepSignature(a.step) === stepSignature(b.step) &&
+    a.temperatureNote === b.temperatureNote &&
+    JSON.stringify(a.engineErrors ?? NO_ERRORS) === JSON.stringify(b.engineErrors ?? NO_ERRORS),
 );

@@ -1,5 +1,6 @@
 import { ClassBadge } from '@/components/ladder/class-badge';
 import { formatEnergy, formatNumber, formatTemperature, type EnergyUnit, type TemperatureUnit } from '@/components/ladder/energy-format';
+import { CAUSE_LABEL, causeOf, messageAtField } from '@/lib/route-editor/step-errors';
 import type { EvaluateResponse } from '@/lib/thermo';
 import type { RouteStepResult } from '@/lib/thermo/route';
 import { StepSpecies } from './step-species';
@@ -24,9 +25,27 @@ function Fact({ term, value }: { term: string; value: string }) {
   );
 }
 
-// The engine's figures for the selected step; its notes and remedies are in the remedies panel below.
-export function StepResult({ result, energyUnit, temperatureUnit }: { result: RouteStepResult | undefined; energyUnit: EnergyUnit; temperatureUnit: TemperatureUnit }) {
-  if (!result) return <p className="text-xs text-ink-faint">Not evaluated yet.</p>;
+// The engine's figures for the selected step; its notes and remedies are in the remedies panel below. A step edited
+// since its figures were computed shows none of them: old figures must not read as the edited step's.
+export function StepResult({
+  result,
+  isStale = false,
+  energyUnit,
+  temperatureUnit,
+}: {
+  result: RouteStepResult | undefined;
+  isStale?: boolean;
+  energyUnit: EnergyUnit;
+  temperatureUnit: TemperatureUnit;
+}) {
+  if (isStale) {
+    return (
+      <p className="text-xs text-ink-faint" aria-live="polite" data-testid="step-result-stale">
+        Changed: evaluating the edited step…
+      </p>
+    );
+  }
+  if (!result) return <p className="text-xs text-ink-faint">Evaluating…</p>;
   const engine = result.result;
   const estimates = engine ? estimateSentence(engine, energyUnit) : null;
   return (
@@ -34,7 +53,12 @@ export function StepResult({ result, energyUnit, temperatureUnit }: { result: Ro
       <div>
         <ClassBadge cls={result.class} isSignUncertain={result.signUncertain} />
       </div>
-      {result.error ? <p className="text-uphill">{result.error.message}</p> : null}
+      {result.error ? (
+        // The cause in a word, then the engine's message; the field that caused it says it too.
+        <p className="text-uphill" data-testid="step-result-error">
+          <span className="font-semibold">{CAUSE_LABEL[causeOf(result.error)]}:</span> {messageAtField(result.error)}
+        </p>
+      ) : null}
       {engine ? (
         <dl className="flex flex-col gap-0.5">
           <Fact
