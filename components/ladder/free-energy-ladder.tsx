@@ -142,20 +142,27 @@ export function FreeEnergyLadder({
   return (
     <figure className="flex flex-col gap-2">
       <div className="flex flex-wrap items-center justify-between gap-2">
-        <figcaption className="text-sm text-ink-soft">
-          Route ΔG <span className="font-semibold text-ink">{formatEnergy(evaluation.overall.deltaG_kJ, energyUnit)}</span>
-          <span className="mx-1 text-ink-faint">·</span>
-          standard ΔG° <span className="font-semibold text-ink">{formatEnergy(evaluation.overall.deltaG0_kJ, energyUnit)}</span>
-          <span className="ml-1 text-ink-faint">({basisLabel})</span>
-          {totalSigma ? (
-            <span
-              className={evaluation.overall.overallSignUncertain ? 'ml-2 rounded border border-ink-soft border-dashed px-1 font-medium text-ink' : 'ml-2 text-ink-faint'}
-              data-testid="ladder-total-sigma"
-            >
-              {evaluation.overall.overallSignUncertain ? `± ${totalSigma}` : totalSigma}
-            </span>
-          ) : null}
-        </figcaption>
+        {evaluation.totalsWithheld ? (
+          // Each step has its own figures on the board; the route's sums wait until a step makes the target.
+          <figcaption className="text-sm text-ink-soft" data-testid="ladder-totals-withheld">
+            <span className="font-semibold text-ink">Route totals wait for a complete route:</span> {evaluation.totalsWithheld.message.replace(/^target: /, '')}
+          </figcaption>
+        ) : (
+          <figcaption className="text-sm text-ink-soft">
+            Route ΔG <span className="font-semibold text-ink">{formatEnergy(evaluation.overall.deltaG_kJ, energyUnit)}</span>
+            <span className="mx-1 text-ink-faint">·</span>
+            standard ΔG° <span className="font-semibold text-ink">{formatEnergy(evaluation.overall.deltaG0_kJ, energyUnit)}</span>
+            <span className="ml-1 text-ink-faint">({basisLabel})</span>
+            {totalSigma ? (
+              <span
+                className={evaluation.overall.overallSignUncertain ? 'ml-2 rounded border border-ink-soft border-dashed px-1 font-medium text-ink' : 'ml-2 text-ink-faint'}
+                data-testid="ladder-total-sigma"
+              >
+                {evaluation.overall.overallSignUncertain ? `± ${totalSigma}` : totalSigma}
+              </span>
+            ) : null}
+          </figcaption>
+        )}
         <div className="flex gap-2">
           <Button variant="secondary" onClick={handleExportSvg}>
             Export SVG
