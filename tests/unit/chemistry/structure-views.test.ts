@@ -155,13 +155,13 @@ describe('compare and the printable report', () => {
     const tabulated = forComparison(hydration, { name: 'Hydration', outcome: { evaluation: evaluateRoute(hydration, { lookup: builtinLookup }) } });
     const comparison = buildComparison([route, tabulated], {}, builtinLookup);
     const [kredLadder, hydrationLadder] = comparison.routes.map((r) => r.ladder!);
-    const kredHtml = unescape(renderToStaticMarkup(createElement(CompareStepList, { ladder: kredLadder!, sharedStepIds: new Set(), unit: 'kJ' })));
+    const kredHtml = unescape(renderToStaticMarkup(createElement(CompareStepList, { ladder: kredLadder!, sharedStepIds: new Set<string>(), unit: 'kJ' })));
     expectNamedDrawings(kredHtml, 4);
     expect(kredHtml).toContain('data-origin="estimated"');
     expect(kredHtml).toMatch(/Estimate<span class="sr-only">: Estimated from the structure by [^<]+<\/span><\/span><span[^>]*>[^<]+ by [^<]+; σ\(ΔrG°\) \d+\.\d kJ\/mol/);
     expect(kredHtml).toContain('The sign of this step is within its uncertainty');
     expect(kredHtml).toContain('The sign of this route’s total is within its uncertainty');
-    const hydrationHtml = unescape(renderToStaticMarkup(createElement(CompareStepList, { ladder: hydrationLadder!, sharedStepIds: new Set(), unit: 'kJ' })));
+    const hydrationHtml = unescape(renderToStaticMarkup(createElement(CompareStepList, { ladder: hydrationLadder!, sharedStepIds: new Set<string>(), unit: 'kJ' })));
     expectNamedDrawings(hydrationHtml, 1);
     expect(hydrationHtml).toContain('data-origin="library"');
     expect(hydrationHtml).toMatch(/Library<span class="sr-only">: Published value from [^<]+<\/span><\/span><span[^>]*>[^<]+<\/span>/);

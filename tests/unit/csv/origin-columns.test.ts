@@ -16,7 +16,7 @@ import { structureLookup } from '@/lib/thermo/structure/structure-lookup';
 import { forComparison, oneStep } from '../compare/compare-fixtures';
 import { estimatedEvaluation, sampleEvaluation } from '../ladder/ladder-fixture';
 
-type Row = Record<string, string>;
+type Row = Record<string, string> & { estimated_species: string };
 const parse = (csv: string): Row[] => Papa.parse<Row>(csv.replace(/^\uFEFF/, ''), { header: true, skipEmptyLines: true }).data;
 
 let estimated: RouteEvaluateResponse;
