@@ -3,11 +3,13 @@
 import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
 import type { ListRoutesQuery } from '@/lib/schemas/route';
+import { ROUTE_STATUS_LABELS, type RouteStatus } from '@/lib/schemas/workflow';
 import type { RouteSummaryDto } from '@/lib/services/routes/route-dto';
 import { formatEnergy, type EnergyUnit } from '../ladder/energy-format';
 import { Button } from '../ui/button';
 import type { CardLayout } from './row-cards';
 import { When } from '@/components/ui/when';
+import { FormulaText } from '@/components/chemistry/formula-text';
 
 export const ROUTE_NUMERIC_COLUMNS = ['steps', 'overallDeltaG', 'uphillSteps'];
 
@@ -103,20 +105,28 @@ export function routeColumns({
         </div>
       ),
     },
-    { id: 'target', header: 'Target', cell: ({ row }) => <span className="font-mono text-xs">{row.original.target}</span> },
+    { id: 'target', header: 'Target', cell: ({ row }) => <FormulaText value={row.original.target} /> },
     {
       id: 'status',
       header: 'Status',
       enableSorting: false,
       cell: ({ row }) => (
-        <span className="rounded bg-paper-deep px-1.5 py-0.5 text-xs capitalize text-ink-soft">{row.original.archived ? 'archived' : row.original.status}</span>
+        <span className="rounded bg-paper-deep px-1.5 py-0.5 text-xs text-ink-soft">
+          {row.original.archived ? 'Archived' : (ROUTE_STATUS_LABELS[row.original.status as RouteStatus] ?? row.original.status.replace(/_/g, ' '))}
+        </span>
       ),
     },
     { id: 'steps', header: 'Steps', cell: ({ row }) => row.original.stepCount },
     {
       id: 'overallDeltaG',
       header: () => <span title="Overall free-energy change per mol of target, at each step's conditions">Overall ΔG</span>,
-      cell: ({ row }) => formatEnergy(row.original.overallDeltaG_kJ, energyUnit, { perMol: true }),
+      // No total is saved while a step fails or the route is incomplete: say so rather than show a number.
+      cell: ({ row }) =>
+        row.original.overallDeltaG_kJ === null ? (
+          <span className="text-ink-faint">{row.original.stepCount === 0 ? 'no steps' : 'not evaluated'}</span>
+        ) : (
+          formatEnergy(row.original.overallDeltaG_kJ, energyUnit, { perMol: true })
+        ),
     },
     { id: 'uphillSteps', header: 'Uphill steps', cell: ({ row }) => <UphillCell count={row.original.uphillSteps} /> },
     {

@@ -52,6 +52,8 @@ export function evaluateRouteDocument(route: RouteLike, lookup: SpeciesLookup, f
 
 export function summariseEvaluation(route: RouteLike, evaluation: RouteEvaluation) {
   if ('error' in evaluation) return { stepCount: route.steps.length, overallDgKj: null, uphillSteps: null };
+  // A step that could not be evaluated is left out of the totals: the list says "not evaluated", never "0.0 … none".
+  if (evaluation.steps.some((s) => s.class === 'error')) return { stepCount: route.steps.length, overallDgKj: null, uphillSteps: null };
   // The list shows no total for a route whose totals wait (no step makes the target yet); its uphill count stands.
   if (evaluation.totalsWithheld) return { stepCount: route.steps.length, overallDgKj: null, uphillSteps: evaluation.overall.uphillSteps };
   // The list shows ΔG per mol of target, whatever amount the route is planned for.
