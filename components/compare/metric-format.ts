@@ -1,6 +1,6 @@
 // How each row of the comparison table reads, and the number it sorts by.
 import type { MetricKey, RouteMetrics } from '@/lib/compare/compare-types';
-import { formatEnergy, formatTemperature, type EnergyUnit, type TemperatureUnit } from '../ladder/energy-format';
+import { formatEnergy, formatTemperature, type EnergyUnit, type TemperatureUnit } from '@/lib/format/units';
 import { formatWhen } from '../ui/when';
 import { ROUTE_STATUS_LABELS, type RouteStatus } from '@/lib/schemas/workflow';
 
