@@ -18,8 +18,8 @@ import { MAX_ROUTE_LINKS, MAX_ROUTE_STEPS, RouteTooLargeError, routeError } from
 import { DEFAULT_MARGINAL_THRESHOLD_KJ, MAX_TARGET_AMOUNT_MOL, MIN_YIELD_FRACTION } from './route-limits';
 import { withStepLabels } from './route-labels';
 import { routeSigma } from './route-sigma';
-import { extentsOrProblem, graphOrProblem, noExtents } from './totals-withheld';
-import type { DriverReaction, Remedy, RouteEvaluateResponse, RouteStepResult, RouteWarning, StepErrorInfo } from './route-types';
+import { extentsOrProblem, graphOrProblem, noExtents, problemOf } from './totals-withheld';
+import type { DriverReaction, Remedy, RouteEvaluateResponse, RouteProblem, RouteStepResult, RouteWarning, StepErrorInfo } from './route-types';
 import { classify, stepNotes } from './step-notes';
 import { readStoichiometry, speciesKey, type Stoichiometry } from './stoichiometry';
 
@@ -75,7 +75,20 @@ function evaluateOne(step: RouteStep, index: number, lookup: SpeciesLookup): Eva
   }
 }
 
-function readInputs(request: RouteEvaluateRequest): { amount: number; threshold: number; yields: number[] } {
+/** The target amount, or (when it cannot be read or is out of bounds) why the totals wait: the steps do not need it. */
+function readAmount(request: RouteEvaluateRequest): { amount: number; problem: RouteProblem | null } {
+  try {
+    const amount = parseAmount(request.targetAmount ?? '1 mol', 'targetAmount');
+    if (!(amount > 0)) throw routeError('targetAmount must be above 0 mol', 'targetAmount', 'e.g. "1 mol"');
+    if (amount > MAX_TARGET_AMOUNT_MOL) throw routeError(`targetAmount must be at most ${MAX_TARGET_AMOUNT_MOL} mol`, 'targetAmount', 'e.g. "1 mol"');
+    return { amount, problem: null };
+  } catch (err) {
+    if (!isThermoError(err)) throw err;
+    return { amount: 1, problem: problemOf(err) };
+  }
+}
+
+function readInputs(request: RouteEvaluateRequest): { threshold: number; yields: number[] } {
   const { steps } = request;
   if (!Array.isArray(steps) || steps.length === 0) {
     throw routeError('A route needs at least one step', 'steps', 'add the steps of the route');
@@ -87,9 +100,6 @@ function readInputs(request: RouteEvaluateRequest): { amount: number; threshold:
   if (!Number.isFinite(threshold) || threshold > 0) {
     throw routeError('marginalThreshold_kJ must be a finite number ≤ 0', 'marginalThreshold_kJ', 'e.g. -17 (≈ K = 10^3 at 298 K)');
   }
-  const amount = parseAmount(request.targetAmount ?? '1 mol', 'targetAmount');
-  if (!(amount > 0)) throw routeError('targetAmount must be above 0 mol', 'targetAmount', 'e.g. "1 mol"');
-  if (amount > MAX_TARGET_AMOUNT_MOL) throw routeError(`targetAmount must be at most ${MAX_TARGET_AMOUNT_MOL} mol`, 'targetAmount', 'e.g. "1 mol"');
   const yields = steps.map((s, i) => {
     const y = s.yield ?? 1;
     if (!Number.isFinite(y) || y < MIN_YIELD_FRACTION || y > 1) {
@@ -97,7 +107,7 @@ function readInputs(request: RouteEvaluateRequest): { amount: number; threshold:
     }
     return y;
   });
-  return { amount, threshold, yields };
+  return { threshold, yields };
 }
 
 function checkTarget(target: string, lookup: SpeciesLookup): void {
@@ -151,7 +161,8 @@ function remediesFor(e: Evaluated, goal_kJ: number, threshold_kJ: number, ctx: C
  */
 export function evaluateRoute(request: RouteEvaluateRequest, opts: RouteOptions): RouteEvaluateResponse {
   const lookup = labelled(opts.lookup, request.species, 'species');
-  const { amount, threshold, yields } = readInputs(request);
+  const { threshold, yields } = readInputs(request);
+  const { amount, problem: amountProblem } = readAmount(request);
   // The target and links may name a label the steps define; each step still evaluates with its own map only.
   const routeLookup = withStepLabels(lookup, request.steps);
   const ids = request.steps.map((s) => s.id);
@@ -160,8 +171,9 @@ export function evaluateRoute(request: RouteEvaluateRequest, opts: RouteOptions)
   const { graph } = linked;
   const links = linked.problem ? [] : (request.links ?? []);
   const evaluated = request.steps.map((s, i) => evaluateOne(s, i, lookup));
-  const totals = linked.problem
-    ? { ext: noExtents(ids), problem: linked.problem }
+  const withheld = linked.problem ?? amountProblem;
+  const totals = withheld
+    ? { ext: noExtents(ids), problem: withheld }
     : extentsOrProblem(ids, () => {
         checkTarget(request.target, routeLookup);
         return computeExtents({ graph, links, nu: evaluated.map((e) => e.nu), yields, target: request.target, targetAmount_mol: amount, lookup: routeLookup });

@@ -153,7 +153,11 @@ describe('limits that keep the extents finite', () => {
   it('refuses a yield below 0.0001 % and a target over 1e9 mol with route errors, not an engine fault', () => {
     const step = { id: 's1', equation: 'H2(g) + 1/2 O2(g) -> H2O(l)' };
     expect(() => evaluateRoute({ target: 'H2O(l)', steps: [{ ...step, yield: 1e-308 }] }, { lookup: nbsLookup })).toThrow(/yield/);
-    expect(() => evaluateRoute({ target: 'H2O(l)', targetAmount: '1e300 mol', steps: [step] }, { lookup: nbsLookup })).toThrow(/at most/);
+    // An amount out of bounds holds back the totals only; the step keeps its own result.
+    const huge = evaluateRoute({ target: 'H2O(l)', targetAmount: '1e300 mol', steps: [step] }, { lookup: nbsLookup });
+    expect(huge.totalsWithheld).toMatchObject({ field: 'targetAmount' });
+    expect(huge.totalsWithheld!.message).toMatch(/at most/);
+    expect(huge.steps[0]!.result).not.toBeNull();
     expect(evaluateRoute({ target: 'H2O(l)', steps: [{ ...step, yield: 1e-6 }] }, { lookup: nbsLookup }).steps[0]!.extent_mol).toBeCloseTo(1e6, 0);
   });
 });
