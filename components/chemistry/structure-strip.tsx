@@ -99,7 +99,7 @@ export function StructureStrip({ structures, label, max = 3, className = '' }: {
       onFocus={open}
       onBlur={close}
       onKeyDown={handleKeyDown}
-      className={`flex min-h-[30px] items-center gap-1 overflow-hidden rounded outline-none focus-visible:ring-2 focus-visible:ring-pine-500 ${className}`}
+      className={`flex min-h-[30px] flex-wrap items-center gap-1 rounded outline-none focus-visible:ring-2 focus-visible:ring-pine-500 ${className}`}
       data-testid="structure-strip"
     >
       <Side items={structures.reactants} max={max} />
