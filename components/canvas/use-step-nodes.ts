@@ -12,6 +12,7 @@ import { reviewMarkText, type ReviewMarksByStep, type StepReviewMarks } from '..
 import { formatEnergy, formatTemperature, type EnergyUnit, type TemperatureUnit } from '../ladder/energy-format';
 import { estimateSpoken, stepSignUncertainText } from '../ladder/ladder-uncertainty';
 import { productHandleId, reactantHandleId, type StepNodeData } from './step-node';
+import { formulaUnicode } from '@/components/chemistry/formula-unicode';
 
 export type NodeSize = { width: number; height: number };
 
@@ -135,7 +136,8 @@ export function useStepNodes({
 export const linkEdgeId = (link: LinkInput) => `${link.from}>${link.to}:${link.species}`;
 
 const ARROW_END = { type: MarkerType.ArrowClosed, width: 16, height: 16 };
-const LABEL_STYLE = { fontFamily: 'ui-monospace, monospace', fontSize: 10 };
+// Edge labels are read, not typed: the species typeset in Unicode (SVG text takes no <sub>), in the body face.
+const LABEL_STYLE = { fontSize: 10 };
 const DANGLING_STYLE = { strokeDasharray: '4 3' };
 
 export function useLinkEdges(links: LinkInput[], steps: StepInput[], selectedEdgeId: string | null): Edge[] {
@@ -162,7 +164,7 @@ export function useLinkEdges(links: LinkInput[], steps: StepInput[], selectedEdg
         target: link.to,
         sourceHandle: hasSource ? productHandleId(link.species) : null,
         targetHandle: hasTarget ? reactantHandleId(link.species) : null,
-        label: link.species,
+        label: formulaUnicode(link.species),
         selected: id === selectedEdgeId,
         markerEnd: ARROW_END,
         labelStyle: LABEL_STYLE,
