@@ -51,8 +51,9 @@ export const speciesImportsQuery = () =>
 
 export const createTeamSpecies = (input: TeamSpeciesInput) => apiFetch<TeamSpeciesDto & { warnings: string[] }>('/api/species', { method: 'POST', body: input });
 
-export const updateTeamSpecies = (id: number, version: number, species: TeamSpeciesInput) =>
-  apiFetch<{ species: TeamSpeciesDto; warnings: string[]; impact: RouteImpact[] }>(`/api/species/team/${id}`, { method: 'PUT', body: { version, species } });
+/** `smiles`: absent keeps the structure, null removes it, a SMILES sets it. */
+export const updateTeamSpecies = (id: number, version: number, species: TeamSpeciesInput, smiles?: string | null) =>
+  apiFetch<{ species: TeamSpeciesDto; warnings: string[]; impact: RouteImpact[] }>(`/api/species/team/${id}`, { method: 'PUT', body: { version, species, ...(smiles === undefined ? {} : { smiles }) } });
 
 export const previewSpeciesImpact = (body: SpeciesImpactRequest) =>
   apiFetch<{ key: string; dfG_kJ: number; dfGDerived: boolean; warnings: string[]; impact: RouteImpact[] }>('/api/species/impact', { method: 'POST', body });

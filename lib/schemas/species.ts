@@ -92,6 +92,8 @@ export const TeamSpeciesForm = TeamSpeciesInput.omit({ provenance: true }).exten
   provenanceKind: z.enum(['citation', 'measured', 'estimated'], { message: 'Say where the values come from.' }),
   provenanceText: z.string().trim().max(500),
   fitId: z.number().int().positive().nullable().default(null),
+  /** editing only: the structure as SMILES; blank means the species is known by its formula alone */
+  smiles: z.string().trim().max(600, { message: 'A SMILES may be at most 600 characters.' }).default(''),
 }).superRefine((v, ctx) => {
   if (v.provenanceText.length >= 3) return;
   const message = { citation: 'Give the citation the values come from.', measured: 'Name the data set or notebook page of the measurement.', estimated: 'Name the estimation method.' }[v.provenanceKind];
@@ -100,7 +102,7 @@ export const TeamSpeciesForm = TeamSpeciesInput.omit({ provenance: true }).exten
 export type TeamSpeciesForm = z.input<typeof TeamSpeciesForm>;
 
 export function toTeamSpeciesInput(form: z.output<typeof TeamSpeciesForm>): TeamSpeciesInput {
-  const { provenanceKind, provenanceText, fitId, ...rest } = form;
+  const { provenanceKind, provenanceText, fitId, smiles: _smiles, ...rest } = form;
   const provenance: SpeciesProvenanceInput =
     provenanceKind === 'citation' ? { kind: 'citation', citation: provenanceText }
       : provenanceKind === 'measured' ? { kind: 'measured', reference: provenanceText, fitId }

@@ -5,6 +5,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import Link from 'next/link';
 import { useState } from 'react';
 import { useForm, type Path } from 'react-hook-form';
+import { StructureImage } from '@/components/chemistry/structure-image';
 import { speciesHref } from '@/components/tables/species-columns';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
@@ -20,7 +21,7 @@ import { RouteImpactList } from './route-impact-list';
 import { SelectField } from './select-field';
 
 const num = { setValueAs: (v: unknown) => (v === '' || v === null || v === undefined ? null : typeof v === 'number' ? v : Number(String(v).replace('−', '-'))) };
-const KNOWN: Path<FormValues>[] = ['formula', 'phase', 'form', 'name', 'aliases', 'dfH', 'dfG', 'S', 'Cp', 'cpTmin_K', 'cpTmax_K', 'sigmaDfH', 'sigmaDfG', 'sigmaS', 'provenanceText', 'notes'];
+const KNOWN: Path<FormValues>[] = ['formula', 'phase', 'form', 'name', 'aliases', 'dfH', 'dfG', 'S', 'Cp', 'cpTmin_K', 'cpTmax_K', 'sigmaDfH', 'sigmaDfG', 'sigmaS', 'provenanceText', 'notes', 'smiles'];
 const TEXT_LABEL = { citation: 'Citation', measured: 'Data set or notebook reference', estimated: 'Estimation method' } as const;
 const TEXT_HINT = {
   citation: 'Authors, title, journal, year, table or page.',
@@ -36,18 +37,18 @@ export function toFormValues(s: TeamSpeciesDto): FormValues {
     cpTmin_K: s.Cp_J_per_K === null ? null : s.cpTmin_K, cpTmax_K: s.Cp_J_per_K === null ? null : s.cpTmax_K,
     sigmaDfH: s.sigmaDfH_kJ, sigmaDfG: s.sigmaDfG_kJ, sigmaS: s.sigmaS_J_per_K,
     provenanceKind: p.kind, provenanceText: p.kind === 'citation' ? p.citation : p.kind === 'measured' ? p.reference : p.method,
-    fitId: p.kind === 'measured' ? p.fitId : null, notes: s.notes,
+    fitId: p.kind === 'measured' ? p.fitId : null, notes: s.notes, smiles: s.smiles ?? '',
   };
 }
 
 const BLANK: FormValues = {
   formula: '', phase: 'g', form: null, name: '', aliases: [], energyUnit: 'kJ/mol', entropyUnit: 'J/(mol K)',
   dfH: null as unknown as number, dfG: null, S: null as unknown as number, Cp: null, cpTmin_K: null, cpTmax_K: null,
-  sigmaDfH: null, sigmaDfG: null, sigmaS: null, provenanceKind: 'citation', provenanceText: '', fitId: null, notes: '',
+  sigmaDfH: null, sigmaDfG: null, sigmaS: null, provenanceKind: 'citation', provenanceText: '', fitId: null, notes: '', smiles: '',
 };
 
 /** Adds a team species, or edits one (`existing`), with units and required provenance; an edit can first show which routes change. */
-export function TeamSpeciesFormView({ existing }: { existing?: TeamSpeciesDto }) {
+export function TeamSpeciesFormView({ existing, onVersion }: { existing?: TeamSpeciesDto; onVersion?: (version: number) => void }) {
   const queryClient = useQueryClient();
   const [formError, setFormError] = useState<string | null>(null);
   const [impact, setImpact] = useState<{ list: RouteImpact[]; done: boolean } | null>(null);
@@ -67,10 +68,12 @@ export function TeamSpeciesFormView({ existing }: { existing?: TeamSpeciesDto })
   async function onSave(values: FormValues) {
     setFormError(null);
     try {
-      const input = toTeamSpeciesInput(FormSchema.parse(values));
+      const parsed = FormSchema.parse(values);
+      const input = toTeamSpeciesInput(parsed);
       if (existing) {
-        const answer = await updateTeamSpecies(existing.id, version, input);
+        const answer = await updateTeamSpecies(existing.id, version, input, parsed.smiles || null);
         setVersion(answer.species.version);
+        onVersion?.(answer.species.version);
         setImpact({ list: answer.impact, done: true });
         setSaved({ key: answer.species.key, warnings: answer.warnings });
       } else {
@@ -86,7 +89,8 @@ export function TeamSpeciesFormView({ existing }: { existing?: TeamSpeciesDto })
   async function onPreview(values: FormValues) {
     setFormError(null);
     try {
-      const answer = await previewSpeciesImpact({ species: toTeamSpeciesInput(FormSchema.parse(values)), teamSpeciesId: existing?.id ?? null });
+      const parsed = FormSchema.parse(values);
+      const answer = await previewSpeciesImpact({ species: toTeamSpeciesInput(parsed), teamSpeciesId: existing?.id ?? null, ...(existing ? { smiles: parsed.smiles || null } : {}) });
       setImpact({ list: answer.impact, done: false });
     } catch (error) {
       setFormError(applyServerErrors(error, setError, KNOWN));
@@ -120,6 +124,21 @@ export function TeamSpeciesFormView({ existing }: { existing?: TeamSpeciesDto })
         <TextField label="Name" placeholder="salicylic acid" error={e('name')} {...register('name')} className="sm:col-span-2" />
         <TextField label="Other names (comma-separated)" error={e('aliases')} {...register('aliases', { setValueAs: (v: string | string[]) => (Array.isArray(v) ? v : v.split(',').map((a) => a.trim()).filter(Boolean)) })} />
       </fieldset>
+      {existing ? (
+        <fieldset className="flex flex-wrap items-start gap-3">
+          <legend className="mb-1 text-sm font-semibold">Structure</legend>
+          {existing.smiles ? <StructureImage smiles={existing.smiles} name={existing.name} formula={existing.formula} width={120} height={90} className="rounded border border-paper-edge bg-white" /> : null}
+          <TextField
+            label="SMILES"
+            className="min-w-0 flex-1"
+            spellCheck={false}
+            autoComplete="off"
+            hint="Steps that give this structure (by SMILES or name) use this species. It must match the formula; clear it to know the species by its formula only."
+            error={e('smiles')}
+            {...register('smiles')}
+          />
+        </fieldset>
+      ) : null}
       <fieldset className="grid gap-3 sm:grid-cols-3">
         <legend className="mb-1 text-sm font-semibold">Values at 298.15 K and 1 bar</legend>
         <SelectField label="Energy unit" {...register('energyUnit')} options={ENERGY_UNITS.map((u) => [u, u])} />
