@@ -5,6 +5,8 @@
 // (lib/thermo/data/source/organics/species.csv).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { GET as search } from '@/app/api/species/search/route';
+import { getDb } from '@/db';
+import { loadChem } from '@/lib/thermo/structure/chem';
 import { createTeamSpecies } from '@/lib/services/species/create-team-species';
 import type { SpeciesSearchHit } from '@/lib/thermo/structure/species-search';
 import { makeTeamWithLead } from './support/fixtures';
@@ -15,12 +17,19 @@ import { setupTestDb, teardownTestDb } from './support/test-db';
 let dir = '';
 let userId = 0;
 let otherUserId = 0;
+let amideInchikey = '';
+const AMIDE_SMILES = 'CC(=O)NCc1ccc(N)cc1';
 beforeAll(async () => {
   ({ dir } = await setupTestDb());
   const team = await makeTeamWithLead('search');
   userId = team.leadId;
   otherUserId = (await makeTeamWithLead('search-other')).leadId;
   await createTeamSpecies({ teamId: team.teamId, userId, input: speciesInput({ name: 'Kestrel amide KR-117', aliases: ['kr117 amide'] }) });
+  // A team species known by structure (invented intermediate; identity computed by RDKit).
+  const drawn = await createTeamSpecies({ teamId: team.teamId, userId, input: speciesInput({ name: 'Kestrel aminobenzyl acetamide', phase: 's' }) });
+  const parsed = (await loadChem()).parse(AMIDE_SMILES);
+  await getDb().models.TeamSpecies.update({ smiles: parsed.smiles, inchikey: parsed.inchikey }, { where: { id: drawn.id } });
+  amideInchikey = parsed.inchikey;
 }, 60_000);
 afterAll(async () => teardownTestDb(dir));
 
@@ -96,6 +105,14 @@ describe('GET /api/species/search', () => {
     const foreign = await get({ q: 'Kestrel amide' }, otherUserId);
     expect(foreign.status).toBe(200);
     expect((foreign.body as { items: SpeciesSearchHit[] }).items.some((h) => h.origin === 'team')).toBe(false);
+  });
+
+  it("draws a team species known by structure: its SMILES and InChIKey come with the hit, and the InChIKey finds it", async () => {
+    const [first] = await items('Kestrel aminobenzyl');
+    expect(first).toMatchObject({ name: 'Kestrel aminobenzyl acetamide', origin: 'team', inchikey: amideInchikey });
+    expect(first!.smiles).toBeTruthy();
+    const byKey = await items(amideInchikey);
+    expect(byKey[0]).toMatchObject({ origin: 'team', match: 'inchikey' });
   });
 
   it('keeps to the limit', async () => {

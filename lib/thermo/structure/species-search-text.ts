@@ -34,9 +34,9 @@ export class NameWordIndex {
     this.search.addAll(batch);
   }
 
-  /** Entries holding every word of the query; the last word may be unfinished (3 letters or more). */
+  /** Entries holding every word of the query; the last word may be unfinished (4 letters or more: shorter stems expand to thousands of words). */
   words(query: string, limit: number): number[] {
-    return this.run(query, limit, { prefix: (term, i, terms) => i === terms.length - 1 && term.length >= 3 });
+    return this.run(query, limit, { prefix: (term, i, terms) => i === terms.length - 1 && term.length >= 4 });
   }
 
   /** Entries holding every word within one edit (two for words of 9 letters or more): typing slips. */

@@ -16,14 +16,16 @@ export type { SearchMatch, SearchOrigin, SearchPhase, SpeciesSearchHit } from '.
 
 /** A hit with its place in the ranking: tier (exact, formula, prefix, word, fuzzy), then an order inside it. */
 export interface RankedHit {
-  hit: SpeciesSearchHit;
+  /** described only for the hits that make the list */
+  hit: () => SpeciesSearchHit;
   tier: number;
   order: number;
 }
 
 const TIER: Record<SearchMatch, number> = { name: 0, cas: 0, inchikey: 0, synonym: 0, formula: 1, prefix: 2, word: 3, fuzzy: 4 };
-// How many whole-name prefix candidates to rank before cutting: enough that short common names surface.
-const PREFIX_POOL = 200;
+// How many whole-name prefix candidates of the identifier table to rank before cutting; the library's own names
+// (short lists, sourced data) are ranked ahead of them anyway.
+const PREFIX_POOL = 60;
 
 export class SpeciesSearchIndex {
   private readonly ids = new WeakMap<IdentifiedCompound, number>();
@@ -88,7 +90,7 @@ export class SpeciesSearchIndex {
       if (id === undefined || found.has(id)) return;
       const entry = this.entries[id]!;
       const length = match === 'word' || match === 'fuzzy' ? this.nameLength[id]! : matched.length;
-      found.set(id, { hit: toHit(entry, match, matched), tier: TIER[match], order: order + (hasData(entry) ? 0 : 0.5) + Math.min(length, 999) / 1e4 });
+      found.set(id, { hit: () => toHit(entry, match, matched), tier: TIER[match], order: order + (hasData(entry) ? 0 : 0.5) + Math.min(length, 999) / 1e4 });
     };
 
     // Exact: a whole name or synonym, a CAS number, an InChIKey. Main names before synonyms.
@@ -118,13 +120,14 @@ export class SpeciesSearchIndex {
     for (const m of this.names.prefix(normaliseQuery(text), PREFIX_POOL)) add(m.id, 'prefix', m.text, 0);
     for (const m of this.identifiers?.prefix(text, PREFIX_POOL) ?? []) add(this.ids.get(m.compound), 'prefix', m.matched, 0);
 
-    // Words anywhere in a name; then, when little has turned up, names a slip away (one or two words: more would
-    // match half the table, slowly). A number or formula that was found is not also read as words.
-    if ((cas || inchikey || formula) && found.size > 0) return [...found.values()];
-    if (found.size < limit) this.words.words(text, limit).forEach((id, rank) => add(id, 'word', displayName(this.entries[id]!), rank));
-    const words = this.words.wordCount(text);
+    // When nothing was found exactly and the prefixes leave room: words anywhere in a name (up to four: longer
+    // texts are whole names, and their common words would match half the table, slowly), then names a slip away
+    // (one or two words). A number or formula that was found is not also read as words.
     const exact = [...found.values()].some((r) => r.tier === 0);
-    if (!exact && found.size < limit && words > 0 && words <= 2 && text.replace(/\s/g, '').length >= 4) {
+    if (exact || ((cas || inchikey || formula) && found.size > 0)) return [...found.values()];
+    const words = this.words.wordCount(text);
+    if (found.size < Math.ceil(limit / 2) && words > 0 && words <= 4) this.words.words(text, limit).forEach((id, rank) => add(id, 'word', displayName(this.entries[id]!), rank));
+    if (found.size < limit && words > 0 && words <= 2 && text.replace(/\s/g, '').length >= 4) {
       this.words.fuzzy(text, limit).forEach((id, rank) => add(id, 'fuzzy', displayName(this.entries[id]!), rank));
     }
 
@@ -144,7 +147,8 @@ export function mergeRanked(lists: readonly (readonly RankedHit[])[], limit: num
   all.sort((a, b) => a.tier - b.tier || a.order - b.order || a.source - b.source);
   const seen = new Set<string>();
   const out: SpeciesSearchHit[] = [];
-  for (const { hit } of all) {
+  for (const ranked of all) {
+    const hit = ranked.hit();
     const id = `${hit.origin === 'team' ? 'team' : 'lib'}|${hit.inchikey ?? `${hit.formula}|${normaliseQuery(hit.name)}|${hit.phases.map((p) => p.key).join(',')}`}`;
     if (seen.has(id)) continue;
     seen.add(id);
