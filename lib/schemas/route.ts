@@ -44,7 +44,13 @@ export const RouteMeta = z.strictObject({
   marginalThreshold_kJ: z.number().finite().max(0, { message: 'The threshold is zero or negative.' }).min(-500).default(DEFAULT_MARGINAL_THRESHOLD_KJ),
 });
 
-export const CreateRouteInput = RouteMeta.pick({ name: true, target: true, targetAmount: true });
+// An amount of substance as people type it for a new route; checked as they type, so "lots" is refused at the field.
+const AMOUNT = /^\s*(?:\d+\.?\d*|\.\d+)(?:e[+-]?\d+)?\s*(?:mol|mmol|kmol|µmol|umol|Mmol)\s*$/i;
+export const TargetAmountText = QuantityString.refine((text) => AMOUNT.test(text) && Number.parseFloat(text) > 0, {
+  message: 'Write an amount of substance above 0 with its unit, e.g. 1 mol, 500 mmol or 2 kmol.',
+});
+
+export const CreateRouteInput = RouteMeta.pick({ name: true, target: true }).extend({ targetAmount: TargetAmountText.default('1 mol') });
 export type CreateRouteInput = z.infer<typeof CreateRouteInput>;
 
 export const SaveRouteInput = RouteMeta.extend({

@@ -78,6 +78,17 @@ describe('evaluate: steps before the route is complete', () => {
   });
 });
 
+describe('new route input', () => {
+  it('refuses an amount of “lots” at its field, and the target probe names a species the library lacks', async () => {
+    const res = await callRoute(createRoute, { method: 'POST', userId: w.designerId, body: { name: 'Lots', target: 'CH3OH(g)', targetAmount: 'lots' } });
+    expect(res.status).toBe(400);
+    expect(JSON.stringify(res.body)).toContain('targetAmount');
+    const probe = await callRoute(balance, { method: 'POST', userId: w.designerId, body: { equation: 'Unobtainium(g) -> Unobtainium(g)' } });
+    expect(probe.status).toBe(200);
+    expect((probe.body as { error: { code: string } }).error.code).toBe('PARSE_ERROR');
+  });
+});
+
 describe('balance check names a species the library lacks', () => {
   it('does not call an equation with a misspelt species balanced', async () => {
     const res = await callRoute(balance, { method: 'POST', userId: w.designerId, body: { equation: 'CO(g) + 2 H2(g) -> CH3OHH(g)' } });
