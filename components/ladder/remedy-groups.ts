@@ -1,6 +1,7 @@
 // Pure helpers for the remedies panel: remedies grouped by kind (read defensively, since a response may come
 // from an older or newer engine), the ±50 K samples, the words for actions and warning codes, and cautions.
 import type { ConditionsAction, ConditionsRemedy, CouplingRemedy, RouteStepResult, TemperatureRemedy, TemperatureSample } from '@/lib/thermo/route';
+import { withTrueMinus } from '@/lib/format/numbers';
 
 export interface UnknownRemedy {
   kind: string;
@@ -96,8 +97,9 @@ export function stepCautions(step: Pick<RouteStepResult, 'notes' | 'result'>): C
   const out: Caution[] = [];
   (step.notes ?? []).forEach((n, i) => {
     const title = n.code === 'HEAT_RELEASE' ? 'Heat release' : n.code === 'GAS_EVOLUTION' ? 'Gas evolution' : 'Note';
-    out.push({ key: `note-${i}-${n.code}`, title, message: n.message });
+    out.push({ key: `note-${i}-${n.code}`, title, message: withTrueMinus(n.message) });
   });
-  (step.result?.warnings ?? []).forEach((w, i) => out.push({ key: `warn-${i}-${w.code}`, title: 'Engine warning', message: w.message }));
+  // The engine writes plain ASCII numbers; people read the true minus.
+  (step.result?.warnings ?? []).forEach((w, i) => out.push({ key: `warn-${i}-${w.code}`, title: 'Engine warning', message: withTrueMinus(w.message) }));
   return out;
 }
