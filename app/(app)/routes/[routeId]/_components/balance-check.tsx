@@ -23,6 +23,12 @@ export function BalanceCheck({ equation, species, canEdit, onApply }: { equation
           <span aria-hidden="true">✗ </span>
           {answer.error.message}
         </p>
+      ) : answer && answer.unknownSpecies?.length ? (
+        // Balanced or not, a species the library lacks stops the evaluation: never a green tick for it.
+        <p className="text-uphill" data-testid="balance-unknown-species">
+          <span aria-hidden="true">✗ </span>
+          {answer.message}
+        </p>
       ) : answer?.isBalanced ? (
         <p className="text-downhill">
           <span aria-hidden="true">✓ </span>
