@@ -1,9 +1,20 @@
-// What the palette hands the canvas through HTML5 drag-and-drop: the equation of the step to add.
+// What the palette hands the canvas through HTML5 drag-and-drop: the equation of the step to add, and the labels
+// it binds to a structure (a recent step's "KR117-nitro" → SMILES), so the new step reads as the old one did.
+import type { SpeciesDefinition } from '@/lib/thermo/structure/structure-lookup-type';
+
 export const STEP_DRAG_MIME = 'application/x-stepwell-step';
 
 export interface StepDragPayload {
   equation: string;
   temperature?: string;
+  species?: Record<string, SpeciesDefinition>;
+}
+
+// The save checks every definition; here only the shape, so a foreign drop cannot put junk in the draft.
+function speciesOf(value: unknown): Record<string, SpeciesDefinition> | undefined {
+  if (!value || typeof value !== 'object' || Array.isArray(value)) return undefined;
+  const entries = Object.entries(value as Record<string, unknown>).filter(([, def]) => def !== null && typeof def === 'object' && !Array.isArray(def));
+  return entries.length ? (Object.fromEntries(entries) as Record<string, SpeciesDefinition>) : undefined;
 }
 
 export function writeStepPayload(dataTransfer: DataTransfer, payload: StepDragPayload): void {
@@ -22,7 +33,8 @@ export function readStepPayload(dataTransfer: DataTransfer): StepDragPayload | n
   try {
     const value = JSON.parse(raw) as Partial<StepDragPayload>;
     if (typeof value.equation !== 'string') return null;
-    return { equation: value.equation, temperature: typeof value.temperature === 'string' ? value.temperature : undefined };
+    const species = speciesOf(value.species);
+    return { equation: value.equation, temperature: typeof value.temperature === 'string' ? value.temperature : undefined, ...(species ? { species } : {}) };
   } catch {
     return null;
   }

@@ -1,5 +1,6 @@
 import { keepPreviousData, queryOptions } from '@tanstack/react-query';
 import type { StepStructures } from '../../components/chemistry/structure-brief';
+import type { SpeciesDefinition } from '../thermo/structure/structure-lookup-type';
 import type { ListRoutesQuery, RouteDraft, SaveRouteInput, StepInput } from '../schemas/route';
 import type { LibraryReaction } from '../services/routes/search-library-reactions';
 import type { DeletedRouteDto } from '../services/routes/list-deleted-routes';
@@ -35,6 +36,8 @@ export interface PaletteAnswer {
   library: LibraryReaction[];
   /** equation → its structures, for entries with something to draw */
   structures: Record<string, StepStructures>;
+  /** recent equation → the labels its latest step binds (dropped with it, so the new step reads the same) */
+  labels: Record<string, Record<string, SpeciesDefinition>>;
 }
 
 export const routeKeys = {

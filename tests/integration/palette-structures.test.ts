@@ -35,8 +35,10 @@ describe('palette structures', () => {
 
     const res = await callRoute(palette, { userId: w.designerId, path: '/api/palette?species=C2H5OH(g)' });
     expect(res.status).toBe(200);
-    const body = res.body as { recent: string[]; library: { equation: string }[]; structures: Record<string, StepStructures> };
+    const body = res.body as { recent: string[]; library: { equation: string }[]; structures: Record<string, StepStructures>; labels: Record<string, unknown> };
     expect(body.recent).toContain(LABELLED);
+    // Dropped with the equation, so the new step binds its labels as the old one did.
+    expect(body.labels[LABELLED]).toEqual(step.species);
     const labelled = body.structures[LABELLED]!;
     expect(labelled.reactants.map((s) => s.asWritten)).toEqual(['ketone', 'H2(g)']);
     expect(labelled.reactants[0]).toMatchObject({ formula: 'C8H8O', smiles: expect.stringContaining('c1ccccc1') });

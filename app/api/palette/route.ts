@@ -17,7 +17,7 @@ export const GET = withRoute({ access: 'team', permission: 'route.read', query: 
   const recent = await listRecentEquations({ teamId: team.id });
   const library = searchLibraryReactions({ species: query.species });
   const [lookup, labels] = await Promise.all([teamLookup(team.id), recentLabels({ teamId: team.id, equations: recent })]);
-  return { recent, library, structures: structuresByEquation([...recent, ...library.map((r) => r.equation)], lookup, labels) };
+  return { recent, library, structures: structuresByEquation([...recent, ...library.map((r) => r.equation)], lookup, labels), labels: Object.fromEntries(labels) };
 });
 
 export const { POST, PUT, PATCH, DELETE, OPTIONS } = refuseOtherMethods({ GET });

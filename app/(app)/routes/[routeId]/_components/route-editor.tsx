@@ -99,7 +99,7 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
   );
   const handleRemoveLink = useCallback((link: LinkInput) => store.getState().removeLink(link), [store]);
   const handleDrop = useCallback(
-    (payload: StepDragPayload, position: StepInput['position']) => store.getState().addStep({ equation: payload.equation, temperature: payload.temperature, position }),
+    (payload: StepDragPayload, position: StepInput['position']) => store.getState().addStep({ equation: payload.equation, temperature: payload.temperature, ...(payload.species ? { species: payload.species } : {}), position }),
     [store],
   );
 

@@ -8,13 +8,15 @@ import { namesOf, type StepStructures } from '@/components/chemistry/structure-b
 import { StructureStrip } from '@/components/chemistry/structure-strip';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { paletteQuery } from '@/lib/queries/routes';
+import { NewSpeciesLink } from '../../../species/_components/new-species-link';
 
-function PaletteItem({ title, equation, structures, onAdd }: { title: string | null; equation: string; structures?: StepStructures; onAdd: (payload: StepDragPayload) => void }) {
+function PaletteItem({ title, equation, structures, species, onAdd }: { title: string | null; equation: string; structures?: StepStructures; species?: StepDragPayload['species']; onAdd: (payload: StepDragPayload) => void }) {
   const name = title ?? equation;
+  const payload: StepDragPayload = species ? { equation, species } : { equation };
   return (
     <li
       draggable
-      onDragStart={(event) => writeStepPayload(event.dataTransfer, { equation })}
+      onDragStart={(event) => writeStepPayload(event.dataTransfer, payload)}
       className="group flex cursor-grab items-start justify-between gap-2 rounded-md border border-paper-edge bg-white px-2 py-1.5 text-xs hover:border-pine-500 active:cursor-grabbing"
       data-testid="palette-item"
     >
@@ -25,7 +27,7 @@ function PaletteItem({ title, equation, structures, onAdd }: { title: string | n
       </div>
       <button
         type="button"
-        onClick={() => onAdd({ equation })}
+        onClick={() => onAdd(payload)}
         aria-label={`Add step: ${name}${title && equation ? ` (${equation})` : ''}`}
         className="shrink-0 rounded border border-paper-edge px-1.5 py-0.5 text-pine-700 hover:bg-pine-50"
       >
@@ -49,13 +51,16 @@ export function StepPalette({ onAdd }: { onAdd: (payload: StepDragPayload) => vo
         <ul>
           <PaletteItem title="Blank step" equation="" onAdd={onAdd} />
         </ul>
+        <p className="mt-1.5 text-xs">
+          <NewSpeciesLink />
+        </p>
       </section>
       <section>
         <h2 className="mb-1 text-xs font-semibold uppercase tracking-wide text-ink-faint">Recent in your team</h2>
         {palette.data && palette.data.recent.length > 0 ? (
           <ul className="flex flex-col gap-1">
             {palette.data.recent.map((equation) => (
-              <PaletteItem key={equation} title={null} equation={equation} structures={palette.data.structures?.[equation]} onAdd={onAdd} />
+              <PaletteItem key={equation} title={null} equation={equation} structures={palette.data.structures?.[equation]} species={palette.data.labels?.[equation]} onAdd={onAdd} />
             ))}
           </ul>
         ) : (
