@@ -3,6 +3,7 @@ import { QueryTypes } from 'sequelize';
 import { getDb } from '../../../db';
 import { speciesReaderName } from '../../../components/chemistry/step-origin';
 import { hasDrawing, type StepStructures, type StructureBrief } from '../../../components/chemistry/structure-brief';
+import { BoundedMemo } from '../../thermo/bounded-memo';
 import { isThermoError } from '../../thermo/errors';
 import { resolveReaction } from '../../thermo/resolve-reaction';
 import type { SpeciesLookup } from '../../thermo/species-library';
@@ -52,11 +53,23 @@ export function equationStructures(equation: string, lookup: SpeciesLookup, labe
   }
 }
 
+// Per lookup object (a team's lookup is replaced whenever its species change), keyed by equation and labels, so
+// typing in the palette's search never re-reads the same recent steps' SMILES.
+const memoByLookup = new WeakMap<SpeciesLookup, BoundedMemo<string, StepStructures | null>>();
+
 /** Equation → its structures, for each equation with at least one drawing. */
 export function structuresByEquation(equations: readonly string[], lookup: SpeciesLookup, labels: ReadonlyMap<string, Labels> = new Map()): Record<string, StepStructures> {
+  let memo = memoByLookup.get(lookup);
+  if (!memo) memoByLookup.set(lookup, (memo = new BoundedMemo(500)));
   const out: Record<string, StepStructures> = {};
   for (const equation of new Set(equations)) {
-    const s = equationStructures(equation, lookup, labels.get(equation));
+    const stepLabels = labels.get(equation);
+    const key = `${equation}\u0000${stepLabels ? JSON.stringify(stepLabels) : ''}`;
+    let s = memo.get(key);
+    if (s === undefined) {
+      s = equationStructures(equation, lookup, stepLabels);
+      memo.set(key, s);
+    }
     if (s) out[equation] = s;
   }
   return out;
