@@ -4,6 +4,7 @@ import { useQuery } from '@tanstack/react-query';
 import Link from 'next/link';
 import { formulaPlain, isStructureKey } from '@/components/chemistry/formula-text';
 import { ChemText } from '@/components/chemistry/chem-text';
+import { formulaUnicode } from '@/components/chemistry/formula-unicode';
 import { formatKelvin } from '@/lib/format/numbers';
 import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page-header';
@@ -47,7 +48,7 @@ export function SpeciesDetail({ detail, canEdit }: { detail: SpeciesDetailDto; c
   const [lo, hi] = detail.series.range_K;
   return (
     <div className="flex flex-col gap-4">
-      <PageHeader title={isStructureKey(detail.key) ? label : `${detail.key} · ${name}`} lead={detail.inUse === 'team' ? 'Your team’s values are used in its evaluations.' : 'Built-in values from the library.'} />
+      <PageHeader title={isStructureKey(detail.key) ? label : `${formulaUnicode(detail.key)} · ${name}`} lead={detail.inUse === 'team' ? 'Your team’s values are used in its evaluations.' : 'Built-in values from the library.'} />
       <SpeciesIdentity detail={detail} />
       <div className="flex flex-wrap items-center gap-3">
         <Link href="/species" className="text-sm text-pine-700 underline-offset-2 hover:underline">All species</Link>
