@@ -66,6 +66,8 @@ export function SpeciesCombobox({
   const items = search.enabled && search.data ? search.data.items : [];
   const showPopup = isOpen && text.trim().length > 0;
   const hasList = showPopup && items.length > 0;
+  // The list of the previous text stays while the next answer comes, dimmed and not pickable by Enter.
+  const isStale = search.isSettling || search.isPlaceholderData;
 
   useEffect(() => {
     if (active >= 0) document.getElementById(`${id}-option-${active}`)?.scrollIntoView({ block: 'nearest' });
@@ -88,7 +90,7 @@ export function SpeciesCombobox({
     } else if (e.key === 'Enter') {
       e.preventDefault();
       const hit = items[active >= 0 ? active : 0];
-      if (hasList && hit) pick(hit);
+      if (hasList && hit && !isStale) pick(hit);
     } else if (e.key === 'Escape') {
       if (isOpen && text) {
         e.preventDefault();
@@ -102,7 +104,7 @@ export function SpeciesCombobox({
     }
   }
 
-  const waiting = search.enabled && (search.isPending || search.isSettling);
+  const waiting = search.enabled && (search.isPending || isStale);
   const status = !showPopup
     ? ''
     : !search.enabled
@@ -153,7 +155,14 @@ export function SpeciesCombobox({
             {status}
           </p>
         ) : null}
-        <ul id={listId} role="listbox" aria-label={`Species matching ${search.settled}`} hidden={!hasList} className="divide-y divide-paper-edge">
+        <ul
+          id={listId}
+          role="listbox"
+          aria-label={`Species matching ${search.settled}`}
+          aria-busy={isStale || undefined}
+          hidden={!hasList}
+          className={`divide-y divide-paper-edge ${isStale ? 'opacity-60' : ''}`}
+        >
           {items.map((hit, i) => (
             <li
               key={`${hit.origin}|${hit.inchikey ?? hit.name}|${hit.phases.map((p) => p.key).join(',')}`}
