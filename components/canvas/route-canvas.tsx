@@ -1,13 +1,17 @@
 'use client';
 
 import 'reactflow/dist/style.css';
-import { useCallback, useRef, useState, type DragEvent } from 'react';
+import './board-focus.css';
+import { useCallback, useMemo, useRef, useState, type DragEvent } from 'react';
 import ReactFlow, { Background, Controls, type Connection, type EdgeChange, type NodeChange, type ReactFlowInstance } from 'reactflow';
+import { stepLabels as buildStepLabels } from '@/lib/route-editor/step-label';
 import type { LinkInput, StepInput } from '@/lib/schemas/route';
 import type { RouteStepResult } from '@/lib/thermo/route';
 import type { EnergyUnit, TemperatureUnit } from '../ladder/energy-format';
+import { placeNewStep } from './place-step';
 import { hasStepPayload, readStepPayload, type StepDragPayload } from './step-drop';
 import { STEP_NODE_TYPES, speciesOfHandle } from './step-node';
+import { useBoardTabOrder } from './use-board-tab-order';
 import { useLinkEdges, useStepNodes, type NodeSize } from './use-step-nodes';
 import type { ReviewMarksByStep } from '../review/review-marks';
 
@@ -26,7 +30,6 @@ export function RouteCanvas({
   links,
   results,
   selectedStepId,
-  stepLabels,
   energyUnit,
   temperatureUnit,
   isReadOnly,
@@ -47,7 +50,6 @@ export function RouteCanvas({
   links: LinkInput[];
   results: Map<string, RouteStepResult>;
   selectedStepId: string | null;
-  stepLabels: Record<string, string>;
   energyUnit: EnergyUnit;
   temperatureUnit: TemperatureUnit;
   isReadOnly: boolean;
@@ -66,8 +68,41 @@ export function RouteCanvas({
   // Fit once on load; an empty board keeps a 1:1 view, so the first drop does not jump the viewport.
   const [shouldFitOnLoad] = useState(() => steps.length > 0);
 
-  const nodes = useStepNodes({ steps, results, stale, selectedStepId, sizes, stepLabels, energyUnit, temperatureUnit, reviewMarks });
-  const edges = useLinkEdges(links, steps, selectedEdgeId);
+  const wrapper = useRef<HTMLDivElement>(null);
+
+  // Numbers, names and order come from the draft (lib/route-editor/step-label.ts), never from an evaluation, so they
+  // hold while one loads; strings as memo keys, so a drag frame does not renumber.
+  const equationsKey = steps.map((s) => `${s.id}\u0000${s.equation}`).join('\u0001');
+  const linksKey = links.map((l) => `${l.from}\u0000${l.to}`).join('\u0001');
+  const labels = useMemo(() => {
+    const ids = equationsKey.split('\u0001').filter(Boolean).map((entry) => entry.split('\u0000') as [string, string]);
+    const pairs = linksKey.split('\u0001').filter(Boolean).map((entry) => entry.split('\u0000') as [string, string]);
+    return buildStepLabels(ids.map(([id, equation]) => ({ id, equation })), pairs.map(([from, to]) => ({ from, to })));
+  }, [equationsKey, linksKey]);
+  const { order, stepLabels, stepTitles } = useMemo(
+    () => ({
+      order: [...labels.keys()],
+      stepLabels: Object.fromEntries([...labels].map(([id, l]) => [id, l.short])),
+      stepTitles: Object.fromEntries([...labels].map(([id, l]) => [id, l.full])),
+    }),
+    [labels],
+  );
+
+  const nodes = useStepNodes({ steps, results, stale, selectedStepId, sizes, stepLabels, stepTitles, order, energyUnit, temperatureUnit, reviewMarks });
+  const edges = useLinkEdges(links, steps, selectedEdgeId, stepTitles, order);
+  const edgeIds = useMemo(() => edges.map((e) => e.id), [edges]);
+
+  // A step reached by Tab beyond the visible pane is brought into view at the current zoom.
+  const handleNodeFocus = useCallback((id: string) => {
+    const flow = instance.current;
+    const box = wrapper.current?.getBoundingClientRect();
+    const el = wrapper.current?.querySelector(`.react-flow__node[data-id="${CSS.escape(id)}"]`)?.getBoundingClientRect();
+    const node = flow?.getNode(id);
+    if (!flow || !box || !el || !node) return;
+    if (el.left >= box.left && el.right <= box.right && el.top >= box.top && el.bottom <= box.bottom) return;
+    flow.setCenter(node.position.x + (node.width ?? 256) / 2, node.position.y + (node.height ?? 200) / 2, { zoom: flow.getZoom(), duration: 150 });
+  }, []);
+  useBoardTabOrder(wrapper, order, edgeIds, handleNodeFocus);
 
   const handleNodesChange = useCallback(
     (changes: NodeChange[]) => {
@@ -118,12 +153,13 @@ export function RouteCanvas({
     if (isReadOnly || !payload || !instance.current) return;
     event.preventDefault();
     const point = instance.current.screenToFlowPosition({ x: event.clientX, y: event.clientY });
-    // The drop point is the node's top-left corner shifted so the pointer lands near its header.
-    onDropStep(payload, { x: Math.round(point.x - 40), y: Math.round(point.y - 14) });
+    // The drop point is the node's top-left corner shifted so the pointer lands near its header; a drop on top of
+    // another step slides to the nearest free spot.
+    onDropStep(payload, placeNewStep(steps, (id) => sizes[id], { x: point.x - 40, y: point.y - 14 }));
   };
 
   return (
-    <div className="relative h-full w-full" onDragOver={handleDragOver} onDrop={handleDrop} data-testid="route-canvas">
+    <div ref={wrapper} className="stepwell-board relative h-full w-full" onDragOver={handleDragOver} onDrop={handleDrop} data-testid="route-canvas">
       <ReactFlow
         nodes={nodes}
         edges={edges}
@@ -145,6 +181,8 @@ export function RouteCanvas({
         nodesConnectable={!isReadOnly}
         edgesUpdatable={false}
         elementsSelectable
+        nodesFocusable
+        edgesFocusable
         selectionOnDrag={false}
         multiSelectionKeyCode={null}
         deleteKeyCode={isReadOnly ? null : ['Delete', 'Backspace']}

@@ -16,6 +16,22 @@ import { formulaUnicode } from '@/components/chemistry/formula-unicode';
 
 export type NodeSize = { width: number; height: number };
 
+const CLASS_WORD = { downhill: 'downhill', marginal: 'marginal', uphill: 'uphill', error: 'not evaluated' } as const;
+
+/** What a screen reader says for a node: "Step 2 (amide formation): ΔG −35.2 kJ/mol, downhill", then any caveats. */
+export function nodeSpokenName(title: string, data: StepNodeData, hasResult: boolean): string {
+  const parts: string[] = [];
+  if (!data.equation) parts.push('blank step, type an equation');
+  else if (data.isStale) parts.push('changed, re-evaluating');
+  else if (data.problemText) parts.push(`not evaluated, ${data.problemLabel || 'see the step'}: ${data.problemText}`);
+  else if (data.cls && data.cls !== 'error') parts.push(`${data.deltaGName} ${data.deltaGText}, ${CLASS_WORD[data.cls]}${data.signUncertain ? ', sign uncertain' : ''}`);
+  else parts.push(hasResult ? 'not evaluated' : 'evaluating');
+  if (data.temperatureText) parts.push(`at ${data.temperatureText}`);
+  if (data.estimatedText) parts.push(data.estimatedText);
+  if (data.reviewText) parts.push(data.reviewText);
+  return `${title}: ${parts.join('; ')}`;
+}
+
 // A stale step (edited since its result) shows no class or ΔG: the old figures must not read as current.
 function nodeData(step: StepInput, label: string, evaluated: RouteStepResult | undefined, isStale: boolean, marks: StepReviewMarks | undefined, energyUnit: EnergyUnit, temperatureUnit: TemperatureUnit): StepNodeData {
   const { reactants, products } = equationSpecies(step.equation);
@@ -86,12 +102,18 @@ export function useStepNodes({
   temperatureUnit,
   reviewMarks,
   stale,
+  stepTitles,
+  order,
 }: {
   reviewMarks?: ReviewMarksByStep;
   /** steps edited since their result was computed */
   stale?: ReadonlySet<string>;
   steps: StepInput[];
   stepLabels: Record<string, string>;
+  /** "Step 2 (methanol from carbon monoxide)", for screen readers */
+  stepTitles?: Record<string, string>;
+  /** step ids in route order: the nodes follow it in the page, so Tab and screen readers meet them in that order */
+  order?: readonly string[];
   results: Map<string, RouteStepResult>;
   selectedStepId: string | null;
   sizes: Record<string, NodeSize>;
@@ -102,11 +124,12 @@ export function useStepNodes({
   return useMemo(() => {
     const previous = cache.current.energyUnit === energyUnit && cache.current.temperatureUnit === temperatureUnit ? cache.current.byId : new Map<string, CachedNode>();
     const byId = new Map<string, CachedNode>();
+    const rank = new Map((order ?? []).map((id, i) => [id, i]));
     const nodes = steps.map((step, index) => {
       const result = results.get(step.id);
       const isStale = stale?.has(step.id) ?? false;
       const marks = reviewMarks?.[step.id];
-      const label = stepLabels[step.id] ?? `Step ${index + 1}`;
+      const label = stepLabels[step.id] ?? `Step ${(rank.get(step.id) ?? index) + 1}`;
       const hit = previous.get(step.id);
       let data: StepNodeData;
       if (hit && hit.result === result && hit.isStale === isStale && hit.marks === marks && hit.label === label && (hit.step === step || hit.step.equation === step.equation && hit.step.temperature === step.temperature)) {
@@ -124,13 +147,13 @@ export function useStepNodes({
         data,
         selected: step.id === selectedStepId,
         deletable: false,
-        ariaLabel: `${data.label}: ${step.equation || 'blank'}${data.isStale ? '; changed, re-evaluating' : ''}${data.problemText ? `; not evaluated: ${data.problemText}` : ''}${data.estimatedText ? `; ${data.estimatedText}` : ''}${data.reviewText ? ` (${data.reviewText})` : ''}`,
+        ariaLabel: nodeSpokenName(stepTitles?.[step.id] ?? data.label, data, result !== undefined),
         ...(size ? { width: size.width, height: size.height } : {}),
       } satisfies Node<StepNodeData>;
     });
     cache.current = { energyUnit, temperatureUnit, byId };
-    return nodes;
-  }, [steps, results, stale, reviewMarks, selectedStepId, sizes, stepLabels, energyUnit, temperatureUnit]);
+    return order ? nodes.sort((a, b) => (rank.get(a.id) ?? nodes.length) - (rank.get(b.id) ?? nodes.length)) : nodes;
+  }, [steps, results, stale, reviewMarks, selectedStepId, sizes, stepLabels, stepTitles, order, energyUnit, temperatureUnit]);
 }
 
 export const linkEdgeId = (link: LinkInput) => `${link.from}>${link.to}:${link.species}`;
@@ -140,7 +163,8 @@ const ARROW_END = { type: MarkerType.ArrowClosed, width: 16, height: 16 };
 const LABEL_STYLE = { fontSize: 10 };
 const DANGLING_STYLE = { strokeDasharray: '4 3' };
 
-export function useLinkEdges(links: LinkInput[], steps: StepInput[], selectedEdgeId: string | null): Edge[] {
+/** Edges in route order of their steps (so Tab meets them that way), each named in words for screen readers. */
+export function useLinkEdges(links: LinkInput[], steps: StepInput[], selectedEdgeId: string | null, stepTitles?: Record<string, string>, order?: readonly string[]): Edge[] {
   // Edges depend on equations, not positions: a drag must not rebuild every edge.
   const equationsKey = steps.map((s) => `${s.id}\u0000${s.equation}`).join('\u0001');
   return useMemo(() => {
@@ -153,7 +177,10 @@ export function useLinkEdges(links: LinkInput[], steps: StepInput[], selectedEdg
           return [id, equationSpecies(equation)] as const;
         }),
     );
-    return links.map((link) => {
+    const rank = new Map((order ?? []).map((id, i) => [id, i]));
+    const at = (id: string) => rank.get(id) ?? rank.size;
+    const sorted = order ? [...links].sort((a, b) => at(a.from) - at(b.from) || at(a.to) - at(b.to)) : links;
+    return sorted.map((link) => {
       const id = linkEdgeId(link);
       // A link whose species left the equation still shows, from the node's first handle; the route warnings name it.
       const hasSource = speciesOf.get(link.from)?.products.includes(link.species) ?? false;
@@ -170,7 +197,8 @@ export function useLinkEdges(links: LinkInput[], steps: StepInput[], selectedEdg
         labelStyle: LABEL_STYLE,
         style: hasSource && hasTarget ? undefined : DANGLING_STYLE,
         data: link,
+        ariaLabel: `Link: ${link.species} from ${stepTitles?.[link.from] ?? 'a removed step'} to ${stepTitles?.[link.to] ?? 'a removed step'}${hasSource && hasTarget ? '' : ' (the species is no longer in both equations)'}`,
       } satisfies Edge<LinkInput>;
     });
-  }, [links, equationsKey, selectedEdgeId]);
+  }, [links, equationsKey, selectedEdgeId, stepTitles, order]);
 }

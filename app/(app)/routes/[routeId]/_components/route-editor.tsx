@@ -10,7 +10,9 @@ import { temperatureQuantity } from '@/components/ladder/energy-format';
 import { FreeEnergyLadder } from '@/components/ladder/free-energy-ladder';
 import { RemediesPanel } from '@/components/ladder/remedies-panel';
 import { Button } from '@/components/ui/button';
-import { sameSpecies } from '@/lib/route-editor/equation-species';
+import { placeNewStep } from '@/components/canvas/place-step';
+import { NEW_NODE_SIZE } from '@/lib/route-editor/free-placement';
+import { linkRefusal } from '@/lib/route-editor/link-rules';
 import { stepLabels as buildStepLabels } from '@/lib/route-editor/step-label';
 import type { LinkInput, StepInput } from '@/lib/schemas/route';
 import { useRouteEditorStore, useRouteEditorStoreApi } from '@/stores/route-editor-store';
@@ -33,7 +35,7 @@ import type { Role } from '@/lib/auth/roles';
 import { useIsPhone } from '@/lib/hooks/use-media-query';
 
 const FIT_OPTIONS = { padding: 0.2, maxZoom: 1.25, duration: 200 };
-export const LINK_REFUSAL = 'Link a product of one step to the same species consumed by the next.';
+export { LINK_REFUSAL } from '@/lib/route-editor/link-rules';
 
 export interface ReviewContext {
   teamId: number;
@@ -88,11 +90,12 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
     (id: string, position: StepInput['position'] | undefined, dragging: boolean) => store.getState().moveStep(id, position, { dragging }),
     [store],
   );
+  // Drag-linking and the step panel's "Link product to…" share these rules and words (lib/route-editor/link-rules.ts).
   const handleLink = useCallback(
-    ({ from, to, fromSpecies, toSpecies }: LinkAttempt) => {
-      if (from === to) return 'A step cannot feed itself.';
-      if (!sameSpecies(fromSpecies, toSpecies)) return `${LINK_REFUSAL} (${fromSpecies} is not ${toSpecies}.)`;
-      store.getState().addLink({ from, to, species: fromSpecies });
+    (attempt: LinkAttempt) => {
+      const refusal = linkRefusal(store.getState().doc, attempt);
+      if (refusal) return refusal;
+      store.getState().addLink({ from: attempt.from, to: attempt.to, species: attempt.fromSpecies });
       return null;
     },
     [store],
@@ -103,13 +106,21 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
     [store],
   );
 
-  // The keyboard "Add": the new step lands in the middle of what the canvas shows, a little offset each time.
+  // Palette clicks and the keyboard "Add": the new step goes to the right of the last one added (a route reads left
+  // to right), or near the top left of what the canvas shows, in free space; the view follows if it lands outside.
   const handleAdd = (payload: StepDragPayload) => {
+    const view = flow.current;
     const box = canvasBox.current?.getBoundingClientRect();
-    const count = store.getState().doc.steps.length;
-    const centre = box && flow.current ? flow.current.screenToFlowPosition({ x: box.left + box.width / 2, y: box.top + box.height / 2 }) : { x: 0, y: 0 };
-    const offset = (count % 6) * 28;
-    handleDrop(payload, { x: Math.round(centre.x - 128 + offset), y: Math.round(centre.y - 60 + offset) });
+    const steps = store.getState().doc.steps;
+    const last = steps.at(-1);
+    const topLeft = box && view ? view.screenToFlowPosition({ x: box.left + 40, y: box.top + 40 }) : { x: 0, y: 0 };
+    const preferred = last ? { x: last.position.x + (view?.getNode(last.id)?.width ?? NEW_NODE_SIZE.width) + 48, y: last.position.y } : topLeft;
+    const at = placeNewStep(steps, (id) => view?.getNode(id) ?? undefined, preferred);
+    handleDrop(payload, at);
+    const far = box && view ? view.screenToFlowPosition({ x: box.right, y: box.bottom }) : null;
+    if (far && (at.x < topLeft.x - 40 || at.y < topLeft.y - 40 || at.x + NEW_NODE_SIZE.width > far.x || at.y + NEW_NODE_SIZE.height > far.y)) {
+      requestAnimationFrame(() => requestAnimationFrame(fitView));
+    }
   };
 
   const selectedResult = selectedStepId ? results.get(selectedStepId) : undefined;
@@ -161,7 +172,6 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
           <BoardCanvas
             results={results}
             stale={stale}
-            stepLabels={stepLabels}
             energyUnit={units.energyUnit}
             temperatureUnit={units.temperatureUnit}
             isReadOnly={!canEdit}
