@@ -196,3 +196,18 @@ describe('who may read it', () => {
     expect((res.body as ActivityPageDto).items.map((i) => i.kind)).toEqual(['revision', 'revision']);
   });
 });
+
+describe('how it names steps', () => {
+  it('a save summary stored with step ids reads with labels from that revision\'s document', async () => {
+    const { getDb } = await import('@/db');
+    const other = await makeOwnedRoute(team, team.designerId);
+    const { RouteRevision } = getDb().models;
+    const latest = await RouteRevision.findOne({ where: { routeId: other.id }, order: [['version', 'DESC']] });
+    await latest!.update({ summary: 'T of s2 298.15 → 500 K, moved s1' });
+    const res = await callRoute(activity, { userId: team.reviewerId, params: { routeId: String(other.id) } });
+    const save = (res.body as ActivityPageDto).items.find((i) => i.kind === 'revision' && i.version === latest!.version)!;
+    const expected = 'T of Step 2 (methanol from carbon monoxide) 298.15 → 500 K, moved Step 1 (steam reforming of methane)';
+    expect(save.text).toBe(expected);
+    expect((save as { summary: string }).summary).toBe(expected);
+  });
+});
