@@ -4,6 +4,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { balanceQuery } from '@/lib/queries/routes';
 import type { StepInput } from '@/lib/schemas/route';
+import { NewSpeciesForError } from './step-species';
 
 // The live balance check under the equation field; "Balance" swaps in the smallest-integer form.
 export function BalanceCheck({ equation, species, canEdit, onApply }: { equation: string; species?: StepInput['species']; canEdit: boolean; onApply: (balanced: string) => void }) {
@@ -19,16 +20,22 @@ export function BalanceCheck({ equation, species, canEdit, onApply }: { equation
       ) : check.isError ? (
         <p className="text-uphill">{check.error.message}</p>
       ) : answer && 'error' in answer ? (
-        <p className="text-uphill">
-          <span aria-hidden="true">✗ </span>
-          {answer.error.message}
-        </p>
+        <>
+          <p className="text-uphill">
+            <span aria-hidden="true">✗ </span>
+            {answer.error.message}
+          </p>
+          {canEdit ? <NewSpeciesForError error={answer.error} species={species} /> : null}
+        </>
       ) : answer && answer.unknownSpecies?.length ? (
         // Balanced or not, a species the library lacks stops the evaluation: never a green tick for it.
-        <p className="text-uphill" data-testid="balance-unknown-species">
-          <span aria-hidden="true">✗ </span>
-          {answer.message}
-        </p>
+        <>
+          <p className="text-uphill" data-testid="balance-unknown-species">
+            <span aria-hidden="true">✗ </span>
+            {answer.message}
+          </p>
+          {canEdit ? <NewSpeciesForError error={{ code: 'UNKNOWN_SPECIES', message: `Not in the species library: ${answer.unknownSpecies.join('; ')}` }} species={species} /> : null}
+        </>
       ) : answer?.isBalanced ? (
         <p className="text-downhill">
           <span aria-hidden="true">✓ </span>

@@ -124,7 +124,7 @@ export function SidePanel({
       <fieldset disabled={!canEdit}>
         <FitPicker value={step.fitId ?? null} onChange={(fitId) => handleStepChange({ fitId }, 'fitId')} />
       </fieldset>
-      <StepResult result={selectedResult} isStale={isStale} energyUnit={units.energyUnit} temperatureUnit={units.temperatureUnit} />
+      <StepResult result={selectedResult} isStale={isStale} energyUnit={units.energyUnit} temperatureUnit={units.temperatureUnit} stepSpecies={step.species} />
       <StepLinks step={step} steps={others} links={links} stepLabels={stepLabels} canEdit={canEdit} onAddLink={addLink} onRemoveLink={removeLink} />
     </aside>
   );

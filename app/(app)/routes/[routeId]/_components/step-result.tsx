@@ -2,8 +2,9 @@ import { ClassBadge } from '@/components/ladder/class-badge';
 import { formatEnergy, formatNumber, formatTemperature, type EnergyUnit, type TemperatureUnit } from '@/components/ladder/energy-format';
 import { CAUSE_LABEL, causeOf, messageAtField } from '@/lib/route-editor/step-errors';
 import type { EvaluateResponse } from '@/lib/thermo';
+import type { StepInput } from '@/lib/schemas/route';
 import type { RouteStepResult } from '@/lib/thermo/route';
-import { StepSpecies } from './step-species';
+import { NewSpeciesForError, StepSpecies } from './step-species';
 import { estimateSentence, SIGN_UNCERTAIN_SENTENCE, speciesLabel, withSpeciesNames } from './step-species-notes';
 
 /** Where the step's ΔH° and ΔS° came from: a saved fit, the team's own species, the built-in library, estimates. */
@@ -32,9 +33,12 @@ export function StepResult({
   isStale = false,
   energyUnit,
   temperatureUnit,
+  stepSpecies,
 }: {
   result: RouteStepResult | undefined;
   isStale?: boolean;
+  /** the step's labels, so a "not in the library" link can carry the structure typed */
+  stepSpecies?: StepInput['species'];
   energyUnit: EnergyUnit;
   temperatureUnit: TemperatureUnit;
 }) {
@@ -59,6 +63,7 @@ export function StepResult({
           <span className="font-semibold">{CAUSE_LABEL[causeOf(result.error)]}:</span> {messageAtField(result.error)}
         </p>
       ) : null}
+      <NewSpeciesForError error={result.error} species={stepSpecies} />
       {engine ? (
         <dl className="flex flex-col gap-0.5">
           <Fact

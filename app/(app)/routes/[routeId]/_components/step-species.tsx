@@ -5,7 +5,9 @@ import { OriginMark } from '@/components/chemistry/origin-mark';
 import { StructureImage } from '@/components/chemistry/structure-image';
 import { energyFromKJ, energyUnitLabel, type EnergyUnit } from '@/components/ladder/energy-format';
 import type { SpeciesProvenance } from '@/lib/thermo';
-import { speciesLabel } from './step-species-notes';
+import type { SpeciesDefinition } from '@/lib/thermo/structure/structure-lookup-type';
+import { NewSpeciesLink } from '../../../species/_components/new-species-link';
+import { missingSpeciesSeed, speciesLabel } from './step-species-notes';
 
 const DRAWING = { width: 48, height: 36 };
 
@@ -48,5 +50,18 @@ export function StepSpecies({ species, energyUnit }: { species: readonly Species
         ))}
       </ul>
     </section>
+  );
+}
+
+/** Under a "not in the library" (or "no estimate") error: the way to make the species, carrying what was typed. */
+export function NewSpeciesForError({ error, species }: { error: { code: string; message: string; field?: string | null } | null | undefined; species?: Readonly<Record<string, SpeciesDefinition>> }) {
+  const seed = missingSpeciesSeed(error, species);
+  if (!seed) return null;
+  return (
+    <p className="text-xs">
+      <NewSpeciesLink smiles={seed.smiles} name={seed.name} phase={seed.phase}>
+        {seed.noEstimate ? 'Enter measured or published values for it' : 'Not in the library? New species from a structure'}
+      </NewSpeciesLink>
+    </p>
   );
 }
