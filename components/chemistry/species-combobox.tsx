@@ -4,7 +4,8 @@
 // server-drawn image named by name and formula), typeset formula, the phases with data and where the data comes
 // from. ARIA combobox with a listbox popup: arrows move, Enter picks, Escape closes then clears.
 import { useEffect, useId, useState, type KeyboardEvent } from 'react';
-import { useSpeciesSearch, type SpeciesSearchHit } from '@/lib/queries/species-search';
+import { useQueryClient } from '@tanstack/react-query';
+import { speciesSearchQuery, useSpeciesSearch, type SpeciesSearchHit } from '@/lib/queries/species-search';
 import { FormulaText } from './formula-text';
 import { OriginMark } from './origin-mark';
 import type { OriginFacts } from './origin-text';
@@ -63,6 +64,7 @@ export function SpeciesCombobox({
   const [isOpen, setOpen] = useState(false);
   const [active, setActive] = useState(-1);
   const search = useSpeciesSearch(text);
+  const client = useQueryClient();
   const items = search.enabled && search.data ? search.data.items : [];
   const showPopup = isOpen && text.trim().length > 0;
   const hasList = showPopup && items.length > 0;
@@ -141,7 +143,11 @@ export function SpeciesCombobox({
           setOpen(true);
           setActive(-1);
         }}
-        onFocus={() => setOpen(true)}
+        onFocus={() => {
+          setOpen(true);
+          // The server builds its search index on the first search of its process (a few seconds): start it now.
+          void client.prefetchQuery(speciesSearchQuery('water', 1));
+        }}
         onBlur={() => setOpen(false)}
         onKeyDown={handleKeyDown}
         className="w-full rounded-md border border-paper-edge bg-white px-2 py-1 text-sm outline-none focus:border-pine-500 focus:ring-2 focus:ring-pine-100 disabled:bg-paper"

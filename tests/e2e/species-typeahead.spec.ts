@@ -44,7 +44,8 @@ test('type a name, pick a structure, see it on the node', async ({ page }) => {
   const field = page.getByRole('combobox', { name: 'Add species' });
   await field.fill('ethyl acetate');
   const first = page.getByRole('listbox', { name: /Species matching/ }).getByRole('option').first();
-  await expect(first).toHaveAccessibleName(/^ethyl acetate, C4H8O2/);
+  // The first search of a server process builds its index (seconds on a busy machine).
+  await expect(first).toHaveAccessibleName(/^ethyl acetate, C4H8O2/, { timeout: 30_000 });
   // An option's children are presentational to assistive technology, so the drawing is found by its alt text.
   await expect(first.locator('img[alt="ethyl acetate (C4H8O2)"]')).toBeVisible();
   await expect(first).toContainText('Library');
@@ -74,7 +75,7 @@ test('a name that stands for two compounds offers both at the field', async ({ p
   await equation.fill('methyl crotonate(l) + H2(g) -> methyl butyrate(l)');
 
   const choices = page.getByRole('region', { name: 'Compounds called methyl crotonate' });
-  await expect(choices).toBeVisible();
+  await expect(choices).toBeVisible({ timeout: 30_000 });
   const buttons = choices.getByRole('button');
   await expect(buttons).toHaveCount(2);
   await expect(buttons.first().getByRole('img', { name: /methyl crotonate \(C5H8O2\)/ })).toBeVisible();
@@ -88,6 +89,6 @@ test('the search says when nothing matches', async ({ page }) => {
   await newRouteWithBlankStep(page, 'E2E search without matches');
   const field = page.getByRole('combobox', { name: 'Add species' });
   await field.fill('qqzzqqzzxx');
-  await expect(page.getByTestId('species-search-popup')).toContainText('Nothing matches');
+  await expect(page.getByTestId('species-search-popup')).toContainText('Nothing matches', { timeout: 30_000 });
   await expect(page.getByRole('status').filter({ hasText: 'Nothing matches' })).toHaveCount(1);
 });
