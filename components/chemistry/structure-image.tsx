@@ -23,8 +23,11 @@ export function StructureImage({
   width = 96,
   height = 72,
   className = '',
+  loading = 'lazy',
 }: {
   smiles: string;
+  /** "eager" where the page is printed: a lazy image below the fold may not be fetched before the print dialog */
+  loading?: 'lazy' | 'eager';
   name?: string | null;
   formula?: string | null;
   width?: number;
@@ -42,6 +45,6 @@ export function StructureImage({
     );
   }
   return (
-    <img src={structureSvgPath(smiles, width, height)} alt={alt} width={width} height={height} loading="lazy" decoding="async" onError={() => setFailed(true)} className={`shrink-0 ${className}`} />
+    <img src={structureSvgPath(smiles, width, height)} alt={alt} width={width} height={height} loading={loading} decoding="async" onError={() => setFailed(true)} className={`shrink-0 ${className}`} />
   );
 }

@@ -25,8 +25,8 @@ export function structuresSentence(s: StepStructures): string {
   return parts.filter(Boolean).join('; ');
 }
 
-function Small({ s }: { s: StructureBrief }) {
-  if (isDrawable(s)) return <StructureImage smiles={s.smiles} name={s.name} formula={s.formula} {...SMALL_DRAWING} className="rounded-sm bg-white" />;
+function Small({ s, loading }: { s: StructureBrief; loading: 'lazy' | 'eager' }) {
+  if (isDrawable(s)) return <StructureImage smiles={s.smiles} name={s.name} formula={s.formula} {...SMALL_DRAWING} loading={loading} className="rounded-sm bg-white" />;
   // Small species as typeset formulas; the title and alt-like label give the name.
   return (
     <span role="img" aria-label={s.formula && s.formula !== s.name ? `${s.name} (${s.formula})` : s.name} title={s.name} className="inline-flex h-[30px] items-center px-0.5 text-[11px] text-ink-soft">
@@ -35,7 +35,7 @@ function Small({ s }: { s: StructureBrief }) {
   );
 }
 
-function Side({ items, max }: { items: readonly StructureBrief[]; max: number }) {
+function Side({ items, max, loading }: { items: readonly StructureBrief[]; max: number; loading: 'lazy' | 'eager' }) {
   const shown = items.slice(0, max);
   const hidden = items.slice(max);
   return (
@@ -43,7 +43,7 @@ function Side({ items, max }: { items: readonly StructureBrief[]; max: number })
       {shown.map((s, i) => (
         <span key={s.key} className="flex items-center gap-0.5">
           {i > 0 ? <span aria-hidden="true" className="text-[10px] text-ink-faint">+</span> : null}
-          <Small s={s} />
+          <Small s={s} loading={loading} />
         </span>
       ))}
       {hidden.length ? (
@@ -73,7 +73,23 @@ function Large({ s }: { s: StructureBrief }) {
   );
 }
 
-export function StructureStrip({ structures, label, max = 3, className = '' }: { structures: StepStructures; /** what the drawings belong to, e.g. the step's label */ label: string; max?: number; className?: string }) {
+export function StructureStrip({
+  structures,
+  label,
+  max = 3,
+  className = '',
+  loading = 'lazy',
+  focusable = true,
+}: {
+  structures: StepStructures;
+  /** what the drawings belong to, e.g. the step's label */
+  label: string;
+  max?: number;
+  className?: string;
+  loading?: 'lazy' | 'eager';
+  /** false where it sits among many (the palette): no tab stop of its own, its words stay in the name */
+  focusable?: boolean;
+}) {
   const [anchor, setAnchor] = useState<DOMRect | null>(null);
   const ref = useRef<HTMLDivElement | null>(null);
   const popupId = useId();
@@ -90,7 +106,7 @@ export function StructureStrip({ structures, label, max = 3, className = '' }: {
   return (
     <div
       ref={ref}
-      tabIndex={0}
+      tabIndex={focusable ? 0 : -1}
       role="group"
       aria-label={`Structures of ${label}: ${sentence}. Focus shows them larger.`}
       aria-describedby={anchor ? popupId : undefined}
@@ -102,13 +118,13 @@ export function StructureStrip({ structures, label, max = 3, className = '' }: {
       className={`flex min-h-[30px] flex-wrap items-center gap-1 rounded outline-none focus-visible:ring-2 focus-visible:ring-pine-500 ${className}`}
       data-testid="structure-strip"
     >
-      <Side items={structures.reactants} max={max} />
+      <Side items={structures.reactants} max={max} loading={loading} />
       {structures.products.length ? (
         <span aria-hidden="true" className="px-0.5 text-ink-faint">
           ⟶
         </span>
       ) : null}
-      <Side items={structures.products} max={max} />
+      <Side items={structures.products} max={max} loading={loading} />
       {anchor && typeof document !== 'undefined'
         ? createPortal(
             <div

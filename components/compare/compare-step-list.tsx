@@ -19,7 +19,7 @@ function originFacts(origin: ValueOrigin, summary: StepOriginSummary): OriginFac
   return { origin, method: summary.methods.join('; ') };
 }
 
-function StepItem({ step, index, isShared, unit }: { step: LadderStep; index: number; isShared: boolean; unit: EnergyUnit }) {
+function StepItem({ step, index, isShared, unit, isPrint }: { step: LadderStep; index: number; isShared: boolean; unit: EnergyUnit; isPrint: boolean }) {
   const structures = structuresFromSpecies(step.species);
   const summary = stepOrigin(step.species);
   const lines = stepOriginLines(summary, step.sigma_kJ === null ? null : sigmaText(step.sigma_kJ, unit));
@@ -30,7 +30,7 @@ function StepItem({ step, index, isShared, unit }: { step: LadderStep; index: nu
         <EquationText equation={step.equation || 'blank step'} names={namesOf(structures)} />
         {isShared ? <span> (shared)</span> : null}
       </p>
-      {hasDrawing(structures) ? <StructureStrip structures={structures} label={label} /> : null}
+      {hasDrawing(structures) ? <StructureStrip structures={structures} label={label} loading={isPrint ? 'eager' : 'lazy'} /> : null}
       {lines.length ? (
         <ul className="flex flex-col gap-0.5 text-[10px] leading-tight text-ink-soft" aria-label={`Where the values of ${label} came from`}>
           {lines.map((line) => (
@@ -51,7 +51,7 @@ function StepItem({ step, index, isShared, unit }: { step: LadderStep; index: nu
   );
 }
 
-export function CompareStepList({ ladder, sharedStepIds, unit }: { ladder: RouteLadder; sharedStepIds: ReadonlySet<string>; unit: EnergyUnit }) {
+export function CompareStepList({ ladder, sharedStepIds, unit, isPrint = false }: { ladder: RouteLadder; sharedStepIds: ReadonlySet<string>; unit: EnergyUnit; /** the printable report: drawings load at once */ isPrint?: boolean }) {
   const byId = new Map(ladder.steps.map((s) => [s.id, s]));
   return (
     <>
@@ -63,7 +63,7 @@ export function CompareStepList({ ladder, sharedStepIds, unit }: { ladder: Route
       <ol className="flex list-decimal flex-col divide-y divide-paper-edge pl-5 text-[11px] text-ink-soft">
         {ladder.order.map((id, index) => {
           const step = byId.get(id);
-          return step ? <StepItem key={id} step={step} index={index} isShared={sharedStepIds.has(id)} unit={unit} /> : null;
+          return step ? <StepItem key={id} step={step} index={index} isShared={sharedStepIds.has(id)} unit={unit} isPrint={isPrint} /> : null;
         })}
       </ol>
     </>

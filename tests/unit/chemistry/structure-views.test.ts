@@ -166,5 +166,10 @@ describe('compare and the printable report', () => {
     expect(hydrationHtml).toContain('data-origin="library"');
     expect(hydrationHtml).toMatch(/Library<span class="sr-only">: Published value from [^<]+<\/span><\/span><span[^>]*>[^<]+<\/span>/);
     expect(hydrationHtml).not.toContain('Estimate');
+    expect(hydrationHtml).toContain('loading="lazy"');
+    // The printable report fetches its drawings at once, so none is missing from the printed page.
+    const printed = renderToStaticMarkup(createElement(CompareStepList, { ladder: hydrationLadder!, sharedStepIds: new Set<string>(), unit: 'kJ', isPrint: true }));
+    expect(printed).toContain('loading="eager"');
+    expect(printed).not.toContain('loading="lazy"');
   });
 });

@@ -23,7 +23,20 @@ export function sharedStepIds(comparison: Comparison): Map<number, Set<string>> 
 }
 
 // The ladders on one scale and the metrics table; used by the compare page and the printable report.
-export function CompareView({ comparison, basis, units, visible }: { comparison: Comparison; basis: LadderBasis; units: MetricUnits; visible: ReadonlySet<MetricKey> }) {
+export function CompareView({
+  comparison,
+  basis,
+  units,
+  visible,
+  isPrint = false,
+}: {
+  comparison: Comparison;
+  basis: LadderBasis;
+  units: MetricUnits;
+  visible: ReadonlySet<MetricKey>;
+  /** the printable report */
+  isPrint?: boolean;
+}) {
   const domain = sharedDomain(
     comparison.routes.map((r) => r.ladder),
     basis,
@@ -48,7 +61,7 @@ export function CompareView({ comparison, basis, units, visible }: { comparison:
                 Could not evaluate this route: {route.error?.message ?? 'unknown reason'}.
               </p>
             )}
-            {route.ladder ? <CompareStepList ladder={route.ladder} sharedStepIds={shared.get(route.id) ?? new Set()} unit={units.energyUnit} /> : null}
+            {route.ladder ? <CompareStepList ladder={route.ladder} sharedStepIds={shared.get(route.id) ?? new Set()} unit={units.energyUnit} isPrint={isPrint} /> : null}
           </figure>
         ))}
       </div>

@@ -43,7 +43,7 @@ export function ReportClient({ ids, whatIf, basis }: { ids: number[]; whatIf: Wh
         </Button>
       </header>
       <TargetWarning routes={c.routes} />
-      <CompareView comparison={c} basis={basis} units={units} visible={visible} />
+      <CompareView comparison={c} basis={basis} units={units} visible={visible} isPrint />
       <section aria-label="Decision" className="break-inside-avoid rounded-lg border border-paper-edge bg-white p-3">
         <h2 className="text-base font-semibold">Decision</h2>
         {decision.data ? (
