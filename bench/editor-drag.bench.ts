@@ -47,7 +47,7 @@ export async function runEditorDragBench(baseUrl: string, { moves = 300 } = {}):
     await page.waitForFunction(() => !document.querySelector('.react-flow')?.textContent?.includes('not evaluated'), undefined, { timeout: 60_000 });
     const loadMs = performance.now() - loadStarted;
 
-    const handle = nodes.first().locator('p.font-mono');
+    const handle = nodes.first().getByTestId('step-equation');
     const box = (await handle.boundingBox())!;
     const before = (await nodes.first().boundingBox())!;
     const x0 = box.x + box.width / 2;

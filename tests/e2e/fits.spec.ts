@@ -54,12 +54,12 @@ test('a designer fits K(T), makes a team species from the fit, and a route step 
   const step = { id: 's1', equation: 'N2O4(g) -> 2 NO2(g)', temperature: '350 K', yieldPct: 100, notes: '', position: { x: 0, y: 0 } };
   expect((await page.request.put(`/api/routes/${id}`, { data: { version, name: `E2E fitted step ${stamp}`, target: 'NO2(g)', targetAmount: '1 mol', marginalThreshold_kJ: -17, steps: [step], links: [] } })).status()).toBe(200);
   await page.goto(`/routes/${id}`);
-  await page.locator('.react-flow__node[data-id="s1"] p.font-mono').click();
+  await page.locator('.react-flow__node[data-id="s1"] [data-testid="step-equation"]').click();
   await page.getByLabel('ΔH° and ΔS° from').selectOption(String(fitId));
   await expect(page.getByTestId('step-data-source')).toContainText(`E2E dimer fit ${stamp}`, { timeout: 10_000 });
   await expect(page.getByText('Saved', { exact: true })).toBeVisible({ timeout: 10_000 });
   await page.reload();
-  await page.locator('.react-flow__node[data-id="s1"] p.font-mono').click();
+  await page.locator('.react-flow__node[data-id="s1"] [data-testid="step-equation"]').click();
   await expect(page.getByTestId('step-data-source')).toContainText(`E2E dimer fit ${stamp}`);
 
   // The team species made from the fit: a step on library data now uses it, and says the fit is its source.

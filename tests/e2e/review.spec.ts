@@ -63,7 +63,7 @@ test('review round: designer asks, reviewer comments and flags, designer clears,
 
   // The reviewer cannot edit, but comments on step 1; the payload shows as text and never runs.
   await expect(reviewer.getByTestId('palette-item')).toHaveCount(0);
-  await stepNode(reviewer, 's1').locator('p.font-mono').click();
+  await stepNode(reviewer, 's1').getByTestId('step-equation').click();
   await review(reviewer).getByPlaceholder(/Comment on Step/).fill(XSS);
   await review(reviewer).getByRole('button', { name: 'Comment', exact: true }).click();
   const comment = review(reviewer).getByTestId('comment').first();
@@ -120,7 +120,7 @@ test('review round: designer asks, reviewer comments and flags, designer clears,
 
   // The reviewer resolves the thread; the earlier comment now says it was written on an earlier version.
   await reviewer.reload();
-  await stepNode(reviewer, 's1').locator('p.font-mono').click();
+  await stepNode(reviewer, 's1').getByTestId('step-equation').click();
   const thread = review(reviewer).getByRole('article', { name: 'Thread on Step 1' }).filter({ hasText: 'Watch the' });
   await expect(thread).toContainText('written on an earlier version');
   await thread.getByRole('button', { name: 'Resolve' }).click();
@@ -141,7 +141,7 @@ test('history: every save is a revision; two compare field by field, and a resto
   await signIn(page, user('designer').email, DEMO_PASSWORD);
   const routeId = await makeRoute(page.request, `E2E history ${Date.now()}`);
   await page.goto(`/routes/${routeId}`);
-  await stepNode(page, 's2').locator('p.font-mono').click();
+  await stepNode(page, 's2').getByTestId('step-equation').click();
   await page.getByRole('textbox', { name: /Temperature/ }).fill('650');
   await expect(page.getByText('Saved', { exact: true })).toBeVisible({ timeout: 10_000 });
 
@@ -160,7 +160,7 @@ test('history: every save is a revision; two compare field by field, and a resto
   await page.getByRole('dialog', { name: 'Restore revision 2?' }).getByRole('button', { name: 'Restore' }).click();
   await expect(list.getByRole('listitem')).toHaveCount(4);
   await expect(list.getByRole('listitem').first()).toContainText('Restored revision 2');
-  await stepNode(page, 's2').locator('p.font-mono').click();
+  await stepNode(page, 's2').getByTestId('step-equation').click();
   await expect(page.getByRole('textbox', { name: /Temperature/ })).toHaveValue('500');
 
   await review(page).getByRole('tab', { name: 'Activity' }).click();

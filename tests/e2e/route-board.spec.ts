@@ -42,7 +42,7 @@ async function dragBetween(page: Page, source: Locator, target: Locator) {
 }
 
 async function setTemperature(page: Page, id: string, kelvin: string) {
-  await node(page, id).locator('p.font-mono').click();
+  await node(page, id).getByTestId('step-equation').click();
   const field = page.getByRole('textbox', { name: /Temperature/ });
   await field.fill(kelvin);
 }
@@ -103,11 +103,11 @@ test('a designer builds a three-step route, remedies an uphill step, and finds i
   await expect(page.locator('.react-flow__edge')).toHaveCount(3);
   await expect(node(page, methanol!).getByText('downhill')).toBeVisible();
   await expect(ladderMark(page, methanol!)).toHaveAttribute('aria-label', /downhill/);
-  await node(page, methanol!).locator('p.font-mono').click();
+  await node(page, methanol!).getByTestId('step-equation').click();
   await expect(page.getByRole('textbox', { name: /Temperature/ })).toHaveValue(cooled);
 
   // Keyboard: Delete removes the selected step with its link; Ctrl+Z brings both back.
-  await node(page, formaldehyde!).locator('p.font-mono').click();
+  await node(page, formaldehyde!).getByTestId('step-equation').click();
   await page.keyboard.press('Delete');
   await expect(page.locator('.react-flow__node')).toHaveCount(2);
   await expect(page.locator('.react-flow__edge')).toHaveCount(2);
@@ -132,7 +132,7 @@ test('a reviewer reads a route without any edit controls', async ({ page }) => {
   await expect(page.getByRole('button', { name: 'Undo' })).toHaveCount(0);
   await expect(page.getByTestId('save-status')).toHaveCount(0);
 
-  await page.locator('.react-flow__node').first().locator('p.font-mono').click();
+  await page.locator('.react-flow__node').first().getByTestId('step-equation').click();
   await expect(page.getByRole('textbox', { name: 'Equation' })).toBeDisabled();
   await expect(page.getByRole('textbox', { name: /Temperature/ })).toBeDisabled();
   await expect(page.getByRole('button', { name: 'Remove step' })).toHaveCount(0);

@@ -28,7 +28,7 @@ const readRoute = async (request: APIRequestContext, id: number) => (await (awai
 
 async function openStep(page: Page, id: number) {
   await page.goto(`/routes/${id}`);
-  await page.locator('.react-flow__node[data-id="s1"] p.font-mono').click();
+  await page.locator('.react-flow__node[data-id="s1"] [data-testid="step-equation"]').click();
   return page.getByRole('textbox', { name: /Temperature/ });
 }
 
@@ -74,7 +74,7 @@ test('"Reload theirs" shows the other save and drops mine', async ({ page }) => 
   const dialog = page.getByRole('dialog', { name: 'This route changed elsewhere' });
   await dialog.getByRole('button', { name: 'Reload theirs' }).click();
   await expect(dialog).toBeHidden();
-  await page.locator('.react-flow__node[data-id="s1"] p.font-mono').click();
+  await page.locator('.react-flow__node[data-id="s1"] [data-testid="step-equation"]').click();
   await expect(page.getByRole('textbox', { name: /Temperature/ })).toHaveValue('520');
 });
 
