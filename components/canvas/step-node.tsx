@@ -68,7 +68,7 @@ function StepNodeView({ id, data, selected }: NodeProps<StepNodeData>) {
       <div className="flex items-center justify-between gap-2 border-b border-paper-edge px-2 py-1">
         <span className="font-semibold text-ink-soft">{data.label}</span>
         {data.isStale ? (
-          <span className="rounded border border-dashed border-paper-edge px-1.5 text-[11px] text-ink-faint" data-testid="step-node-stale">changed · re-evaluating</span>
+          <span className="rounded border border-dashed border-paper-edge px-1.5 text-[11px] text-ink-faint" data-testid="step-node-stale">changed · not yet evaluated</span>
         ) : data.problemLabel ? (
           <span className="rounded border border-uphill/40 bg-paper-deep px-1.5 text-[11px] font-semibold text-uphill" data-testid="step-node-problem-label">
             <span aria-hidden="true">! </span>

@@ -22,7 +22,7 @@ const CLASS_WORD = { downhill: 'downhill', marginal: 'marginal', uphill: 'uphill
 export function nodeSpokenName(title: string, data: StepNodeData, hasResult: boolean): string {
   const parts: string[] = [];
   if (!data.equation) parts.push('blank step, type an equation');
-  else if (data.isStale) parts.push('changed, re-evaluating');
+  else if (data.isStale) parts.push('changed, not yet evaluated');
   else if (data.problemText) parts.push(`not evaluated, ${data.problemLabel || 'see the step'}: ${data.problemText}`);
   else if (data.cls && data.cls !== 'error') parts.push(`${data.deltaGName} ${data.deltaGText}, ${CLASS_WORD[data.cls]}${data.signUncertain ? ', sign uncertain' : ''}`);
   else parts.push(hasResult ? 'not evaluated' : 'evaluating');

@@ -28,7 +28,7 @@ describe('step node problems', () => {
 
   it('marks a stale node instead of its class', () => {
     const html = node({ isStale: true, cls: null, deltaGText: '—' });
-    expect(html).toContain('changed · re-evaluating');
+    expect(html).toContain('changed · not yet evaluated');
     expect(html).not.toContain('data-class="downhill"');
   });
 

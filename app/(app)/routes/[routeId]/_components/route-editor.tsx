@@ -192,7 +192,7 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
       </div>
       <p className="hidden text-xs text-ink-faint md:block">{canEdit ? SHORTCUT_HELP : 'F fits the view · select a step to read its details'}</p>
       {/* Below the board, so warnings appearing never shift the canvas under the pointer. */}
-      <RouteWarnings warnings={evaluation?.warnings ?? []} stepLabels={stepTitles} error={error} />
+      <RouteWarnings warnings={evaluation?.warnings ?? []} stepLabels={stepTitles} error={error} hasEarlierResult={evaluation !== undefined} />
 
       <div className="grid gap-3 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <section aria-label="Free-energy ladder" className="rounded-lg border border-paper-edge bg-white p-3">

@@ -8,7 +8,18 @@ function withLabels(message: string, stepLabels: Record<string, string>): string
   return relabelStepIds(message, labels);
 }
 
-export function RouteWarnings({ warnings, stepLabels, error }: { warnings: RouteWarning[]; stepLabels: Record<string, string>; error: Error | null }) {
+export function RouteWarnings({
+  warnings,
+  stepLabels,
+  error,
+  hasEarlierResult = false,
+}: {
+  warnings: RouteWarning[];
+  stepLabels: Record<string, string>;
+  error: Error | null;
+  /** an earlier answer is on screen: only then may the message say so */
+  hasEarlierResult?: boolean;
+}) {
   if (!error && warnings.length === 0) return null;
   return (
     <section aria-labelledby="route-warnings-heading" className="rounded-md border border-marginal/40 bg-marginal-bg px-3 py-2 text-sm text-ink">
@@ -18,7 +29,8 @@ export function RouteWarnings({ warnings, stepLabels, error }: { warnings: Route
       <ul className="mt-1 list-disc space-y-0.5 pl-5">
         {error ? (
           <li>
-            The route could not be evaluated: <ChemText text={withLabels(error.message, stepLabels)} /> (the last result is still shown).
+            The route could not be evaluated: <ChemText text={withLabels(error.message, stepLabels)} />
+            {hasEarlierResult ? ' (the figures shown are from the last evaluation that worked).' : '.'}
           </li>
         ) : null}
         {warnings.map((w, i) => (
