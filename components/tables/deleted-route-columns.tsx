@@ -4,12 +4,13 @@ import type { ColumnDef } from '@tanstack/react-table';
 import type { DeletedRouteDto } from '@/lib/services/routes/list-deleted-routes';
 import { Button } from '../ui/button';
 import { When } from '../ui/when';
+import { FormulaText } from '@/components/chemistry/formula-text';
 
 // The recently deleted routes: no link (a deleted route opens nowhere), who deleted it, and until when it can come back.
 export function deletedRouteColumns({ busyRouteId, onUndelete }: { busyRouteId: number | null; onUndelete: (route: DeletedRouteDto) => void }): ColumnDef<DeletedRouteDto>[] {
   return [
     { id: 'name', header: 'Name', enableSorting: false, cell: ({ row }) => <span className="font-medium text-ink">{row.original.name}</span> },
-    { id: 'target', header: 'Target', enableSorting: false, cell: ({ row }) => <span className="font-mono text-xs">{row.original.target}</span> },
+    { id: 'target', header: 'Target', enableSorting: false, cell: ({ row }) => <FormulaText value={row.original.target} /> },
     {
       id: 'deletedAt',
       header: 'Deleted',
