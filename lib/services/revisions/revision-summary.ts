@@ -1,6 +1,6 @@
 // One short line saying what a save changed, e.g. "+1 step, T of Step 2 (water–gas shift) 500 → 650 K, ΔG overall
 // −12.4 → −20.1 kJ". Steps are named by their place in route order and what they do, never by id. Pure.
-import { formatKJ, MINUS, withTrueMinus } from '../../format/numbers';
+import { formatKJ, formatSignificant, MINUS, withTrueMinus } from '../../format/numbers';
 import { stepLabels } from '../../route-editor/step-label';
 import { diffRevisions, type FieldChange, type FieldValue, type RevisionDiff } from './revision-diff';
 import type { RevisionState } from './revision-snapshot';
@@ -17,20 +17,25 @@ export function formatKj(value: number): string {
 export type StepNamer = (id: string) => string;
 const byId: StepNamer = (id) => id;
 
+const QUANTITY = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)\s*(.*)$/;
+
+// A number as typed, unless it was typed in e-notation ("1e-7"): that reads "10⁻⁷".
+const number = (typed: string) => (/e/i.test(typed) ? formatSignificant(Number(typed), 3) : signed(typed));
+
 function text(value: FieldValue): string {
   if (value === null) return '—';
   if (typeof value === 'object') return `(${value.x}, ${value.y})`;
+  const q = typeof value === 'string' ? QUANTITY.exec(value) : null;
+  if (q && /e/i.test(q[1]!)) return `${number(q[1]!)}${q[2] ? ` ${q[2]}` : ''}`;
   return signed(String(value));
 }
-
-const QUANTITY = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)\s*(.*)$/;
 
 // "500 K" → "650 K" reads as "500 → 650 K" when the unit is the same.
 function arrow(from: FieldValue, to: FieldValue): string {
   if (typeof from === 'string' && typeof to === 'string') {
     const a = QUANTITY.exec(from);
     const b = QUANTITY.exec(to);
-    if (a && b && a[2] === b[2] && a[2] !== '') return `${signed(a[1]!)} → ${signed(b[1]!)} ${a[2]}`;
+    if (a && b && a[2] === b[2] && a[2] !== '') return `${number(a[1]!)} → ${number(b[1]!)} ${a[2]}`;
   }
   return `${text(from)} → ${text(to)}`;
 }

@@ -72,3 +72,13 @@ describe('revision summary', () => {
     expect(formatKj(135)).toBe('135.0');
   });
 });
+
+describe('revision summary numbers', () => {
+  it('write e-notation as typed into a field as a power of ten, and a negative as typed with the true minus', () => {
+    const before = state(snap([step('s1', { pressures: { 'CO(g)': '1e-7 bar' } })]));
+    const after = state(snap([step('s1', { pressures: { 'CO(g)': '2.5e-6 bar' } })]));
+    expect(summariseRevision(before, after)).toBe('p(CO(g)) of Step 1 (methanol from carbon monoxide) 10⁻⁷ → 2.5 × 10⁻⁶ bar');
+    const threshold = summariseRevision(state(snap([step('s1')])), state(snap([step('s1')], { marginalThreshold_kJ: -20 })));
+    expect(threshold).toBe('threshold \u221217 → \u221220 kJ');
+  });
+});
