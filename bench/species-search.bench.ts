@@ -53,7 +53,9 @@ export async function runSpeciesSearchBench(): Promise<Figures> {
     searchSpecies({ query: q, limit: 8, library });
     const ms = performance.now() - t;
     times.push(ms);
-    byKind.set(kind, [...(byKind.get(kind) ?? []), ms]);
+    const list = byKind.get(kind);
+    if (list) list.push(ms);
+    else byKind.set(kind, [ms]);
   }
   figures.name_search_queries = times.length;
   figures.name_search_p50_ms = round(percentile(times, 50), 3);
