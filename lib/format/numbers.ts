@@ -112,3 +112,8 @@ export function formatKelvin(K: number | null | undefined): string {
 export function countOf(n: number, word: string, plural = `${word}s`): string {
   return `${grouped(String(n))} ${n === 1 ? word : plural}`;
 }
+
+/** Text someone typed, for reading back: numbers in e-notation become powers of ten, a leading hyphen the true minus. */
+export function readableTyped(text: string): string {
+  return withTrueMinus(text.replace(/(^|[\s(=])([-+]?(?:\d+\.?\d*|\.\d+)[eE][-+]?\d+)(?![\w.])/g, (_, lead: string, n: string) => `${lead}${formatSignificant(Number(n), 3)}`));
+}

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { countOf, formatConstant, formatFixed, formatFold, formatKelvin, formatKJ, formatScientific, formatSignificant, formatSigned, superscript, withTrueMinus } from '@/lib/format/numbers';
+import { countOf, formatConstant, formatFixed, formatFold, formatKelvin, formatKJ, formatScientific, formatSignificant, formatSigned, readableTyped, superscript, withTrueMinus } from '@/lib/format/numbers';
 import { formatEnergy, formatEnergyValue, formatTemperature } from '@/lib/format/units';
 
 const MINUS = '\u2212';
@@ -85,5 +85,15 @@ describe('counts', () => {
     expect(countOf(1, 'step')).toBe('1 step');
     expect(countOf(3, 'step')).toBe('3 steps');
     expect(countOf(1200, 'route')).toBe('1,200 routes');
+  });
+});
+
+describe('typed text read back', () => {
+  it('turns e-notation into powers of ten and a leading hyphen into the minus, leaving other text alone', () => {
+    expect(readableTyped('1e-7 bar')).toBe('10⁻⁷ bar');
+    expect(readableTyped('-5 K')).toBe(`${MINUS}5 K`);
+    expect(readableTyped('2.5E+6 Pa')).toBe('2.5 × 10⁶ Pa');
+    expect(readableTyped('CH4(g) + H2O(g) -> CO(g) + 3 H2(g)')).toBe('CH4(g) + H2O(g) -> CO(g) + 3 H2(g)');
+    expect(readableTyped('Line 2e proposal')).toBe('Line 2e proposal');
   });
 });

@@ -4,7 +4,7 @@ import { useQuery } from '@tanstack/react-query';
 import { ChemText } from '@/components/chemistry/chem-text';
 import { FormulaText } from '@/components/chemistry/formula-text';
 import { formatEnergy, type EnergyUnit } from '@/components/ladder/energy-format';
-import { formatKJ, withTrueMinus } from '@/lib/format/numbers';
+import { formatKJ, readableTyped } from '@/lib/format/numbers';
 import { revisionCompareQuery } from '@/lib/queries/revisions';
 import type { DeltaGChange, FieldValue } from '@/lib/services/revisions/revision-diff';
 
@@ -12,7 +12,7 @@ function show(value: FieldValue): string {
   if (value === null || value === '') return '—';
   if (typeof value === 'boolean') return value ? 'on' : 'off';
   if (typeof value === 'object') return `(${Math.round(value.x)}, ${Math.round(value.y)})`;
-  return withTrueMinus(String(value));
+  return readableTyped(String(value));
 }
 
 // Field names as people say them; a condition map's entry ("pressures.CO(g)") reads "p(CO(g))".
