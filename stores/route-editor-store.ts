@@ -29,6 +29,8 @@ export interface RouteEditorState {
   moveStep: (id: string, position: StepInput['position'] | undefined, opts: { dragging: boolean }) => void;
   removeStep: (id: string) => void;
   addLink: (link: LinkInput) => boolean;
+  /** several links as one undo entry (the board's suggestions); answers how many were new */
+  addLinks: (links: LinkInput[]) => number;
   removeLink: (link: LinkInput) => void;
   updateMeta: (patch: RouteMetaPatch, opts?: { coalesceKey?: string }) => void;
   selectStep: (id: string | null) => void;
@@ -112,6 +114,16 @@ export function createRouteEditorStore(initialDoc: RouteDraft, initialVersion: n
         if (link.from === link.to || doc.links.some((l) => sameLink(l, link))) return false;
         commit({ ...doc, links: [...doc.links, link] });
         return true;
+      },
+      addLinks: (links) => {
+        const doc = get().doc;
+        const fresh: LinkInput[] = [];
+        for (const link of links) {
+          if (link.from === link.to || [...doc.links, ...fresh].some((l) => sameLink(l, link))) continue;
+          fresh.push(link);
+        }
+        if (fresh.length > 0) commit({ ...doc, links: [...doc.links, ...fresh] });
+        return fresh.length;
       },
       removeLink: (link) => {
         const doc = get().doc;
