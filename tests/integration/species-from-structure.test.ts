@@ -15,7 +15,9 @@ import * as structureMigration from '@/db/migrations/20261206-0011-team-species-
 import { createRoute } from '@/lib/services/routes/create-route';
 import { saveRoute } from '@/lib/services/routes/save-route';
 import { makeFit } from './support/fit-fixtures';
-import { makeRoleSet } from './support/fixtures';
+import { GET as exportTeamRoute } from '@/app/api/teams/[teamId]/export/route';
+import { POST as importTeamRoute } from '@/app/api/teams/[teamId]/import/route';
+import { makeRoleSet, makeTeamWithLead } from './support/fixtures';
 import { callRoute, errorOf } from './support/http';
 import { setupTestDb, teardownTestDb } from './support/test-db';
 
@@ -196,6 +198,25 @@ describe('editing and deleting a team species known by structure', () => {
       expect.arrayContaining([['Kestrel Ridge neopentyl series', [2]], ['Kestrel Ridge labelled route', [1]]]),
     );
     expect(await getDb().models.TeamSpecies.findByPk(made.id)).not.toBeNull();
+  });
+});
+
+describe('team export and import', () => {
+  it('carry the structure columns, and refuse a file whose InChIKey is not one', async () => {
+    const source = await makeTeamWithLead('structure-export');
+    expect((await create({ smiles: BOC_AMP, phase: 'l', name: 'exported Boc-AMP', source: { kind: 'estimate' } }, source.leadId)).status).toBe(201);
+    const exported = await callRoute(exportTeamRoute, { userId: source.leadId, params: { teamId: String(source.teamId) } });
+    expect(exported.status).toBe(200);
+    const target = await makeTeamWithLead('structure-import');
+    const imported = await callRoute(importTeamRoute, { method: 'POST', userId: target.leadId, params: { teamId: String(target.teamId) }, body: exported.body });
+    expect(imported.status, JSON.stringify(imported.body)).toBe(201);
+    expect(await getDb().models.TeamSpecies.findOne({ where: { teamId: target.teamId } })).toMatchObject({ inchikey: BOC_AMP_KEY, smiles: 'CC(C)(CO)NC(=O)OC(C)(C)C', key: `{${BOC_AMP_KEY}}(l)` });
+
+    const broken = JSON.parse(JSON.stringify(exported.body).replaceAll(BOC_AMP_KEY, 'NOT-AN-INCHIKEY')) as unknown;
+    const other = await makeTeamWithLead('structure-import-bad');
+    const refused = await callRoute(importTeamRoute, { method: 'POST', userId: other.leadId, params: { teamId: String(other.teamId) }, body: broken });
+    expect(refused.status).toBe(400);
+    expect(JSON.stringify(refused.body)).toMatch(/InChIKey/);
   });
 });
 
