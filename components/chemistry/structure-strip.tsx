@@ -108,7 +108,7 @@ export function StructureStrip({
       ref={ref}
       tabIndex={focusable ? 0 : -1}
       role="group"
-      aria-label={`Structures of ${label}: ${sentence}. Focus shows them larger.`}
+      aria-label={`Structures of ${label}: ${sentence}.${focusable ? ' Focus shows them larger.' : ''}`}
       aria-describedby={anchor ? popupId : undefined}
       onMouseEnter={open}
       onMouseLeave={close}

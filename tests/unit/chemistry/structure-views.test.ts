@@ -144,7 +144,9 @@ describe('palette', () => {
     expect(alts).toContain('benzene (C6H6)');
     expect(alts).toContain('ethanol (C2H6O)');
     expectNamedDrawings(html, alts.length);
-    expect(html).toContain('aria-label="Structures of Ethylene hydration: consumes ethylene (ethene) (C2H4), water vapour (H2O); makes ethanol (C2H6O). Focus shows them larger."');
+    expect(html).toContain('aria-label="Structures of Ethylene hydration: consumes ethylene (ethene) (C2H4), water vapour (H2O); makes ethanol (C2H6O)."');
+    // The palette's drawings are no tab stop of their own (its Add buttons are one roving stop).
+    expect(html).not.toMatch(/data-testid="structure-strip"[^>]*tabindex="0"|tabindex="0"[^>]*data-testid="structure-strip"/);
   });
 });
 
