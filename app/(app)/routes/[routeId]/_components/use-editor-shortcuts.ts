@@ -13,6 +13,13 @@ function isTyping(target: EventTarget | null): boolean {
   return false;
 }
 
+// Delete means the selected step only from the board (or nowhere in particular): pressed on a palette or panel button
+// it would remove a step the keyboard user is not looking at.
+function isOnBoard(target: EventTarget | null): boolean {
+  if (!(target instanceof Element)) return true;
+  return target === document.body || target.closest('.react-flow') !== null;
+}
+
 // Window-level keys for the board; typing in a field keeps the browser's own meaning of every key.
 export function useEditorShortcuts({ canEdit, onFitView }: { canEdit: boolean; onFitView: () => void }) {
   const store = useRouteEditorStoreApi();
@@ -35,7 +42,7 @@ export function useEditorShortcuts({ canEdit, onFitView }: { canEdit: boolean; o
       } else if (mod && ((key === 'z' && event.shiftKey) || (key === 'y' && !event.shiftKey))) {
         event.preventDefault();
         state.redo();
-      } else if (!mod && (event.key === 'Delete' || event.key === 'Backspace') && state.selectedStepId) {
+      } else if (!mod && (event.key === 'Delete' || event.key === 'Backspace') && state.selectedStepId && isOnBoard(event.target)) {
         event.preventDefault();
         state.removeStep(state.selectedStepId);
       }
