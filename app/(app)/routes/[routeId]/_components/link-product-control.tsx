@@ -29,7 +29,7 @@ export function LinkProductControl({ step, steps, links, onAddLink }: { step: St
 
   if (products.length === 0) return <p className="text-xs text-ink-faint">This step has no products to link yet.</p>;
   const product = picked && products.includes(picked.product) ? picked.product : (products.find((p) => firstTaker(step, p, ordered, links)) ?? products[0]!);
-  const to = picked && picked.product === product && steps.some((s) => s.id === picked.to) ? picked.to : firstTaker(step, product, ordered, links);
+  const to = picked && picked.product === product && (picked.to === '' || steps.some((s) => s.id === picked.to)) ? picked.to : firstTaker(step, product, ordered, links);
   const others = ordered.filter((s) => s.id !== step.id);
 
   const handleLink = () => {

@@ -47,7 +47,7 @@ export function StepLinks({
           </li>
         ))}
       </ul>
-      {canEdit ? <LinkProductControl step={step} steps={steps} links={links} onAddLink={onAddLink} /> : null}
+      {canEdit ? <LinkProductControl key={step.id} step={step} steps={steps} links={links} onAddLink={onAddLink} /> : null}
     </section>
   );
 }
