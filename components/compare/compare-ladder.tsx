@@ -4,6 +4,7 @@ import { scaleLinear } from 'd3-scale';
 import { useId } from 'react';
 import type { LadderStep, RouteLadder } from '@/lib/compare/compare-types';
 import { energyFromKJ, energyUnitLabel, formatEnergy, type EnergyUnit } from '../ladder/energy-format';
+import { withTrueMinus } from '@/lib/format/numbers';
 import { LadderPatterns } from '../ladder/ladder-frame';
 import { CLASS_STYLES, LADDER_COLOURS as C } from '../ladder/ladder-palette';
 import { ESTIMATE_WORD, stepSignUncertainText } from '../ladder/ladder-uncertainty';
@@ -70,7 +71,7 @@ export function CompareLadder({
         <g key={t}>
           <line x1={M.left} x2={W - M.right} y1={y(t)} y2={y(t)} stroke={t === 0 ? C.inkSoft : C.paperEdge} strokeWidth={t === 0 ? 1.25 : 0.75} />
           <text x={M.left - 4} y={y(t)} textAnchor="end" dominantBaseline="middle" fontSize={10} fill={C.inkSoft}>
-            {t > 0 ? `+${t}` : t}
+            {t > 0 ? `+${t}` : withTrueMinus(String(t))}
           </text>
         </g>
       ))}
