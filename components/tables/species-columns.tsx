@@ -6,6 +6,7 @@ import { FormulaText, formulaPlain } from '@/components/chemistry/formula-text';
 import { OriginMark } from '@/components/chemistry/origin-mark';
 import { formatFixed } from '@/lib/format/numbers';
 import type { SpeciesRowDto } from '@/lib/services/species/species-dto';
+import { withTrueMinus } from '@/lib/format/numbers';
 
 export const PHASE_WORDS: Record<string, string> = { g: 'gas', l: 'liquid', s: 'solid', aq: 'aqueous' };
 
@@ -49,7 +50,7 @@ export function speciesColumns(): ColumnDef<SpeciesRowDto>[] {
     { id: 'dfH', header: 'ΔfH° kJ/mol', enableSorting: false, cell: ({ row }) => formatNumber(row.original.dfH_kJ, 1) },
     { id: 'dfG', header: 'ΔfG° kJ/mol', enableSorting: false, cell: ({ row }) => formatNumber(row.original.dfG_kJ, 1) },
     { id: 'S', header: 'S° J/(mol K)', enableSorting: false, cell: ({ row }) => formatNumber(row.original.S_J_per_K) },
-    { id: 'source', header: 'Source', enableSorting: false, cell: ({ row }) => <span className="line-clamp-2 max-w-64 text-ink-soft">{row.original.source}</span> },
+    { id: 'source', header: 'Source', enableSorting: false, cell: ({ row }) => <span className="line-clamp-2 max-w-64 text-ink-soft">{withTrueMinus(row.original.source)}</span> },
     { id: 'origin', header: 'Origin', enableSorting: false, cell: ({ row }) => <OriginBadge row={row.original} /> },
   ];
 }

@@ -148,7 +148,7 @@ test('history: every save is a revision; two compare field by field, and a resto
   await review(page).getByRole('tab', { name: 'History' }).click();
   const list = review(page).getByRole('list', { name: 'Revisions, newest first' });
   await expect(list.getByRole('listitem')).toHaveCount(3);
-  await expect(list.getByRole('listitem').first()).toContainText('T of s2 500 → 650 K');
+  await expect(list.getByRole('listitem').first()).toContainText('T of Step 2 (methanol from carbon monoxide) 500 → 650 K');
   await review(page).getByLabel('Compare revision 2').check();
   await review(page).getByLabel('Compare revision 3').check();
   const diff = review(page).getByLabel('Changes from revision 2 to 3');

@@ -2,6 +2,7 @@ import { formatNumber } from '@/components/tables/species-columns';
 import { formatSignificant } from '@/lib/format/numbers';
 import type { TeamSpeciesDto } from '@/lib/services/species/species-dto';
 import type { SpeciesRecord } from '@/lib/thermo/species-types';
+import { withTrueMinus } from '@/lib/format/numbers';
 
 // An uncertainty to two significant figures ("± 0.04", "± 2"): its own size, not the value's decimals.
 const sigma = (x: number | null) => (x === null ? <span className="text-ink-faint">none published</span> : <>± {formatSignificant(x, 2)}</>);
@@ -65,7 +66,7 @@ export function SpeciesValues({ team, builtin }: { team: TeamSpeciesDto | null; 
           <>
             <dt className="text-ink-soft">Built-in source</dt>
             <dd>
-              {builtin.source} <span className="text-ink-faint">({builtin.sourceRef})</span>
+              {withTrueMinus(builtin.source)} <span className="text-ink-faint">({builtin.sourceRef})</span>
               {builtin.flags.includes('fromMemory') ? <span className="ml-1 text-marginal">from memory, not yet checked against the printed source</span> : null}
               {builtin.uncertaintyRef ? <span className="block text-xs text-ink-faint">Uncertainty: {builtin.uncertaintyRef}</span> : null}
               {builtin.compilationDifference ? (

@@ -131,7 +131,7 @@ export function CommentComposer({
           role="listbox"
           aria-label="Mention a colleague"
           hidden={!mention}
-          className="absolute left-0 top-full z-20 mt-0.5 max-h-48 w-64 overflow-auto rounded-md border border-paper-edge bg-white py-1 text-sm shadow-lg"
+          className="absolute bottom-full left-0 z-20 mb-0.5 max-h-48 w-64 overflow-auto rounded-md border border-paper-edge bg-white py-1 text-sm shadow-lg"
         >
           {mention?.options.map((m, i) => (
             <li
