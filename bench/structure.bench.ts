@@ -133,7 +133,7 @@ export async function runStructureBench(): Promise<Figures> {
     for (let k = 0; k < 2; k += 1) {
       const t = performance.now();
       const structure = chem.parse(smiles);
-      lookup.findStructure(structure.inchikey, 'g');
+      lookup.findStructure?.(structure.inchikey, 'g');
       estimateSpecies(chem, structure, 'g', null);
       quickest = Math.min(quickest, performance.now() - t);
     }
