@@ -1,4 +1,5 @@
 // Words for where a value came from, shared by the origin mark, its tooltip and the step panel's sentences. Pure.
+import { withTrueMinus } from '@/lib/format/numbers';
 
 export type ValueOrigin = 'library' | 'team' | 'estimated';
 
@@ -28,7 +29,8 @@ function sigmaWords(sigma_kJ: number | null | undefined): string {
 
 /** One sentence: whose value it is, from where, and how far to trust it. */
 export function describeOrigin(f: OriginFacts): string {
-  const source = f.source?.trim().replace(/\.+$/, '');
+  const trimmed = f.source?.trim().replace(/\.+$/, '');
+  const source = trimmed === undefined ? undefined : withTrueMinus(trimmed);
   if (f.origin === 'estimated') {
     const method = f.method?.trim() || source?.replace(/^Estimated:?\s*/i, '') || 'group contribution';
     return `Estimated from the structure by ${method}, not measured${sigmaWords(f.sigma_kJ)}.`;

@@ -152,7 +152,7 @@ test('history: every save is a revision; two compare field by field, and a resto
   await review(page).getByLabel('Compare revision 2').check();
   await review(page).getByLabel('Compare revision 3').check();
   const diff = review(page).getByLabel('Changes from revision 2 to 3');
-  await expect(diff).toContainText('temperature');
+  await expect(diff).toContainText('Temperature');
   await expect(diff).toContainText('500 K');
   await expect(diff).toContainText('650 K');
 
