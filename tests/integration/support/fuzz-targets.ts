@@ -136,6 +136,9 @@ export const SEED_BODIES: Record<string, SeedBody> = {
   'POST species': () => speciesInput(),
   'PUT species/team/[teamSpeciesId]': () => ({ version: 1, species: speciesInput() }),
   'POST species/impact': () => ({ species: speciesInput() }),
+  'POST species/resolve': () => ({ smiles: 'CC(=O)Nc1ccc(O)cc1', phase: 'g', temperature: '350 K' }),
+  // A structure no library row has (a Boc-protected amino alcohol), saved as the engine's estimate.
+  'POST species/team': () => ({ smiles: 'CC(C)(C)OC(=O)NC(C)(C)CO', phase: 'g', name: `fuzz estimate ${unique()}`, source: { kind: 'estimate' } }),
   'POST species/imports/[importId]/commit': () => ({ choices: { 'C9H8O4(s)': 'skip' }, otherwise: 'override' }),
   // Another team's export, with one route: the caller's team holds no data yet, so the import may succeed once.
   'POST teams/[teamId]/import': async () => {
