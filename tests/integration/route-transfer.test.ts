@@ -104,7 +104,9 @@ describe('GET /api/routes/[routeId]/export', () => {
     await getDb().models.Step.create({ routeId: unfinished.id, stepKey: 'later', sortOrder: 2, equation: '', conditions: {}, yieldPct: 100, notes: '', positionX: 0, positionY: 0 });
     const res = await exported(unfinished.id);
     expect(res.status).toBe(422);
-    expect(errorOf(res.body).message).toMatch(/Step later has no equation yet/);
+    // Named by its place in route order, never by its key.
+    expect(errorOf(res.body).message).toMatch(/^Step 3 has no equation yet/);
+    expect(errorOf(res.body).message).not.toContain('later');
   });
 });
 

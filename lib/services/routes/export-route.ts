@@ -2,6 +2,7 @@ import 'server-only';
 import { AppError } from '../../api/errors';
 import { CAUTION_SHORT } from '../../safety/caution-text';
 import { ROUTE_FILE_FORMAT, type StepwellHeader } from '../../schemas/route-transfer';
+import { stepLabels } from '../../route-editor/step-label';
 import type { RouteEvaluateRequest } from '../../thermo/route';
 import { toRouteEvaluateRequest } from './evaluate-route-document';
 import { getRoute } from './get-route';
@@ -11,9 +12,12 @@ export type RouteFile = RouteEvaluateRequest & { stepwell: StepwellHeader };
 /** The route as the CLI's route request, plus the board's name, positions and notes under `stepwell`. */
 export async function exportRoute({ teamId, routeId }: { teamId: number; routeId: number }): Promise<{ file: RouteFile; filename: string }> {
   const doc = await getRoute({ teamId, routeId });
-  const blank = doc.steps.filter((s) => s.equation.trim() === '').map((s) => s.id);
+  // People know a step by its place in route order ("Step 2"), never by its key.
+  const labels = stepLabels(doc.steps, doc.links);
+  const blank = doc.steps.filter((s) => s.equation.trim() === '').map((s) => labels.get(s.id)!);
   if (blank.length) {
-    throw new AppError('UNPROCESSABLE', `Step ${blank.join(', ')} has no equation yet. Finish or remove ${blank.length === 1 ? 'it' : 'them'} before exporting.`);
+    const named = blank.length === 1 ? blank[0]!.short : `Steps ${blank.map((l) => l.number).join(', ')}`;
+    throw new AppError('UNPROCESSABLE', `${named} ${blank.length === 1 ? 'has' : 'have'} no equation yet. Finish or remove ${blank.length === 1 ? 'it' : 'them'} before exporting.`);
   }
   if (doc.steps.length === 0) throw new AppError('UNPROCESSABLE', 'This route has no steps yet, so there is nothing to export.');
   const notes = Object.fromEntries(doc.steps.filter((s) => s.notes !== '').map((s) => [s.id, s.notes]));
