@@ -36,7 +36,7 @@ export function SpeciesIdentity({ detail }: { detail: SpeciesDetailDto }) {
   return (
     <section aria-label="Identity" className="flex flex-wrap items-start gap-4 rounded-lg border border-paper-edge bg-white/60 p-3" data-testid="species-identity">
       {structure ? <StructureImage smiles={structure.smiles} name={name} formula={formula} {...DRAWING} /> : null}
-      <dl className="grid min-w-0 flex-1 grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-sm">
+      <dl className="grid min-w-[min(100%,18rem)] flex-1 grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-sm">
         <Row term="Formula">
           <FormulaText value={detail.key} formula={formula} className="text-base" />
         </Row>
