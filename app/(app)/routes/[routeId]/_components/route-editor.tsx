@@ -140,7 +140,7 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
           {review.archived ? null : (
             <div className="mt-1.5 flex flex-wrap items-center gap-2">
               <AlternativesMenu routeId={routeId} />
-              <WorkflowBar routeId={routeId} teamId={review.teamId} status={review.status} role={review.role} selfId={review.selfId} stepLabels={stepLabels} />
+              <WorkflowBar routeId={routeId} teamId={review.teamId} status={review.status} role={review.role} selfId={review.selfId} stepLabels={stepTitles} />
             </div>
           )}
         </div>
@@ -202,6 +202,7 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
             selectedStepId={selectedStepId}
             onSelectStep={(id) => store.getState().selectStep(id)}
             stepLabels={ladderLabels}
+            routeLabels={allLabels}
             exportName={name}
             reviewMarks={reviewData.marks}
           />
