@@ -52,8 +52,9 @@ export function SpeciesClient() {
           </select>
         </div>
         {canEdit ? (
-          <div className="ml-auto flex gap-2">
+          <div className="ml-auto flex flex-wrap gap-2">
             <Link href="/species/import" className="rounded-md border border-paper-edge bg-white px-3 py-1.5 text-sm font-medium hover:bg-paper-deep">Import CSV</Link>
+            <Link href="/species/from-structure" className="rounded-md border border-paper-edge bg-white px-3 py-1.5 text-sm font-medium hover:bg-paper-deep">From a structure</Link>
             <Link href="/species/new" className="rounded-md bg-pine-600 px-3 py-1.5 text-sm font-medium text-white hover:bg-pine-700">Add a species</Link>
           </div>
         ) : null}
