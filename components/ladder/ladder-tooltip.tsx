@@ -4,6 +4,7 @@ import type { RouteStepResult } from '@/lib/thermo/route';
 import type { EnergyUnit } from './energy-format';
 import { stepFacts } from './ladder-describe';
 import type { RiserLayout } from './ladder-geometry';
+import { ChemText } from '@/components/chemistry/chem-text';
 
 const TIP_WIDTH = 260;
 
@@ -37,7 +38,7 @@ export function LadderTooltip({ id, riser, step, label, unit, containerWidth }: 
         {stepFacts(step, unit).map((f) => (
           <div key={f.term} className="contents">
             <dt className="text-ink-faint">{f.term}</dt>
-            <dd className={f.term === 'Equation' ? 'break-words font-mono text-[11px]' : 'tabular-nums'}>{f.value}</dd>
+            <dd className={f.term === 'Equation' ? 'break-words text-[11px]' : 'tabular-nums'}>{f.term === 'Equation' ? <ChemText text={f.value} /> : f.value}</dd>
           </div>
         ))}
       </dl>

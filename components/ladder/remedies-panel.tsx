@@ -12,6 +12,7 @@ import { groupRemedies, hasAnyRemedy, stepCautions } from './remedy-groups';
 import { remediesAsWritten, textAsWritten } from './remedy-names';
 import { stepSignUncertainText } from './ladder-uncertainty';
 import { ConditionsSection, CouplingSection, TemperatureSection, type Units } from './remedy-sections';
+import { ChemText } from '@/components/chemistry/chem-text';
 
 export const SAFETY_NOTE =
   'These are thermodynamic suggestions only. A change of temperature, pressure or coupling needs a process-safety review before use.';
@@ -54,7 +55,7 @@ function StepHeader({ step, label, unit }: { step: RouteStepResult; label: strin
         <h2 className="text-base font-semibold text-ink">{label}</h2>
         <ClassBadge cls={step.class} isSignUncertain={step.signUncertain} />
       </div>
-      {r ? <p className="break-words font-mono text-xs text-ink-soft">{textAsWritten(r.equation, r)}</p> : null}
+      {r ? <p className="break-words text-xs text-ink-soft"><ChemText text={textAsWritten(r.equation, r)} /></p> : null}
       {r ? (
         <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 text-xs">
           <dt className="text-ink-faint">{r.deltaG_kJ === null ? 'ΔG (standard state)' : 'ΔG at conditions'}</dt>

@@ -33,6 +33,7 @@ import { WorkflowBar } from './workflow-bar';
 import { AlternativesMenu } from './alternatives-menu';
 import type { Role } from '@/lib/auth/roles';
 import { useIsPhone } from '@/lib/hooks/use-media-query';
+import { FormulaText } from '@/components/chemistry/formula-text';
 
 const FIT_OPTIONS = { padding: 0.2, maxZoom: 1.25, duration: 200 };
 export { LINK_REFUSAL } from '@/lib/route-editor/link-rules';
@@ -134,7 +135,7 @@ export function RouteEditor({ routeId, canEdit, units, review }: { routeId: numb
         <div>
           <h1 className="text-xl font-semibold tracking-tight">{name}</h1>
           <p className="text-sm text-ink-soft">
-            Target <span className="font-mono">{target}</span>
+            Target <FormulaText value={target} />
             {canEdit ? null : <span className="ml-2 rounded bg-paper-deep px-1.5 py-0.5 text-xs">read-only</span>}
           </p>
           {review.archived ? null : (

@@ -12,6 +12,7 @@ import { AddSpecies } from './add-species';
 import { AmbiguousNameChoices } from './ambiguous-name-choices';
 import { BalanceCheck } from './balance-check';
 import { COMPACT_INPUT } from '@/components/ui/input-class';
+import { FormulaText } from '@/components/chemistry/formula-text';
 
 const INPUT = COMPACT_INPUT;
 const LABEL = 'text-xs font-medium text-ink';
@@ -184,8 +185,8 @@ function StepFormView({
             <div className="mt-1 flex flex-col gap-1.5">
               {conditions.map((row, i) => (
                 <div key={`${row.kind}:${row.species}`} className="grid grid-cols-[1fr_7rem] items-center gap-2">
-                  <label htmlFor={`${id}-cond-${i}`} className="truncate font-mono text-xs" title={row.species}>
-                    {row.kind === 'pressure' ? 'p' : 'c'} {row.species}
+                  <label htmlFor={`${id}-cond-${i}`} className="truncate text-xs" title={row.species}>
+                    {row.kind === 'pressure' ? 'p' : 'c'} <FormulaText value={row.species} />
                   </label>
                   <div className="flex items-center gap-1">
                     <input
