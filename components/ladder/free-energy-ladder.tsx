@@ -3,6 +3,8 @@
 // at conditions (solid) beside the standard state (dashed). Props in, callbacks out; no data fetching.
 import { useCallback, useId, useMemo, useRef, useState, type KeyboardEvent } from 'react';
 import type { RouteEvaluateResponse, RouteStepResult } from '@/lib/thermo/route';
+import type { StepLabel } from '@/lib/route-editor/step-label';
+import { totalsWaitReason } from '@/lib/route-editor/totals-wait';
 import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { formatEnergy, type EnergyUnit } from './energy-format';
@@ -11,6 +13,7 @@ import { ladderStepsCsv } from './ladder-csv';
 import { csvBlob, downloadBlob, exportFileName, serializeLadderSvg, svgBlob, svgToPngBlob } from './ladder-export';
 import { LadderAxes, LadderLegend, LadderNotes, LadderPatterns, LadderStepLabels, LadderZeroAndStart } from './ladder-frame';
 import { buildLadder, layoutLadder } from './ladder-geometry';
+import { ladderInRouteOrder } from './ladder-order';
 import { LADDER_COLOURS as C } from './ladder-palette';
 import { LadderStepMark } from './ladder-step-mark';
 import { LadderTooltip } from './ladder-tooltip';
@@ -24,6 +27,8 @@ export interface FreeEnergyLadderProps {
   selectedStepId: string | null;
   onSelectStep: (stepId: string) => void;
   stepLabels?: Record<string, string>;
+  /** the draft's step labels: risers follow its route order and numbers, and messages name steps by them */
+  routeLabels?: ReadonlyMap<string, StepLabel>;
   /** the basis of every energy in the response; the engine scales to the route's target amount */
   basisLabel?: string;
   /** file name stem for the exports */
@@ -41,6 +46,7 @@ export function FreeEnergyLadder({
   selectedStepId,
   onSelectStep,
   stepLabels,
+  routeLabels,
   basisLabel = 'per mol of target',
   exportName = 'free-energy-ladder',
   height = 340,
@@ -56,9 +62,12 @@ export function FreeEnergyLadder({
   const prefix = `ladder-${useId().replace(/[^a-zA-Z0-9_-]/g, '')}`;
   const tooltipId = `${prefix}-tip`;
 
-  const order = useMemo(() => evaluation?.order ?? [], [evaluation]);
-  const byId = useMemo(() => new Map<string, RouteStepResult>((evaluation?.steps ?? []).map((s) => [s.id, s])), [evaluation]);
-  const model = useMemo(() => buildLadder(order, evaluation?.steps ?? [], energyUnit), [order, evaluation, energyUnit]);
+  // The draft's route order and numbers, not the evaluation's: they agree with the nodes while an answer is on its way.
+  const routeNumbers = useMemo(() => (routeLabels ? new Map([...routeLabels].map(([id, l]) => [id, l.number])) : undefined), [routeLabels]);
+  const drawn = useMemo(() => ladderInRouteOrder(evaluation, routeNumbers), [evaluation, routeNumbers]);
+  const order = drawn.order;
+  const byId = useMemo(() => new Map<string, RouteStepResult>(drawn.steps.map((s) => [s.id, s])), [drawn]);
+  const model = useMemo(() => buildLadder(drawn.order, drawn.steps, energyUnit, drawn.slots), [drawn, energyUnit]);
   const labelOf = useCallback((id: string) => stepLabelOf(id, stepLabels), [stepLabels]);
   const totalSigma = totalSigmaText(evaluation?.overall, energyUnit, basisLabel);
   // Drawn into the chart (and so into its exports) as well as said near the total and in the <desc>.
@@ -139,13 +148,15 @@ export function FreeEnergyLadder({
   }
 
   const title = axisTitle(energyUnit, basisLabel);
+  const withheldReason = evaluation.totalsWithheld ? totalsWaitReason(evaluation.totalsWithheld, routeLabels ?? new Map()) : undefined;
+  const csvOptions = { slots: drawn.slots, withheldReason };
   return (
     <figure className="flex flex-col gap-2">
       <div className="flex flex-wrap items-center justify-between gap-2">
         {evaluation.totalsWithheld ? (
           // Each step has its own figures on the board; the route's sums wait until a step makes the target.
           <figcaption className="text-sm text-ink-soft" data-testid="ladder-totals-withheld">
-            <span className="font-semibold text-ink">Route totals wait for a complete route:</span> {evaluation.totalsWithheld.message.replace(/^target: /, '')}
+            <span className="font-semibold text-ink">Route totals wait for a complete route:</span> {withheldReason}
           </figcaption>
         ) : (
           <figcaption className="text-sm text-ink-soft">
@@ -170,7 +181,7 @@ export function FreeEnergyLadder({
           <Button variant="secondary" onClick={() => void handleExportPng()}>
             Export PNG
           </Button>
-          <Button variant="secondary" onClick={() => downloadBlob(csvBlob(ladderStepsCsv(evaluation, stepLabels)), exportFileName(exportName, 'csv'))} title="Steps with ΔG, σ and where each value came from">
+          <Button variant="secondary" onClick={() => downloadBlob(csvBlob(ladderStepsCsv({ ...evaluation, order: drawn.order, steps: drawn.steps }, stepLabels, csvOptions)), exportFileName(exportName, 'csv'))} title="Steps with ΔG, σ and where each value came from">
             Export CSV
           </Button>
         </div>

@@ -22,7 +22,14 @@ export const LADDER_CSV_COLUMNS = [
 
 const round = (v: number | null | undefined, places = 3): CsvCell => (v === null || v === undefined || !Number.isFinite(v) ? '' : Number(v.toFixed(places)));
 
-export function ladderStepsCsv(evaluation: RouteEvaluateResponse, stepLabels: Readonly<Record<string, string>> = {}): string {
+export interface LadderCsvOptions {
+  /** each step's number as the board shows it (else its place in the evaluation's order) */
+  slots?: ReadonlyMap<string, number>;
+  /** why the totals wait, in words with step labels (else the engine's message) */
+  withheldReason?: string;
+}
+
+export function ladderStepsCsv(evaluation: RouteEvaluateResponse, stepLabels: Readonly<Record<string, string>> = {}, options: LadderCsvOptions = {}): string {
   const rows: CsvCell[][] = [[...LADDER_CSV_COLUMNS]];
   const byId = new Map(evaluation.steps.map((s) => [s.id, s]));
   evaluation.order.forEach((id, index) => {
@@ -30,7 +37,7 @@ export function ladderStepsCsv(evaluation: RouteEvaluateResponse, stepLabels: Re
     if (!s) return;
     const r = s.result;
     rows.push([
-      index + 1,
+      options.slots?.get(id) ?? index + 1,
       s.id,
       stepLabels[s.id] ?? '',
       r?.equation ?? '',
@@ -45,7 +52,7 @@ export function ladderStepsCsv(evaluation: RouteEvaluateResponse, stepLabels: Re
     ]);
   });
   if (evaluation.totalsWithheld) {
-    rows.push(['total', '', '', '', '', `withheld: ${evaluation.totalsWithheld.message}`, ...Array<CsvCell>(LADDER_CSV_COLUMNS.length - 6).fill('')]);
+    rows.push(['total', '', '', '', '', `withheld: ${options.withheldReason ?? evaluation.totalsWithheld.message}`, ...Array<CsvCell>(LADDER_CSV_COLUMNS.length - 6).fill('')]);
     return writeCsv(rows);
   }
   const o = evaluation.overall;

@@ -51,8 +51,8 @@ const DOMAIN_PAD = 0.08;
 // Pixel values to 0.01 px: stable SVG text and tests, invisible on screen.
 const round = (v: number): number => Math.round(v * 100) / 100;
 
-/** Steps in `order`; a step the response does not hold is drawn as an error gap. */
-export function buildLadder(order: readonly string[], steps: readonly LadderStepInput[], unit: EnergyUnit): LadderModel {
+/** Steps in `order`; a step the response does not hold is drawn as an error gap. `slots` numbers them as the board does. */
+export function buildLadder(order: readonly string[], steps: readonly LadderStepInput[], unit: EnergyUnit, slots?: ReadonlyMap<string, number>): LadderModel {
   const byId = new Map(steps.map((s) => [s.id, s]));
   let level = 0;
   let level0 = 0;
@@ -68,7 +68,7 @@ export function buildLadder(order: readonly string[], steps: readonly LadderStep
     }
     const sigma = s?.result?.uncertainty.deltaG0_kJ ?? null;
     return {
-      id, slot: i + 1, cls: s?.class ?? 'error', gap, from, to: level, from0, to0: level0,
+      id, slot: slots?.get(id) ?? i + 1, cls: s?.class ?? 'error', gap, from, to: level, from0, to0: level0,
       estimated: stepEstimates(s?.result) !== null,
       signUncertain: s?.signUncertain === true && gap !== 'error',
       sigma_kJ: sigma !== null && Number.isFinite(sigma) ? sigma : null,

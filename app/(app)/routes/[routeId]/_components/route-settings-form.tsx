@@ -8,6 +8,7 @@ import { energyFromKJ, energyToKJ, type EnergyUnit } from '@/components/ladder/e
 import { RouteMeta } from '@/lib/schemas/route';
 import type { RouteMetaPatch } from '@/stores/route-editor-store';
 import { COMPACT_INPUT } from '@/components/ui/input-class';
+import type { TotalsWaitField } from '@/lib/route-editor/totals-wait';
 
 type Meta = Required<RouteMetaPatch>;
 
@@ -30,7 +31,22 @@ const toValues = (meta: Meta, unit: EnergyUnit): SettingsInput => ({
   threshold: Number(energyFromKJ(meta.marginalThreshold_kJ, unit).toFixed(3)),
 });
 
-export function RouteSettingsForm({ meta, energyUnit, canEdit, onChange }: { meta: Meta; energyUnit: EnergyUnit; canEdit: boolean; onChange: (patch: RouteMetaPatch, field: string) => void }) {
+/** Why the route totals wait, when the reason is the target or its amount (lib/route-editor/totals-wait.ts). */
+export type SettingsEngineProblems = Partial<Record<TotalsWaitField, string>>;
+
+export function RouteSettingsForm({
+  meta,
+  energyUnit,
+  canEdit,
+  onChange,
+  engineProblems = {},
+}: {
+  meta: Meta;
+  energyUnit: EnergyUnit;
+  canEdit: boolean;
+  onChange: (patch: RouteMetaPatch, field: string) => void;
+  engineProblems?: SettingsEngineProblems;
+}) {
   const id = useId();
   const { register, watch, reset, setError, clearErrors, formState } = useForm<SettingsInput, unknown, SettingsValues>({
     resolver: zodResolver(SettingsSchema),
@@ -78,15 +94,29 @@ export function RouteSettingsForm({ meta, energyUnit, canEdit, onChange }: { met
   }, [watch, canEdit, energyUnit, onChange, setError, clearErrors]);
 
   const errors = formState.errors;
-  const field = (name: 'name' | 'target' | 'targetAmount', label: string, extra = '') => (
-    <div className="flex flex-col gap-1">
-      <label htmlFor={`${id}-${name}`} className="text-xs font-medium">
-        {label}
-      </label>
-      <input id={`${id}-${name}`} className={`${INPUT} ${extra}`} aria-invalid={errors[name] ? true : undefined} {...register(name)} />
-      {errors[name] ? <p className="text-xs text-uphill">{errors[name]?.message}</p> : null}
-    </div>
-  );
+  const field = (name: 'name' | 'target' | 'targetAmount', label: string, extra = '') => {
+    // The form's own check first; else the engine's reason the totals wait, when it belongs to this field.
+    const message = errors[name]?.message ?? (name === 'name' ? undefined : engineProblems[name]);
+    return (
+      <div className="flex flex-col gap-1">
+        <label htmlFor={`${id}-${name}`} className="text-xs font-medium">
+          {label}
+        </label>
+        <input
+          id={`${id}-${name}`}
+          className={`${INPUT} ${extra}`}
+          aria-invalid={message ? true : undefined}
+          aria-describedby={message ? `${id}-${name}-error` : undefined}
+          {...register(name)}
+        />
+        {message ? (
+          <p id={`${id}-${name}-error`} className="break-words text-xs text-uphill" data-testid={`settings-${name}-error`}>
+            {message}
+          </p>
+        ) : null}
+      </div>
+    );
+  };
 
   return (
     <form onSubmit={(e) => e.preventDefault()} aria-label="Route settings" noValidate>

@@ -6,6 +6,8 @@ import { formatEnergy, type EnergyUnit, type TemperatureUnit } from '@/component
 import { Button } from '@/components/ui/button';
 import type { FormUnits } from '@/lib/route-editor/step-form';
 import { stepFieldErrors, temperatureRangeNote } from '@/lib/route-editor/step-errors';
+import { stepLabels as buildStepLabels, type StepLabel } from '@/lib/route-editor/step-label';
+import { totalsWaitField, totalsWaitFieldMessage, totalsWaitReason } from '@/lib/route-editor/totals-wait';
 import type { PressureUnit } from '@/lib/schemas/preferences';
 import type { StepInput } from '@/lib/schemas/route';
 import type { RouteEvaluateResponse, RouteStepResult } from '@/lib/thermo/route';
@@ -22,7 +24,7 @@ export interface PanelUnits {
   pressureUnit: PressureUnit;
 }
 
-function RouteOverview({ evaluation, energyUnit }: { evaluation: RouteEvaluateResponse | undefined; energyUnit: EnergyUnit }) {
+function RouteOverview({ evaluation, energyUnit, labels }: { evaluation: RouteEvaluateResponse | undefined; energyUnit: EnergyUnit; labels: ReadonlyMap<string, StepLabel> }) {
   if (!evaluation) return null;
   const o = evaluation.overall;
   // Each step is evaluated on its own; the totals wait until the route is complete, and say why in words.
@@ -31,7 +33,7 @@ function RouteOverview({ evaluation, energyUnit }: { evaluation: RouteEvaluateRe
       <div className="rounded-md bg-paper px-2 py-1.5 text-xs" data-testid="route-totals-withheld">
         <p className="font-medium text-ink">Route totals wait for a complete route.</p>
         <p className="text-ink-soft">
-          {evaluation.totalsWithheld.message.replace(/^target: /, 'Target: ')}
+          {totalsWaitReason(evaluation.totalsWithheld, labels)}
           {evaluation.totalsWithheld.hint ? ` (${evaluation.totalsWithheld.hint})` : ''}
         </p>
       </div>
@@ -73,6 +75,15 @@ export function SidePanel({
   const stepKeys = useRouteEditorStore(useShallow((s) => s.doc.steps.map((x) => `${x.id}\u0000${x.equation}`)));
   const others = useMemo(() => stepKeys.map((k) => ({ id: k.split('\u0000')[0]!, equation: k.split('\u0000')[1] ?? '' })), [stepKeys]);
   const links = useRouteEditorStore((s) => s.doc.links);
+  // Full labels for engine messages that name steps by id (a loop of links, several final steps).
+  const fullLabels = useMemo(() => buildStepLabels(others, links), [others, links]);
+  const withheld = evaluation?.totalsWithheld;
+  const withheldField = totalsWaitField(withheld);
+  // A totals problem that belongs to the target or its amount is also said at that field.
+  const settingsProblems = useMemo(
+    () => (withheld && withheldField ? { [withheldField]: totalsWaitFieldMessage(withheld, fullLabels) } : {}),
+    [withheld, withheldField, fullLabels],
+  );
   const meta = useRouteEditorStore(
     useShallow((s) => ({ name: s.doc.name, target: s.doc.target, targetAmount: s.doc.targetAmount, marginalThreshold_kJ: s.doc.marginalThreshold_kJ })),
   );
@@ -98,8 +109,8 @@ export function SidePanel({
     return (
       <aside aria-label="Route settings" className="flex flex-col gap-3">
         <h2 className="text-sm font-semibold">Route</h2>
-        <RouteOverview evaluation={evaluation} energyUnit={units.energyUnit} />
-        <RouteSettingsForm meta={meta} energyUnit={units.energyUnit} canEdit={canEdit} onChange={handleMetaChange} />
+        <RouteOverview evaluation={evaluation} energyUnit={units.energyUnit} labels={fullLabels} />
+        <RouteSettingsForm meta={meta} energyUnit={units.energyUnit} canEdit={canEdit} onChange={handleMetaChange} engineProblems={settingsProblems} />
         <p className="text-xs text-ink-faint">Select a step on the board or the ladder to edit it.</p>
       </aside>
     );
