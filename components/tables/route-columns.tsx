@@ -5,7 +5,7 @@ import Link from 'next/link';
 import type { ListRoutesQuery } from '@/lib/schemas/route';
 import { ROUTE_STATUS_LABELS, type RouteStatus } from '@/lib/schemas/workflow';
 import type { RouteSummaryDto } from '@/lib/services/routes/route-dto';
-import { formatEnergy, type EnergyUnit } from '../ladder/energy-format';
+import { energyUnitLabel, formatEnergyValue, type EnergyUnit } from '../ladder/energy-format';
 import { Button } from '../ui/button';
 import type { CardLayout } from './row-cards';
 import { When } from '@/components/ui/when';
@@ -119,13 +119,17 @@ export function routeColumns({
     { id: 'steps', header: 'Steps', cell: ({ row }) => row.original.stepCount },
     {
       id: 'overallDeltaG',
-      header: () => <span title="Overall free-energy change per mol of target, at each step's conditions">Overall ΔG</span>,
+      // The unit is stated once, in the header; cells hold the bare number (screen readers still hear the unit).
+      header: () => <span title="Overall free-energy change per mol of target, at each step's conditions">Overall ΔG ({energyUnitLabel(energyUnit)}/mol)</span>,
       // No total is saved while a step fails or the route is incomplete: say so rather than show a number.
       cell: ({ row }) =>
         row.original.overallDeltaG_kJ === null ? (
           <span className="text-ink-faint">{row.original.stepCount === 0 ? 'no steps' : 'not evaluated'}</span>
         ) : (
-          formatEnergy(row.original.overallDeltaG_kJ, energyUnit, { perMol: true })
+          <span className="relative tabular-nums">
+            {formatEnergyValue(row.original.overallDeltaG_kJ, energyUnit)}
+            <span className="sr-only"> {energyUnitLabel(energyUnit)}/mol</span>
+          </span>
         ),
     },
     { id: 'uphillSteps', header: 'Uphill steps', cell: ({ row }) => <UphillCell count={row.original.uphillSteps} /> },

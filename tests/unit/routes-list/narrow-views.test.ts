@@ -35,7 +35,9 @@ describe('routes as cards on a phone', () => {
     expect(html).toContain('<ul aria-label="Routes of your team"');
     expect(html).toMatch(/aria-label="Select Methanol, Line 3 option A to compare"[\s\S]*href="\/routes\/7"/);
     for (const label of ['Target', 'Status', 'Steps', 'Uphill steps', 'Last edited']) expect(html).toContain(`<dt class="text-xs text-ink-faint">${label}</dt>`);
-    expect(html).toContain('Overall ΔG');
+    // One unit for route totals, stated once: in the label; the value is the bare number with the true minus.
+    expect(html).toContain('<dt class="text-xs text-ink-faint"><span title="Overall free-energy change per mol of target, at each step&#x27;s conditions">Overall ΔG (kJ/mol)</span></dt>');
+    expect(html).toMatch(/<dd[^>]*><span class="relative tabular-nums">\u221220\.0<span class="sr-only"> kJ\/mol<\/span><\/span><\/dd>/);
     // The actions close the card, after the facts.
     expect(html.indexOf('<dl')).toBeLessThan(html.indexOf('aria-label="Delete Methanol, Line 3 option A"'));
     // The tick and the actions are not repeated as facts.
@@ -60,7 +62,7 @@ describe('the routes table sorts by its headers', () => {
     );
     const headers = html.match(/<th[\s\S]*?<\/th>/g) ?? [];
     const buttons = headers.filter((h) => h.includes('<button')).map((h) => h.replace(/<[^>]+>/g, '').replace(/[▲▼↕]/g, ''));
-    expect(buttons).toEqual(['Name', 'Target', 'Steps', 'Overall ΔG', 'Uphill steps', 'Last edited']);
+    expect(buttons).toEqual(['Name', 'Target', 'Steps', 'Overall ΔG (kJ/mol)', 'Uphill steps', 'Last edited']);
     expect(headers.find((h) => h.includes('Last edited'))).toContain('aria-sort="descending"');
   });
 });
