@@ -9,6 +9,7 @@ export function Dialog({
   onClose,
   children,
   dismissable = true,
+  wide = false,
 }: {
   open: boolean;
   title: string;
@@ -16,6 +17,8 @@ export function Dialog({
   children: ReactNode;
   /** false for choices that must be made (Escape does nothing) */
   dismissable?: boolean;
+  /** for a whole flow rather than a question: wider, and scrolls within the window */
+  wide?: boolean;
 }) {
   const ref = useRef<HTMLDialogElement>(null);
   const titleId = useId();
@@ -35,7 +38,7 @@ export function Dialog({
         event.preventDefault();
         if (dismissable) onClose();
       }}
-      className="m-auto w-full max-w-md rounded-lg border border-paper-edge bg-white p-0 text-ink shadow-xl backdrop:bg-ink/30"
+      className={`m-auto w-full ${wide ? 'max-h-[90vh] max-w-4xl overflow-y-auto' : 'max-w-md'} rounded-lg border border-paper-edge bg-white p-0 text-ink shadow-xl backdrop:bg-ink/30`}
     >
       {open ? (
         <div className="flex flex-col gap-3 p-5">

@@ -10,6 +10,7 @@ import type { RouteDocumentDto } from '@/lib/services/routes/route-dto';
 import { RouteEditorStoreProvider } from '@/stores/route-editor-store';
 import { ArchivedNotice } from './_components/archived-notice';
 import { RouteEditor } from './_components/route-editor';
+import { NewSpeciesDialogProvider } from './_components/new-species-dialog';
 
 export function RouteEditorClient({ initialRoute, role, teamId, selfId }: { initialRoute: RouteDocumentDto; role: Role; teamId: number; selfId: number }) {
   const { data: profile } = useProfile();
@@ -24,7 +25,10 @@ export function RouteEditorClient({ initialRoute, role, teamId, selfId }: { init
     <div className="flex flex-col gap-3">
       {route.archived ? <ArchivedNotice routeId={route.id} canUnarchive={mayEdit} /> : null}
       <RouteEditorStoreProvider key={editorKey} initialDoc={draftOf(route)} initialVersion={route.version}>
-        <RouteEditor routeId={route.id} canEdit={mayEdit && !route.archived} units={preferences} review={{ teamId, selfId, role, status: route.status, archived: route.archived }} />
+        {/* On the board, "New species from a structure" opens over it (new-species-dialog.tsx) instead of leaving it. */}
+        <NewSpeciesDialogProvider>
+          <RouteEditor routeId={route.id} canEdit={mayEdit && !route.archived} units={preferences} review={{ teamId, selfId, role, status: route.status, archived: route.archived }} />
+        </NewSpeciesDialogProvider>
       </RouteEditorStoreProvider>
     </div>
   );

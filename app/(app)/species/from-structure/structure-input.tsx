@@ -27,8 +27,10 @@ export function structureErrorText(error: unknown): string | null {
   return `${field ?? error.message}${list ? ` Not covered: ${list}.` : ''}`;
 }
 
-export function StructureInput({ initialSmiles, initialPhase, isPending, error, onSubmit }: {
+export function StructureInput({ initialSmiles, initialPhase, isPending, error, onSubmit, autoFocus = false }: {
   initialSmiles: string; initialPhase: Phase; isPending: boolean; error: string | null; onSubmit: (request: StructureRequest) => void;
+  /** in a dialog: the SMILES field takes the focus once the flow has loaded */
+  autoFocus?: boolean;
 }) {
   const fileId = useId();
   const [mode, setMode] = useState<Mode>('smiles');
@@ -73,6 +75,7 @@ export function StructureInput({ initialSmiles, initialPhase, isPending, error, 
           placeholder="CC(C)(C)OC(=O)NC(C)(C)CO"
           spellCheck={false}
           autoComplete="off"
+          autoFocus={autoFocus}
           hint="One molecule, up to 150 heavy atoms. Copy it from your drawing program or notebook."
           error={shown}
         />
@@ -83,7 +86,7 @@ export function StructureInput({ initialSmiles, initialPhase, isPending, error, 
             rows={8}
             value={molfile}
             onChange={(e) => setMolfile(e.target.value)}
-              spellCheck={false}
+            spellCheck={false}
             hint="Paste the whole file, down to its “M  END” line. Hydrogens drawn as atoms are fine."
             error={shown}
           />
