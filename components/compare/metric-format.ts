@@ -1,6 +1,6 @@
 // How each row of the comparison table reads, and the number it sorts by.
 import type { MetricKey, RouteMetrics } from '@/lib/compare/compare-types';
-import { formatEnergy, formatTemperature, type EnergyUnit, type TemperatureUnit } from '@/lib/format/units';
+import { energyUnitLabel, formatEnergyValue, formatTemperature, type EnergyUnit, type TemperatureUnit } from '@/lib/format/units';
 import { formatWhen } from '../ui/when';
 import { ROUTE_STATUS_LABELS, type RouteStatus } from '@/lib/schemas/workflow';
 
@@ -12,11 +12,17 @@ export interface MetricUnits {
 const ENERGY_KEYS = new Set<MetricKey>(['overallDeltaG_kJ', 'overallDeltaG0_kJ', 'largestUphill_kJ', 'smallestDrivingForce_kJ']);
 const COUNT_KEYS = new Set<MetricKey>(['stepCount', 'uphillSteps', 'marginalSteps', 'estimatedSteps', 'openFlags', 'unresolvedComments']);
 
+/** The unit of a row's values, stated once beside its name ("kJ/mol"); null for rows whose cells carry their own. */
+export function metricUnit(key: MetricKey, units: MetricUnits): string | null {
+  return ENERGY_KEYS.has(key) ? `${energyUnitLabel(units.energyUnit)}/mol` : null;
+}
+
+/** A cell's text: energies as bare numbers with the true minus (the unit is in the row's name), the rest in words. */
 export function metricText(key: MetricKey, m: RouteMetrics, units: MetricUnits): string {
   if (ENERGY_KEYS.has(key)) {
     const v = m[key as 'overallDeltaG_kJ'];
     if (key === 'largestUphill_kJ' && v === null) return 'no uphill step';
-    return formatEnergy(v, units.energyUnit);
+    return formatEnergyValue(v, units.energyUnit);
   }
   if (COUNT_KEYS.has(key)) {
     // A decision recorded before a row existed has no value for it: '—', as for a route the engine refused.

@@ -3,21 +3,23 @@
 import { flexRender, type Table } from '@tanstack/react-table';
 import type { MetricRow } from '@/lib/compare/metric-rows';
 
-/** A metric's name with its basis beneath, for the first column of a metrics table. */
-export function MetricLabel({ row }: { row: MetricRow }) {
+/** A metric's name (with its unit, stated once for the row) and its basis beneath, for the first column of a metrics table. */
+export function MetricLabel({ row, unit }: { row: MetricRow; unit?: string | null }) {
   return (
     <span>
-      <span className="font-medium">{row.label}</span>
+      <span className="font-medium">{unit ? `${row.label} (${unit})` : row.label}</span>
       {row.basis ? <span className="block text-xs text-ink-faint">{row.basis}</span> : null}
     </span>
   );
 }
 
-/** One route's value of a metric; the best is marked in words as well as tint. */
-export function MetricValue({ text, isBest }: { text: string; isBest: boolean }) {
+/** One route's value of a metric; the best is marked in words as well as tint. A screen reader hears the unit with the number. */
+export function MetricValue({ text, isBest, unit }: { text: string; isBest: boolean; unit?: string | null }) {
+  const hasNumber = unit && /\d/.test(text);
   return (
-    <span className={isBest ? 'font-semibold text-downhill' : ''}>
+    <span className={`relative ${isBest ? 'font-semibold text-downhill' : ''}`}>
       {text}
+      {hasNumber ? <span className="sr-only"> {unit}</span> : null}
       {isBest ? <span className="ml-1 rounded bg-downhill-bg px-1 text-[11px]">best</span> : null}
     </span>
   );

@@ -4,7 +4,7 @@ import { createColumnHelper, getCoreRowModel, useReactTable } from '@tanstack/re
 import { useMemo, useState } from 'react';
 import type { ComparedRoute, Comparison, MetricKey } from '@/lib/compare/compare-types';
 import { METRIC_ROWS, type MetricRow } from '@/lib/compare/metric-rows';
-import { metricSortValue, metricText, type MetricUnits } from './metric-format';
+import { metricSortValue, metricText, metricUnit, type MetricUnits } from './metric-format';
 import { MetricGrid, MetricLabel, MetricValue } from './metric-grid';
 
 type SortState = { key: MetricKey; dir: 'asc' | 'desc' } | null;
@@ -40,7 +40,7 @@ export function MetricsTable({ comparison, units, visible, caption }: { comparis
           const next: SortState = !active ? { key: r.key, dir: 'asc' } : sort.dir === 'asc' ? { key: r.key, dir: 'desc' } : null;
           return (
             <div className="flex items-start justify-between gap-2">
-              <MetricLabel row={r} />
+              <MetricLabel row={r} unit={metricUnit(r.key, units)} />
               <button
                 type="button"
                 className="shrink-0 rounded border border-paper-edge px-1 text-xs text-ink-soft hover:bg-paper-deep print:hidden"
@@ -60,7 +60,7 @@ export function MetricsTable({ comparison, units, visible, caption }: { comparis
           cell: ({ row }) => {
             const key = row.original.key;
             const isBest = row.original.best !== 'none' && (comparison.best[key] ?? []).includes(route.id);
-            return <MetricValue text={metricText(key, route.metrics, units)} isBest={isBest} />;
+            return <MetricValue text={metricText(key, route.metrics, units)} isBest={isBest} unit={metricUnit(key, units)} />;
           },
         }),
       ),

@@ -76,9 +76,12 @@ describe('the decision log table', () => {
 describe('one decision', () => {
   it('puts every metric row of the snapshot in a table, with best values marked in words', () => {
     const html = renderToStaticMarkup(createElement(SnapshotMetrics, { snapshot: DETAIL.snapshot, units, chosenRouteId: 21 }));
-    for (const row of METRIC_ROWS) expect(html).toContain(`<span class="font-medium">${row.label.replace(/'/g, '&#x27;')}</span>`);
+    // Energy rows state their unit once, beside the name; their cells hold the bare number (the unit for screen readers).
+    const withUnit = (label: string, key: string) => (key.endsWith('_kJ') ? `${label} (kJ/mol)` : label);
+    for (const row of METRIC_ROWS) expect(html).toContain(`<span class="font-medium">${withUnit(row.label, row.key).replace(/'/g, '&#x27;')}</span>`);
     expect(html.match(/>best<\/span>/g)).toHaveLength(2);
-    expect(html).toContain('−90.0 kJ');
+    expect(html).toContain('−90.0<span class="sr-only"> kJ/mol</span>');
+    expect(html).not.toContain('−90.0 kJ');
     expect(html).toContain('Hydrogen burn');
     expect(html).toContain('>chosen</span>');
   });

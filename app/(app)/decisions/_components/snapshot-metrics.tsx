@@ -2,7 +2,7 @@
 
 import { createColumnHelper, getCoreRowModel, useReactTable } from '@tanstack/react-table';
 import { useMemo } from 'react';
-import { metricText, type MetricUnits } from '@/components/compare/metric-format';
+import { metricText, metricUnit, type MetricUnits } from '@/components/compare/metric-format';
 import { MetricGrid, MetricLabel, MetricValue } from '@/components/compare/metric-grid';
 import { formatTemperatureChange, type TemperatureUnit } from '@/components/ladder/energy-format';
 import type { ComparisonSnapshot } from '@/lib/compare/compare-types';
@@ -27,7 +27,7 @@ export function SnapshotMetrics({ snapshot, units, chosenRouteId }: { snapshot: 
       helper.display({
         id: 'metric',
         header: () => 'Metric',
-        cell: ({ row }) => <MetricLabel row={row.original} />,
+        cell: ({ row }) => <MetricLabel row={row.original} unit={metricUnit(row.original.key, units)} />,
       }),
       ...snapshot.routes.map((route) =>
         helper.display({
@@ -41,7 +41,7 @@ export function SnapshotMetrics({ snapshot, units, chosenRouteId }: { snapshot: 
           cell: ({ row }) => {
             const { key, best } = row.original;
             const isBest = best !== 'none' && (snapshot.best[key] ?? []).includes(route.id);
-            return <MetricValue text={metricText(key, route.metrics, units)} isBest={isBest} />;
+            return <MetricValue text={metricText(key, route.metrics, units)} isBest={isBest} unit={metricUnit(key, units)} />;
           },
         }),
       ),
