@@ -128,6 +128,12 @@ for (const width of [390, 768] as const) {
       await expect(menu).toHaveAttribute('aria-expanded', 'false');
       await expect(page.getByRole('link', { name: /values, plot and routes/ }).first()).toBeVisible();
       await expectNoSidewaysScroll(page, 'the species list');
+
+      // Team: the members table scrolls inside its own region; the invitations and roles stack under it.
+      await page.goto('/team');
+      await expect(page.getByRole('table', { name: 'Members' }).getByRole('row').nth(1)).toBeVisible();
+      await expect(page.getByRole('heading', { name: 'Invite someone' })).toBeVisible();
+      await expectNoSidewaysScroll(page, 'the team page');
     });
   });
 }

@@ -71,7 +71,7 @@ export function InvitationsPanel({ teamId }: { teamId: number }) {
         {invitations.data?.map((inv) => (
           <li key={inv.id} className="flex items-center justify-between gap-2 py-1.5">
             <span className="min-w-0">
-              <span className="block truncate">{inv.email}</span>
+              <span className="block break-all">{inv.email}</span>
               <span className="text-xs text-ink-faint">{ROLE_LABELS[inv.role]} · {STATUS_LABEL[inv.status]}</span>
             </span>
             {inv.status === 'pending' ? (

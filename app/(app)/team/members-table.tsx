@@ -4,6 +4,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
+import { ScrollRegion } from '@/components/tables/scroll-region';
 import { ROLE_LABELS, ROLES, type Role } from '@/lib/auth/roles';
 import { apiFetch, ApiError } from '@/lib/queries/api-fetch';
 import { membersQuery, teamKeys } from '@/lib/queries/team';
@@ -32,56 +33,60 @@ export function MembersTable({ teamId, canManage, selfId }: { teamId: number; ca
   return (
     <div className="flex flex-col gap-2">
       {message ? <Notice tone="error">{message}</Notice> : null}
-      <table className="w-full overflow-hidden rounded-lg border border-paper-edge bg-white text-sm">
-        <thead className="bg-paper-deep text-left text-xs uppercase tracking-wide text-ink-faint">
-          <tr>
-            <th scope="col" className="px-3 py-2">Name</th>
-            <th scope="col" className="px-3 py-2">E-mail</th>
-            <th scope="col" className="px-3 py-2">Role</th>
-            {canManage ? <th scope="col" className="px-3 py-2"><span className="sr-only">Actions</span></th> : null}
-          </tr>
-        </thead>
-        <tbody>
-          {members.data.map((m) => (
-            <tr key={m.userId} className="border-t border-paper-edge">
-              <td className="px-3 py-2 font-medium">{m.name}{m.userId === selfId ? <span className="ml-1 text-xs text-ink-faint">(you)</span> : null}</td>
-              <td className="px-3 py-2 text-ink-soft">{m.email}</td>
-              <td className="px-3 py-2">
-                {canManage ? (
-                  <select
-                    aria-label={`Role of ${m.name}`}
-                    value={m.role}
-                    onChange={(e) => {
-                      setMessage(null);
-                      changeRole.mutate({ userId: m.userId, role: e.target.value as Role });
-                    }}
-                    className="rounded border border-paper-edge bg-white px-1.5 py-0.5"
-                  >
-                    {ROLES.map((r) => (
-                      <option key={r} value={r}>{ROLE_LABELS[r]}</option>
-                    ))}
-                  </select>
-                ) : (
-                  ROLE_LABELS[m.role]
-                )}
-              </td>
-              {canManage ? (
-                <td className="px-3 py-2 text-right">
-                  <Button
-                    variant="danger"
-                    onClick={() => {
-                      setMessage(null);
-                      if (window.confirm(`Remove ${m.name} from the team?`)) remove.mutate(m.userId);
-                    }}
-                  >
-                    Remove
-                  </Button>
-                </td>
-              ) : null}
+      {/* A phone scrolls the table inside its own region, never the page. */}
+      <ScrollRegion label="Members" className="rounded-lg border border-paper-edge bg-white">
+        <table className="w-full text-sm">
+          <caption className="sr-only">Members</caption>
+          <thead className="bg-paper-deep text-left text-xs uppercase tracking-wide text-ink-faint">
+            <tr>
+              <th scope="col" className="px-3 py-2">Name</th>
+              <th scope="col" className="px-3 py-2">E-mail</th>
+              <th scope="col" className="px-3 py-2">Role</th>
+              {canManage ? <th scope="col" className="px-3 py-2"><span className="sr-only">Actions</span></th> : null}
             </tr>
-          ))}
-        </tbody>
-      </table>
+          </thead>
+          <tbody>
+            {members.data.map((m) => (
+              <tr key={m.userId} className="border-t border-paper-edge">
+                <td className="px-3 py-2 font-medium">{m.name}{m.userId === selfId ? <span className="ml-1 text-xs text-ink-faint">(you)</span> : null}</td>
+                <td className="break-all px-3 py-2 text-ink-soft">{m.email}</td>
+                <td className="px-3 py-2">
+                  {canManage ? (
+                    <select
+                      aria-label={`Role of ${m.name}`}
+                      value={m.role}
+                      onChange={(e) => {
+                        setMessage(null);
+                        changeRole.mutate({ userId: m.userId, role: e.target.value as Role });
+                      }}
+                      className="rounded border border-paper-edge bg-white px-1.5 py-0.5"
+                    >
+                      {ROLES.map((r) => (
+                        <option key={r} value={r}>{ROLE_LABELS[r]}</option>
+                      ))}
+                    </select>
+                  ) : (
+                    ROLE_LABELS[m.role]
+                  )}
+                </td>
+                {canManage ? (
+                  <td className="px-3 py-2 text-right">
+                    <Button
+                      variant="danger"
+                      onClick={() => {
+                        setMessage(null);
+                        if (window.confirm(`Remove ${m.name} from the team?`)) remove.mutate(m.userId);
+                      }}
+                    >
+                      Remove
+                    </Button>
+                  </td>
+                ) : null}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </ScrollRegion>
     </div>
   );
 }

@@ -12,14 +12,15 @@ export function TeamClient() {
   if (!profile || !membership) return <p className="text-sm text-ink-soft">Loading team…</p>;
   const isLead = can(membership.role, 'team.manage');
   return (
-    <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
-      <section aria-labelledby="members-heading">
+    // minmax(0, …) tracks: a grid item's min-content (the members table) must not widen the page on a phone.
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
+      <section aria-labelledby="members-heading" className="min-w-0">
         <h2 id="members-heading" className="mb-2 text-sm font-semibold uppercase tracking-wide text-ink-faint">
           Members of {membership.teamName}
         </h2>
         <MembersTable teamId={membership.teamId} canManage={isLead} selfId={profile.user.id} />
       </section>
-      <aside className="flex flex-col gap-6">
+      <aside className="flex min-w-0 flex-col gap-6">
         {isLead ? <InvitationsPanel teamId={membership.teamId} /> : null}
         <section className="rounded-lg border border-paper-edge bg-white p-4 text-sm">
           <h2 className="font-semibold">Roles</h2>
