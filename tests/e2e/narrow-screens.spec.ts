@@ -134,6 +134,18 @@ for (const width of [390, 768] as const) {
       await expect(page.getByRole('table', { name: 'Members' }).getByRole('row').nth(1)).toBeVisible();
       await expect(page.getByRole('heading', { name: 'Invite someone' })).toBeVisible();
       await expectNoSidewaysScroll(page, 'the team page');
+
+      // Pages with wide tables or long unbroken strings (checksums, SMILES, InChIKeys): each fits as it first opens.
+      for (const [path, title] of [
+        ['/settings', 'Settings'],
+        ['/fits', 'Data fits'],
+        ['/species/import', 'Import species from CSV'],
+        ['/species/from-structure', 'New species from a structure'],
+      ] as const) {
+        await page.goto(path);
+        await expect(page.getByRole('heading', { level: 1, name: title })).toBeVisible();
+        await expectNoSidewaysScroll(page, `the page ${path}`);
+      }
     });
   });
 }

@@ -50,8 +50,9 @@ export function FitsClient() {
   const isEmpty = sets.data.length === 0 && fits.data.length === 0;
 
   return (
-    <div className="grid gap-6 lg:grid-cols-[16rem_1fr]">
-      <nav aria-label="Data sets and fits" className="flex flex-col gap-3">
+    // minmax(0, …) tracks: wide content (a table, the plot) scrolls or shrinks inside its column, never the page.
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[16rem_minmax(0,1fr)]">
+      <nav aria-label="Data sets and fits" className="flex min-w-0 flex-col gap-3">
         {canEdit ? <Button onClick={() => setSelected({ kind: 'new' })}>New data set</Button> : null}
         <div>
           <h2 className="mb-1 text-xs font-semibold uppercase text-ink-soft">Data sets</h2>

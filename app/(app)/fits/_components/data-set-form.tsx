@@ -15,6 +15,7 @@ import { apiFetch } from '@/lib/queries/api-fetch';
 import { fitKeys } from '@/lib/queries/fits';
 import { DataSetForm, MAX_DATA_TEXT_BYTES } from '@/lib/schemas/fit-data';
 import type { DataSetDto } from '@/lib/services/fits/fit-dto';
+import { ScrollRegion } from '@/components/tables/scroll-region';
 
 const SOURCES = [
   { value: 'csv', label: 'Upload CSV' },
@@ -123,28 +124,30 @@ export function DataSetFormView({ onCreated }: { onCreated(set: DataSetDto): voi
       {source === 'paste' ? <textarea aria-label="Pasted table" rows={8} className={COMPACT_INPUT} placeholder={'T,K\n300,0.18\n320,0.75'} {...form.register('text')} /> : null}
       {source !== 'grid' && errors.text?.message ? <p className="text-sm text-uphill">{errors.text.message}</p> : null}
       {source === 'grid' ? (
-        <table className="text-sm">
-          <thead>
-            <tr className="text-left text-ink-soft">
-              <th className="font-medium">#</th>
-              <th className="font-medium">T</th>
-              <th className="font-medium">K or ln K</th>
-              <th className="font-medium">σ (optional)</th>
-            </tr>
-          </thead>
-          <tbody>
-            {rows.fields.map((f, i) => (
-              <tr key={f.id}>
-                <td className="pr-2 text-ink-soft">{i + 1}</td>
-                {(['T', 'value', 'sigma'] as const).map((c) => (
-                  <td key={c} className="pr-2">
-                    <input aria-label={`Row ${i + 1} ${c}`} aria-invalid={cellErrors[`rows.${i}.${c}`] ? true : undefined} className={COMPACT_INPUT} {...form.register(`rows.${i}.${c}`)} />
-                  </td>
-                ))}
+        <ScrollRegion label="Points to enter">
+          <table className="text-sm">
+            <thead>
+              <tr className="text-left text-ink-soft">
+                <th className="font-medium">#</th>
+                <th className="font-medium">T</th>
+                <th className="font-medium">K or ln K</th>
+                <th className="font-medium">σ (optional)</th>
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {rows.fields.map((f, i) => (
+                <tr key={f.id}>
+                  <td className="pr-2 text-ink-soft">{i + 1}</td>
+                  {(['T', 'value', 'sigma'] as const).map((c) => (
+                    <td key={c} className="pr-2">
+                      <input aria-label={`Row ${i + 1} ${c}`} aria-invalid={cellErrors[`rows.${i}.${c}`] ? true : undefined} className={COMPACT_INPUT} {...form.register(`rows.${i}.${c}`)} />
+                    </td>
+                  ))}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </ScrollRegion>
       ) : null}
       {source === 'grid' ? (
         <Button variant="quiet" className="self-start" onClick={() => rows.append({ T: '', value: '', sigma: '' })}>

@@ -1,5 +1,6 @@
 import { formatNumber, speciesHref } from '@/components/tables/species-columns';
 import Link from 'next/link';
+import { ScrollRegion } from '@/components/tables/scroll-region';
 import type { DuplicateChoice } from '@/lib/schemas/species';
 import type { PreviewRowDto } from '@/lib/services/species/import-preview';
 
@@ -18,7 +19,8 @@ export function ImportPreviewTable({ rows, choices, onChoice, disabled }: {
   disabled: boolean;
 }) {
   return (
-    <div className="overflow-x-auto rounded-lg border border-paper-edge bg-white">
+    // The table scrolls inside its own named region on a phone; `relative` keeps its sr-only text from widening the page.
+    <ScrollRegion label="Rows of the uploaded file, checked" className="rounded-lg border border-paper-edge bg-white">
       <table className="w-full text-sm">
         <caption className="sr-only">Rows of the uploaded file, checked</caption>
         <thead className="bg-paper-deep text-left text-xs text-ink-soft">
@@ -79,6 +81,6 @@ export function ImportPreviewTable({ rows, choices, onChoice, disabled }: {
           })}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

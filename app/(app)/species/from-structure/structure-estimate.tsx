@@ -5,6 +5,7 @@ import { FormulaText } from '@/components/chemistry/formula-text';
 import { OriginMark } from '@/components/chemistry/origin-mark';
 import { StructureImage } from '@/components/chemistry/structure-image';
 import type { ResolvedSpecies } from '@/lib/services/species/resolve-species';
+import { ScrollRegion } from '@/components/tables/scroll-region';
 
 const fmt = (x: number | null | undefined, digits = 1) => (x === null || x === undefined || !Number.isFinite(x) ? '—' : x.toFixed(digits).replace('-', '−'));
 const PHASE_WORD = { g: 'gas', l: 'liquid', s: 'solid', aq: 'aqueous' } as const;
@@ -34,12 +35,12 @@ export function StructureEstimate({ answer }: { answer: ResolvedSpecies }) {
       <div className="flex flex-wrap items-start gap-4">
         {answer.smiles ? <StructureImage smiles={answer.smiles} name={name ?? 'pasted structure'} formula={answer.formula} width={200} height={150} className="rounded border border-paper-edge bg-white" /> : null}
         <div className="flex min-w-0 flex-col gap-1 text-sm">
-          <p className="text-base font-semibold text-ink">{name ?? 'No name in our identifier list'}</p>
+          <p className="break-words text-base font-semibold text-ink">{name ?? 'No name in our identifier list'}</p>
           <p>
             <FormulaText value={answer.formula} /> · {PHASE_WORD[answer.phase]} ({answer.phase})
           </p>
           <p className="break-all font-mono text-xs text-ink-soft">{answer.smiles}</p>
-          <p className="font-mono text-xs text-ink-faint">InChIKey {answer.inchikey}</p>
+          <p className="break-all font-mono text-xs text-ink-faint">InChIKey {answer.inchikey}</p>
           <p>
             <OriginMark facts={{ origin: answer.origin, source: answer.source ?? null, method: answer.method ?? null, sigma_kJ: answer.sigma_dfG_kJ }} />
           </p>
@@ -68,7 +69,8 @@ export function StructureEstimate({ answer }: { answer: ResolvedSpecies }) {
 
 function EstimateGroups({ groups }: { groups: NonNullable<ResolvedSpecies['groups']> }) {
   return (
-    <div className="overflow-x-auto">
+    // Long group names scroll inside a named region on a phone, never the page.
+    <ScrollRegion label="Groups matched">
       <table className="w-full text-left text-xs" data-testid="estimate-groups">
         <caption className="mb-1 text-left text-sm font-semibold text-ink">Groups matched ({groups.length})</caption>
         <thead className="text-ink-soft">
@@ -92,6 +94,6 @@ function EstimateGroups({ groups }: { groups: NonNullable<ResolvedSpecies['group
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

@@ -20,7 +20,7 @@ export function ImportHistory() {
         <ul className="flex flex-col gap-1 text-sm">
           {imports.data.items.map((i) => (
             <li key={i.id} className="flex flex-wrap items-baseline gap-x-2">
-              <a href={`/api/species/imports/${i.id}/file`} className="font-medium text-pine-700 underline-offset-2 hover:underline" download>{i.fileName}</a>
+              <a href={`/api/species/imports/${i.id}/file`} className="break-all font-medium text-pine-700 underline-offset-2 hover:underline" download>{i.fileName}</a>
               <span className="text-ink-soft">{i.counts.rows} rows, {i.status === 'committed' ? `imported (${i.counts.created} added, ${i.counts.overridden} overridden, ${i.counts.skipped} skipped)` : 'previewed, not imported'}</span>
               <span className="text-ink-faint">by {i.importedBy ?? 'a former member'},</span>
               <When iso={i.createdAt} />

@@ -62,21 +62,21 @@ export function SpeciesImportClient() {
       {upload.isError ? <Notice tone="error" title="The file was not accepted">{problemsOf(upload.error).map((p) => <p key={p}>{p}</p>)}</Notice> : null}
       {preview && !commit.isSuccess ? (
         <section aria-labelledby="preview" className="flex flex-col gap-3">
-          <h2 id="preview" className="text-base font-semibold">{preview.fileName}: {preview.counts.rows} rows</h2>
+          <h2 id="preview" className="break-words text-base font-semibold">{preview.fileName}: {preview.counts.rows} rows</h2>
           <p className="text-sm text-ink-soft">
             {withErrors ? `${withErrors} row${withErrors > 1 ? 's have' : ' has'} errors; fix the file and upload it again. ` : 'Every row passed its checks. '}
             {duplicates.length ? `${duplicates.length} species already exist${duplicates.length > 1 ? '' : 's'}: choose for each.` : ''}
-            <span className="block text-xs text-ink-faint">SHA-256 {preview.checksum}</span>
+            <span className="block break-all text-xs text-ink-faint">SHA-256 {preview.checksum}</span>
           </p>
           {duplicates.length ? (
-            <div className="flex gap-2">
+            <div className="flex flex-wrap gap-2">
               <Button variant="secondary" onClick={() => setAll('skip')}>Skip all duplicates</Button>
               <Button variant="secondary" onClick={() => setAll('override')}>Override all duplicates</Button>
             </div>
           ) : null}
           <ImportPreviewTable rows={preview.rows} choices={choices} onChoice={(key, c) => setChoices((all) => ({ ...all, [key]: c }))} disabled={commit.isPending} />
           {commit.isError ? <Notice tone="error" title="Nothing was imported">{problemsOf(commit.error).map((p) => <p key={p}>{p}</p>)}</Notice> : null}
-          <div className="flex items-center gap-3">
+          <div className="flex flex-wrap items-center gap-3">
             <Button onClick={() => commit.mutate()} disabled={withErrors > 0 || undecided > 0 || commit.isPending}>
               {commit.isPending ? 'Importing…' : `Import ${preview.counts.rows} rows`}
             </Button>
