@@ -48,9 +48,10 @@ test('the approve dialog names the open safety flag and the unresolved thread by
   const dialog = page.getByRole('dialog', { name: 'Approve this route' });
   const check = dialog.getByTestId('approval-check');
   await expect(check).toContainText('1 open flag, 1 of them on safety');
-  await expect(check).toContainText(/Safety · Step 2\b.*relief sizing not yet reviewed/);
+  // Full labels, as on the board's panels: the number and what the step does.
+  await expect(check).toContainText(/Safety · Step 2 \(methanol from carbon monoxide\).*relief sizing not yet reviewed/);
   await expect(check).toContainText('1 unresolved comment thread');
-  await expect(check).toContainText(/Step 1\b.*steam-to-carbon ratio/);
+  await expect(check).toContainText(/Step 1 \(steam reforming of methane\).*steam-to-carbon ratio/);
   expect(await check.innerText()).not.toMatch(/\bs[12]\b|s-[0-9a-f]{8}/);
   // The lead can still approve, knowingly: the button says so. Here they step back instead.
   await expect(dialog.getByRole('button', { name: 'Approve with these open' })).toBeVisible();
