@@ -1,4 +1,4 @@
-// New species from a structure, from the board and back: a designer pastes the SMILES of a Boc-protected
+// New species from a structure, over the board: a designer pastes the SMILES of a Boc-protected
 // aminoalcohol that no table has (tert-butyl N-(1-hydroxy-2-methylpropan-2-yl)carbamate, checked absent first), sees
 // its estimate and the groups it matched, saves it for the team, writes it into a Boc protection step by name, and
 // finds the estimate marked on the node, the ladder and in the CSV export.
@@ -34,40 +34,43 @@ test('create a species from a SMILES no table has, see its estimate and groups, 
   await expect(page).toHaveURL(/\/routes\/\d+$/);
   const routeUrl = new URL(page.url()).pathname;
 
-  // From the palette to the flow, which knows where to come back to.
-  await page.getByRole('complementary', { name: 'Step palette' }).getByRole('link', { name: 'New species from a structure' }).click();
-  await expect(page).toHaveURL(/\/species\/from-structure\?return=/);
-  await expect(page.getByRole('heading', { name: 'New species from a structure' })).toBeVisible();
+  // From the palette, the flow opens in a dialog over the board: the board stays where it is.
+  await page.getByRole('complementary', { name: 'Step palette' }).getByRole('button', { name: 'New species from a structure' }).click();
+  const flow = page.getByRole('dialog', { name: 'New species from a structure' });
+  await expect(flow).toBeVisible();
+  expect(new URL(page.url()).pathname).toBe(routeUrl);
 
   // A broken SMILES is refused at the field, with where it breaks.
-  const smilesField = page.getByRole('textbox', { name: 'SMILES' });
+  const smilesField = flow.getByRole('textbox', { name: 'SMILES' });
   await smilesField.fill('CC(C)(C)OC(=O)NC(C(C)CO');
-  await page.getByRole('button', { name: 'Show the estimate' }).click();
-  await expect(page.getByText(/Cannot read the SMILES/)).toBeVisible({ timeout: 30_000 });
+  await flow.getByRole('button', { name: 'Show the estimate' }).click();
+  await expect(flow.getByText(/Cannot read the SMILES/)).toBeVisible({ timeout: 30_000 });
 
   await smilesField.fill(SMILES);
-  await expect(page.getByLabel('Phase')).toHaveValue('l');
-  await page.getByRole('button', { name: 'Show the estimate' }).click();
-  const estimate = page.getByTestId('structure-estimate');
+  await expect(flow.getByLabel('Phase')).toHaveValue('l');
+  await flow.getByRole('button', { name: 'Show the estimate' }).click();
+  const estimate = flow.getByTestId('structure-estimate');
   await expect(estimate).toBeVisible({ timeout: 30_000 });
   await expect(estimate.locator('img[src^="/api/structures/svg"]')).toHaveAttribute('alt', /C9H19NO3/);
   await expect(estimate).toContainText('C9H19NO3');
   await expect(estimate.locator('[data-origin="estimated"]')).toContainText('Estimate');
   for (const term of ['ΔfH°', 'S°', 'ΔfG°', 'Cp°']) await expect(estimate.getByText(term, { exact: false }).first()).toBeVisible();
   await expect(estimate).toContainText(/group additivity/i);
-  const groups = page.getByTestId('estimate-groups');
+  const groups = flow.getByTestId('estimate-groups');
   await expect(groups).toBeVisible();
   expect(await groups.locator('tbody tr').count()).toBeGreaterThan(3);
   await expect(groups).toContainText('Benson');
 
-  // Saved as the estimate: provenance "estimated", method and σ recorded.
-  await page.getByLabel('Name', { exact: true }).fill(NAME);
-  await expect(page.getByRole('radio', { name: /Save the estimate/ })).toBeChecked();
-  await page.getByRole('button', { name: 'Save as a team species' }).click();
-  await expect(page.getByText(`“${NAME}” is now one of your team’s species`)).toBeVisible({ timeout: 30_000 });
-  await expect(page.getByText(/Provenance: estimated/)).toBeVisible();
-  await page.getByTestId('back-to-route').click();
-  await expect(page).toHaveURL(new RegExp(`${routeUrl}$`));
+  // Saved as the estimate: provenance "estimated", method and σ recorded. No step is selected, so there is
+  // nothing to add it to yet: the dialog says how to find it, and closes.
+  await flow.getByLabel('Name', { exact: true }).fill(NAME);
+  await expect(flow.getByRole('radio', { name: /Save the estimate/ })).toBeChecked();
+  await flow.getByRole('button', { name: 'Save as a team species' }).click();
+  await expect(flow.getByText(`“${NAME}” is now one of your team’s species`)).toBeVisible({ timeout: 30_000 });
+  await expect(flow.getByText(/Provenance: estimated/)).toBeVisible();
+  await flow.getByRole('button', { name: 'Close' }).click();
+  await expect(flow).toBeHidden();
+  expect(new URL(page.url()).pathname).toBe(routeUrl);
 
   // Used in a step by its name; the node and the ladder mark the estimate.
   await page.getByRole('button', { name: 'Add step: Blank step' }).click();
@@ -86,6 +89,11 @@ test('create a species from a SMILES no table has, see its estimate and groups, 
   expect(row, csv).toBeDefined();
   expect(['estimated', 'mixed']).toContain(row![column('data_origin')]);
   expect(row![column('estimation_method')]).toMatch(/group additivity/i);
+
+  // The species section's page runs the same flow: the structure is the team's now, and is pointed at, not copied.
+  await page.goto(`/species/from-structure?smiles=${encodeURIComponent(SMILES)}&phase=l&return=${encodeURIComponent(routeUrl)}`);
+  await expect(page.getByRole('heading', { name: 'New species from a structure' })).toBeVisible();
+  await expect(page.getByText(`Your team already has this structure: “${NAME}”`)).toBeVisible({ timeout: 30_000 });
 });
 
 /** One CSV line's cells (quoted cells may hold commas and doubled quotes). */

@@ -21,6 +21,8 @@ const SavedSpeciesNotice = dynamic(() => import('../../../species/from-structure
 const EditorsOnly = dynamic(() => import('../../../species/_components/editors-only').then((m) => m.EditorsOnly), { ssr: false, loading: Loading });
 
 const PHASES = new Set(['g', 'l', 's', 'aq']);
+const PALETTE = 'aside[aria-label="Step palette"]';
+const EQUATION_FIELD = 'form[aria-label="Step"] textarea';
 
 interface Asked {
   ask: SpeciesAsk;
@@ -50,14 +52,16 @@ export function NewSpeciesDialogProvider({ children }: { children: ReactNode }) 
     [store],
   );
 
-  // Focus goes back to the link that opened the dialog; once the step is fixed that link is gone, so to the step's node.
-  const close = (stepId: string | null) => {
+  // Focus goes back to the link that opened the dialog; once the species is placed, a link in the step panel is about
+  // to go (the step no longer lacks it), so focus goes to the step's equation, where the change shows.
+  const close = (placedIn: string | null) => {
     const trigger = asked?.trigger ?? null;
     setAsked(null);
     setFound(null);
     requestAnimationFrame(() => {
-      if (trigger?.isConnected) trigger.focus();
-      else if (stepId) document.querySelector<HTMLElement>(`.react-flow__node[data-id="${CSS.escape(stepId)}"]`)?.focus();
+      if (trigger?.isConnected && (!placedIn || trigger.closest(PALETTE))) return trigger.focus();
+      if (!placedIn) return;
+      (document.querySelector<HTMLElement>(EQUATION_FIELD) ?? document.querySelector<HTMLElement>(`.react-flow__node[data-id="${CSS.escape(placedIn)}"]`))?.focus();
     });
   };
 
