@@ -3,6 +3,8 @@ import type { WhatIf } from '../schemas/compare';
 import type { RouteEvaluateRequest, RouteEvaluateResponse } from '../thermo/route';
 import type { SpeciesLookup } from '../thermo/species-library';
 import { parseAmount } from '../thermo/units';
+import { relabelStepIds, stepLabels } from '../route-editor/step-label';
+import { totalsWaitReason } from '../route-editor/totals-wait';
 import { bestPerRow } from './best-values';
 import type { ComparedRoute, Comparison, ComparisonSnapshot } from './compare-types';
 import { ladderOf, metricsOf } from './route-metrics';
@@ -36,10 +38,12 @@ function compareOne(route: RouteForComparison, lookup: SpeciesLookup): ComparedR
     id: meta.id, name: meta.name, target: meta.target, targetAmount: meta.targetAmount, status: meta.status, version: meta.version,
     archived: meta.archived, updatedAt: meta.updatedAt, updatedBy: meta.updatedBy,
   };
-  if ('error' in outcome) return { ...head, ladder: null, error: outcome.error, metrics: metricsOf(facts, null) };
+  // People read these messages: steps by their labels ("Step 2 (…)"), never by their ids.
+  const labels = stepLabels(request.steps ?? [], request.links ?? []);
+  if ('error' in outcome) return { ...head, ladder: null, error: { ...outcome.error, message: relabelStepIds(outcome.error.message, labels) }, metrics: metricsOf(facts, null) };
   // A route whose totals wait (no step makes the target yet) compares like one the engine refused: no totals.
   const withheld = outcome.evaluation.totalsWithheld;
-  if (withheld) return { ...head, ladder: null, error: { code: withheld.code, message: withheld.message, field: withheld.field }, metrics: metricsOf(facts, null) };
+  if (withheld) return { ...head, ladder: null, error: { code: withheld.code, message: totalsWaitReason(withheld, labels), field: withheld.field }, metrics: metricsOf(facts, null) };
   // The engine has already read targetAmount for this evaluation, so it parses.
   const targetMol = parseAmount(request.targetAmount ?? '1 mol', 'targetAmount');
   const ladder = ladderOf(request, outcome.evaluation, targetMol, lookup);

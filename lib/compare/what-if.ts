@@ -3,6 +3,8 @@ import type { WhatIf } from '../schemas/compare';
 import { isThermoError } from '../thermo/errors';
 import type { RouteEvaluateRequest } from '../thermo/route';
 import { parseTemperature } from '../thermo/units';
+import { withTrueMinus } from '../format/numbers';
+import { stepLabels } from '../route-editor/step-label';
 
 /** The engine's default step temperature. */
 export const DEFAULT_STEP_TEMPERATURE = '298.15 K';
@@ -26,6 +28,8 @@ export function applyWhatIf(request: RouteEvaluateRequest, whatIf: WhatIf | unde
   if (isEmptyWhatIf(whatIf)) return { request, problems: [] };
   const offset = whatIf!.temperatureOffset_K ?? 0;
   const problems: WhatIfProblem[] = [];
+  // The message is read by people: a step by its label ("Step 2 (…)"), never its id.
+  const labels = stepLabels(request.steps, request.links ?? []);
   const steps = request.steps.map((step) => {
     const next = { ...step, ...(whatIf!.standardPressure ? { standardPressure: whatIf!.standardPressure } : {}) };
     if (offset === 0) return next;
@@ -39,7 +43,8 @@ export function applyWhatIf(request: RouteEvaluateRequest, whatIf: WhatIf | unde
     }
     const shifted = T + offset;
     if (!(shifted > 0)) {
-      problems.push({ stepId: step.id, message: `step ${step.id} at ${Number(T.toFixed(2))} K would go to ${Number(shifted.toFixed(2))} K` });
+      const label = labels.get(step.id)?.full ?? 'a step';
+      problems.push({ stepId: step.id, message: withTrueMinus(`${label} at ${Number(T.toFixed(2))} K would go to ${Number(shifted.toFixed(2))} K`) });
       return next;
     }
     return { ...next, temperature: kelvin(shifted) };

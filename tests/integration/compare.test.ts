@@ -164,7 +164,9 @@ describe('GET /api/compare', () => {
     const a = await reforming();
     const res = await get(team.leadId, `ids=${a.id},${(await reforming()).id}&temperatureOffset_K=-300`);
     expect(res.status).toBe(400);
-    expect(errorOf(res.body).message).toMatch(/Methanol via steam reforming: step s2 at 298.15 K would go to -1.85 K/);
+    // The step by its label, never its id, and the true minus.
+    expect(errorOf(res.body).message).toMatch(/Methanol via steam reforming: Step 2 \(methanol from carbon monoxide\) at 298.15 K would go to \u22121.85 K/);
+    expect(errorOf(res.body).message).not.toMatch(/\bs2\b/);
     expect(errorOf(res.body).fields).toHaveProperty(['whatIf.temperatureOffset_K']);
   });
 

@@ -21,7 +21,9 @@ describe('applyWhatIf', () => {
 
   it('reports the steps an offset takes to 0 K or below', () => {
     const { problems } = applyWhatIf({ target: 'CO2(g)', steps: [{ id: 'cold', equation: CALCINATION, temperature: '250 K' }, { id: 'warm', equation: CALCINATION }] }, { temperatureOffset_K: -298 });
-    expect(problems).toEqual([{ stepId: 'cold', message: expect.stringContaining('-48 K') }]);
+    // Said to people: the step by its label and the true minus (U+2212), never its id.
+    expect(problems).toEqual([{ stepId: 'cold', message: expect.stringMatching(/^Step 1 \(.+\) at 250 K would go to \u221248 K$/) }]);
+    expect(problems[0]!.message).not.toContain('cold');
   });
 
   it('treats no offset and no pressure as no what-if', () => {
