@@ -2,12 +2,13 @@
 // tests/reference/fine-chemical-set.ts picks by a written rule from lib/thermo/data/organic-library.json. Each
 // reference value is the library row's own: ΔfH° and S° from ATcT 1.112, NASA TM-4513, NIST WebBook, API TDB or
 // CRC Handbook as the row names them (printed with every failure), ΔfG° derived from them with CODATA element
-// entropies. The #17 targets hold on this set, except S° MAE (target 6 J/(mol K)), which is checked at the
-// level measured (lib/thermo/README.md says so).
+// entropies. The #17 targets hold on this set. S° is stated on the hold-out (the set without the parent compounds
+// that S° terms were completed from, rmg/entropy-completions.ts): 6.25 J/(mol K) measured there, short of the 6
+// targeted (5.94 on the full set, parents included); lib/thermo/README.md says so.
 import { beforeAll, describe, expect, it } from 'vitest';
 import { estimateGas, type GasEstimate, loadRmgDatabase } from '@/lib/thermo/estimate/gas-estimate';
 import { type Chem, loadChem } from '@/lib/thermo/structure/chem';
-import { fineChemicalSet, type ReferenceMolecule } from './fine-chemical-set';
+import { calibrationParents, fineChemicalSet, holdOutSet, type ReferenceMolecule } from './fine-chemical-set';
 
 /**
  * Molecules outside 3σ in ΔfH°, S° or ΔfG°, kept in the set and in the aggregates. Measured here; the reasons
@@ -71,8 +72,9 @@ describe('each molecule within 3σ of its published values', () => {
 });
 
 describe('aggregate accuracy (#17 targets: MAE ≤ 6 kJ/mol and ≤ 6 J/(mol K); ≥ 85 % within 2σ)', () => {
-  const summary = (pick: (m: ReferenceMolecule, e: GasEstimate) => [number, number, number]) => {
-    const pairs = estimated().map(({ m, e }) => {
+  const summary = (pick: (m: ReferenceMolecule, e: GasEstimate) => [number, number, number], only?: ReferenceMolecule[]) => {
+    const keep = only ? new Set(only.map((m) => m.smiles)) : undefined;
+    const pairs = estimated().filter(({ m }) => !keep || keep.has(m.smiles)).map(({ m, e }) => {
       const [value, ref, sigma] = pick(m, e);
       return { err: value - ref, sigma };
     });
@@ -91,10 +93,19 @@ describe('aggregate accuracy (#17 targets: MAE ≤ 6 kJ/mol and ≤ 6 J/(mol K);
     expect(s.mae).toBeLessThanOrEqual(6);
     expect(s.within2).toBeGreaterThanOrEqual(0.85);
   });
-  it('S°(g): within 2σ as targeted; MAE at the measured 8 J/(mol K), short of the 6 targeted', () => {
+  it('S°(g) on the hold-out: within 2σ as targeted; MAE at the measured 6.25 J/(mol K), short of the 6 targeted', () => {
+    const held = holdOutSet(chem);
+    // the hold-out drops exactly the calibration parents that are in the set, nothing else
+    expect(molecules.length - held.length).toBe(molecules.filter((m) => calibrationParents(chem).has(m.inchikey)).length);
+    expect(held.length).toBeGreaterThanOrEqual(90);
+    const s = summary((m, e) => [e.S_J_per_K, m.S_J_per_K, e.sigma_S_J_per_K], held);
+    expect(s.within2).toBeGreaterThanOrEqual(0.85);
+    expect(s.mae).toBeLessThanOrEqual(6.5);
+  });
+  it('S°(g) on the full set, parents included: MAE ≤ 6 (measured 5.94; not the stated figure, the parents are fitted)', () => {
     const s = summary((m, e) => [e.S_J_per_K, m.S_J_per_K, e.sigma_S_J_per_K]);
     expect(s.within2).toBeGreaterThanOrEqual(0.85);
-    expect(s.mae).toBeLessThanOrEqual(8.5);
+    expect(s.mae).toBeLessThanOrEqual(6);
   });
 });
 

@@ -15,6 +15,7 @@
 // another listed group is present. The rule was written with the whole-library error list in view; it names
 // classes by chemistry (explosive or strained), never molecules.
 import { readDataJson } from '@/lib/thermo/data/data-files';
+import { GROUP_ENTROPY_COMPLETIONS, RING_ENTROPY_COMPLETIONS } from '@/lib/thermo/estimate/rmg/entropy-completions';
 import type { Chem } from '@/lib/thermo/structure/chem';
 
 export const INCLUDE: Readonly<Record<string, string>> = {
@@ -115,4 +116,16 @@ export function fineChemicalSet(chem: Chem): FineChemicalSet {
   }
   cached = { molecules, excluded };
   return cached;
+}
+
+/** InChIKeys of the parent compounds that group or ring terms were completed from (calibration, not test). */
+export function calibrationParents(chem: Chem): Map<string, string> {
+  const parents = [...GROUP_ENTROPY_COMPLETIONS, ...RING_ENTROPY_COMPLETIONS].map((c) => c.parent);
+  return new Map(parents.map((p) => [chem.parse(p.smiles).inchikey, p.name]));
+}
+
+/** The set without the calibration parents: the honest hold-out the S° figure is stated on. */
+export function holdOutSet(chem: Chem): ReferenceMolecule[] {
+  const parents = calibrationParents(chem);
+  return fineChemicalSet(chem).molecules.filter((m) => !parents.has(m.inchikey));
 }

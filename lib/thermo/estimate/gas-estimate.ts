@@ -9,6 +9,7 @@ import { entrySource } from './rmg/entry-source';
 import { bensonAlcoholEnthalpies } from './rmg/alcohol-enthalpy';
 import { bensonAmineEntropies } from './rmg/amine-entropy';
 import { groupAdditivity, type GroupSum } from './rmg/group-sum';
+import { completedEntropies } from './rmg/entropy-completions';
 import type { MolGraph } from './rmg/mol-graph';
 import { addThermo, zeroThermo } from './rmg/thermo-values';
 import { buildMolecule } from './rmg/rdkit-graph';
@@ -77,9 +78,10 @@ function composition(atoms: readonly { element: string }[]): { formula: string; 
   return { formula: order.map((e) => (elements[e] === 1 ? e : `${e}${elements[e]}`)).join(''), elements };
 }
 
-/** Benson's own pairs where the tree's mix of sources is off: alcohol ΔfH° (O–C pair), aliphatic amine S° (N and α-C). */
+/** Where the tree's mix of sources is off: Benson's alcohol ΔfH° (O–C pair) and aliphatic amine S° (N and α-C),
+ *  and oxygen-ring S° terms completed from one parent compound each. */
 function withBensonPairs(mol: MolGraph, sum: GroupSum): GroupSum {
-  const contributions = bensonAmineEntropies(mol, bensonAlcoholEnthalpies(mol, sum.contributions));
+  const contributions = completedEntropies(mol, bensonAmineEntropies(mol, bensonAlcoholEnthalpies(mol, sum.contributions)));
   const values = zeroThermo();
   for (const c of contributions) addThermo(values, c.values, c.sign);
   return { ...sum, contributions, values };

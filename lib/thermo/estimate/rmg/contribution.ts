@@ -18,4 +18,6 @@ export interface Contribution {
   via?: 'averaged children' | 'bicyclic heuristic' | 'ring-pair heuristic';
   /** set where a value comes from outside the tree (Benson's alcohol pair) */
   sourceOverride?: string;
+  /** parent compound a ring term's S° was completed from (entropy-completions.ts) */
+  completedFrom?: string;
 }
