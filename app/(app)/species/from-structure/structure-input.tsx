@@ -2,7 +2,7 @@
 
 // Step one: paste a SMILES or a molfile (or open a .mol file) and pick the phase. Errors from the engine land on the
 // structure field: an unreadable SMILES with its position, the atoms or groups no method covers, the size limits.
-import { useId, useState, type FormEvent } from 'react';
+import { useEffect, useId, useRef, useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { TextAreaField } from '@/components/ui/text-area-field';
 import { TextField } from '@/components/ui/text-field';
@@ -38,6 +38,13 @@ export function StructureInput({ initialSmiles, initialPhase, isPending, error, 
   const [molfile, setMolfile] = useState('');
   const [phase, setPhase] = useState<Phase>(initialPhase);
   const [local, setLocal] = useState<string | null>(null);
+  const smilesField = useRef<HTMLInputElement>(null);
+  // A frame later: a modal dialog focuses its first control when it opens, which would otherwise win.
+  useEffect(() => {
+    if (!autoFocus) return;
+    const frame = requestAnimationFrame(() => smilesField.current?.focus());
+    return () => cancelAnimationFrame(frame);
+  }, [autoFocus]);
 
   function handleSubmit(event: FormEvent) {
     event.preventDefault();
@@ -75,7 +82,7 @@ export function StructureInput({ initialSmiles, initialPhase, isPending, error, 
           placeholder="CC(C)(C)OC(=O)NC(C)(C)CO"
           spellCheck={false}
           autoComplete="off"
-          autoFocus={autoFocus}
+          ref={smilesField}
           hint="One molecule, up to 150 heavy atoms. Copy it from your drawing program or notebook."
           error={shown}
         />
