@@ -7,8 +7,15 @@ import { relabelStepIds, type StepLabel } from './step-label';
 /** The route settings field a totals problem belongs to, or null when it is about the links or the steps. */
 export type TotalsWaitField = 'target' | 'targetAmount';
 
-export function totalsWaitField(problem: Pick<RouteProblem, 'field'> | null | undefined): TotalsWaitField | null {
-  return problem?.field === 'target' || problem?.field === 'targetAmount' ? problem.field : null;
+/**
+ * The field to mark: the amount when it cannot be read or is out of bounds, the target when the engine cannot read it
+ * as a species (its message starts "target: "). "No step makes the target yet" is a route still being built, not a
+ * wrong target: the overview and the ladder say it, the field stays unmarked.
+ */
+export function totalsWaitField(problem: Pick<RouteProblem, 'field' | 'message'> | null | undefined): TotalsWaitField | null {
+  if (problem?.field === 'targetAmount') return 'targetAmount';
+  if (problem?.field === 'target' && /^target: /.test(problem.message)) return 'target';
+  return null;
 }
 
 /** The engine's reason in words: "Target: …", "The target amount must be above 0 mol", step ids as labels. */

@@ -137,3 +137,32 @@ test('the new-route dialog refuses an unknown target and an amount of “lots”
   await dialog.getByRole('button', { name: 'Create route' }).click();
   await expect(page).toHaveURL(/\/routes\/\d+$/);
 });
+
+test('when the totals wait because of the target or its amount, route settings say so at that field', async ({ page }) => {
+  await signIn(page, designer, DEMO_PASSWORD);
+  await newRoute(page, 'E2E target field');
+  await addStep(page, /^Add step: Steam reforming of methane/);
+  await page.getByRole('button', { name: 'Route settings' }).click();
+  const settings = page.getByRole('form', { name: 'Route settings' });
+
+  // An amount the engine cannot read: marked at the amount field, in words, as well as on the ladder.
+  const amount = settings.getByLabel('Target amount');
+  await amount.fill('lots');
+  await expect(amount).toHaveAttribute('aria-invalid', 'true');
+  const amountNote = page.locator(`[id="${(await amount.getAttribute('aria-describedby'))!}"]`);
+  await expect(amountNote).toContainText('cannot read "lots" as an amount');
+  await expect(amountNote).toContainText('The route totals wait until this is fixed.');
+  await expect(page.getByTestId('ladder-totals-withheld')).toContainText('Target amount');
+  await amount.fill('2 mol');
+  await expect(amount).not.toHaveAttribute('aria-invalid', 'true');
+
+  // A target the engine cannot read as a species: marked at the target field.
+  const target = settings.getByLabel('Target species');
+  await target.fill('Unobtainium(g)');
+  await expect(target).toHaveAttribute('aria-invalid', 'true');
+  await expect(page.locator(`[id="${(await target.getAttribute('aria-describedby'))!}"]`)).toContainText('Unobtainium');
+  // A target no step makes yet is a route still being built: said on the ladder, the field stays unmarked.
+  await target.fill('CH3OH(g)');
+  await expect(target).not.toHaveAttribute('aria-invalid', 'true');
+  await expect(page.getByTestId('ladder-totals-withheld')).toContainText('No step makes the target');
+});

@@ -36,7 +36,14 @@ describe('why the route totals wait', () => {
     const { problem, labels } = withheld({ target: 'CH3OH(g)', steps: [{ id: 's-aaaa1111', equation: SYNTHESIS }, { id: 's-bbbb2222', equation: SYNTHESIS }] });
     expect(totalsWaitReason(problem, labels)).toMatch(/Several steps make the target CH3OH\(g\) and pass nothing on: Step 1 \(.+\)/);
     expect(totalsWaitReason(problem, labels)).not.toContain('s-aaaa1111');
-    expect(totalsWaitField(problem)).toBe('target');
+    // A branching route, not a wrong target: the field stays unmarked.
+    expect(totalsWaitField(problem)).toBeNull();
+  });
+
+  it('leaves the target field unmarked while no step makes the target yet (a route still being built)', () => {
+    const { problem } = withheld({ target: 'CH3OH(g)', steps: [{ id: 's1', equation: DECOMPOSITION }] });
+    expect(problem.message).toMatch(/^No step makes the target CH3OH\(g\)/);
+    expect(totalsWaitField(problem)).toBeNull();
   });
 
   it('puts an unreadable target at the target field, with the engine hint', () => {
