@@ -26,7 +26,7 @@ export function RouteEditorClient({ initialRoute, role, teamId, selfId }: { init
       {route.archived ? <ArchivedNotice routeId={route.id} canUnarchive={mayEdit} /> : null}
       <RouteEditorStoreProvider key={editorKey} initialDoc={draftOf(route)} initialVersion={route.version}>
         {/* On the board, "New species from a structure" opens over it (new-species-dialog.tsx) instead of leaving it. */}
-        <NewSpeciesDialogProvider>
+        <NewSpeciesDialogProvider enabled={mayEdit && !route.archived}>
           <RouteEditor routeId={route.id} canEdit={mayEdit && !route.archived} units={preferences} review={{ teamId, selfId, role, status: route.status, archived: route.archived }} />
         </NewSpeciesDialogProvider>
       </RouteEditorStoreProvider>

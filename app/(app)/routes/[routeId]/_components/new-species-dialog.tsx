@@ -5,7 +5,7 @@
 // team's species) the species takes its place in that step as the Add species search would write it, or, when the step
 // did not write it, the user picks a side. The flow itself loads only when the dialog first opens.
 import dynamic from 'next/dynamic';
-import { useCallback, useId, useState, type ReactNode } from 'react';
+import { useCallback, useEffect, useId, useRef, useState, type ReactNode } from 'react';
 import { Button } from '@/components/ui/button';
 import { Dialog } from '@/components/ui/dialog';
 import { stepLabels } from '@/lib/route-editor/step-label';
@@ -37,11 +37,17 @@ function cleanAsk(ask: NewSpeciesAsk): SpeciesAsk {
   return { smiles: text(ask.smiles, 600), name: text(ask.name, 120), phase: ask.phase && PHASES.has(ask.phase) ? ask.phase : null };
 }
 
-export function NewSpeciesDialogProvider({ children }: { children: ReactNode }) {
+/** Only where the route can be edited: elsewhere the links lead to the page, which changes no route. */
+export function NewSpeciesDialogProvider({ enabled, children }: { enabled: boolean; children: ReactNode }) {
   const store = useRouteEditorStoreApi();
   const [asked, setAsked] = useState<Asked | null>(null);
   const [found, setFound] = useState<{ pick: PickedSpecies; saved: SavedStructureSpecies | null } | null>(null);
   const [said, setSaid] = useState('');
+  const foundBox = useRef<HTMLDivElement>(null);
+  // The Save button the focus was on is gone once saved: the focus moves to what the user can do next.
+  useEffect(() => {
+    if (found) foundBox.current?.querySelector<HTMLElement>('button')?.focus();
+  }, [found]);
 
   const open = useCallback<OpenNewSpecies>(
     (ask, trigger) => {
@@ -88,6 +94,7 @@ export function NewSpeciesDialogProvider({ children }: { children: ReactNode }) 
   };
 
   const to = found ? target() : null;
+  if (!enabled) return <>{children}</>;
   return (
     <NewSpeciesOpenerContext.Provider value={open}>
       {children}
@@ -112,7 +119,7 @@ export function NewSpeciesDialogProvider({ children }: { children: ReactNode }) 
           </EditorsOnly>
         ) : null}
         {asked && found ? (
-          <>
+          <div ref={foundBox} className="flex flex-col gap-3">
             {found.saved ? <SavedSpeciesNotice saved={found.saved} returnTo={null} howToUse={to === null} /> : null}
             {to ? <OfferToStep label={to.label} pick={found.pick} onAdd={(side) => apply(to.step.id, to.label, found.pick, placeOnSide(to.step, found.pick, side))} onNotNow={() => close(null)} tooLong={(side) => placeOnSide(to.step, found.pick, side).equation.length > MAX_EQUATION} /> : (
               <div className="flex flex-col gap-2 text-sm">
@@ -122,7 +129,7 @@ export function NewSpeciesDialogProvider({ children }: { children: ReactNode }) 
                 </div>
               </div>
             )}
-          </>
+          </div>
         ) : null}
       </Dialog>
     </NewSpeciesOpenerContext.Provider>
