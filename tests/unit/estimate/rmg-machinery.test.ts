@@ -171,7 +171,7 @@ describe('estimateGas output', () => {
     const cyclopentane = estimateGas(chem, 'C1CCCC1', db);
     expect(thf.confidence).toBe('normal');
     expect(thf.weakKinds).toEqual(['o-s-ring']);
-    expect(thf.sigma_S_J_per_K).toBeGreaterThan(3 * cyclopentane.sigma_S_J_per_K);
+    expect(thf.sigma_S_J_per_K).toBeGreaterThan(2 * cyclopentane.sigma_S_J_per_K);
   });
   it('explicit [H] atoms in the SMILES give the same estimate', () => {
     expect(estimateGas(chem, '[H]C([H])([H])C([H])([H])[H]', db).dfH_kJ).toBeCloseTo(estimateGas(chem, 'CC', db).dfH_kJ, 9);
