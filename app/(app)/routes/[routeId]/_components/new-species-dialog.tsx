@@ -8,6 +8,7 @@ import dynamic from 'next/dynamic';
 import { useCallback, useEffect, useId, useRef, useState, type ReactNode } from 'react';
 import { Button } from '@/components/ui/button';
 import { Dialog } from '@/components/ui/dialog';
+import { useIsPhone } from '@/lib/hooks/use-media-query';
 import { stepLabels } from '@/lib/route-editor/step-label';
 import { useRouteEditorStoreApi } from '@/stores/route-editor-store';
 import { NewSpeciesOpenerContext, type NewSpeciesAsk, type OpenNewSpecies } from '../../../species/_components/new-species-opener';
@@ -37,7 +38,7 @@ function cleanAsk(ask: NewSpeciesAsk): SpeciesAsk {
   return { smiles: text(ask.smiles, 600), name: text(ask.name, 120), phase: ask.phase && PHASES.has(ask.phase) ? ask.phase : null };
 }
 
-/** Only where the route can be edited: elsewhere the links lead to the page, which changes no route. */
+/** Only where the board edits the route: on a read-only route or a phone's read-only view the links lead to the page, which changes no route. */
 export function NewSpeciesDialogProvider({ enabled, children }: { enabled: boolean; children: ReactNode }) {
   const store = useRouteEditorStoreApi();
   const [asked, setAsked] = useState<Asked | null>(null);
@@ -93,8 +94,9 @@ export function NewSpeciesDialogProvider({ enabled, children }: { enabled: boole
     setFound({ pick, saved });
   };
 
+  const isPhone = useIsPhone();
   const to = found ? target() : null;
-  if (!enabled) return <>{children}</>;
+  if (!enabled || isPhone) return <>{children}</>;
   return (
     <NewSpeciesOpenerContext.Provider value={open}>
       {children}
