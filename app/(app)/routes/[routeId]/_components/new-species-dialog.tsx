@@ -113,12 +113,14 @@ export function NewSpeciesDialogProvider({ enabled, children }: { enabled: boole
               onUseExisting={(pick) => handleFound(pick, null)}
               autoFocus
             />
-            <div className="border-t border-paper-edge pt-3">
-              <Button variant="quiet" onClick={() => close(null)}>
-                Cancel
-              </Button>
-            </div>
           </EditorsOnly>
+        ) : null}
+        {asked && !found ? (
+          <div className="border-t border-paper-edge pt-3">
+            <Button variant="quiet" onClick={() => close(null)}>
+              Cancel
+            </Button>
+          </div>
         ) : null}
         {asked && found ? (
           <div ref={foundBox} className="flex flex-col gap-3">
