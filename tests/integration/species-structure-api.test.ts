@@ -175,6 +175,9 @@ describe('POST /api/balance with a step’s species map', () => {
     const ok = await callRoute(balance, { method: 'POST', userId, body: { equation: 'NB + 3 H2(g) -> AN + 2 H2O(l)', species } });
     expect(ok.status, JSON.stringify(ok.body)).toBe(200);
     expect(ok.body).toMatchObject({ isBalanced: true });
+    // One-click balance writes the labels back as typed, never the structures' "{InChIKey}(l)" keys.
+    const unbalanced = await callRoute(balance, { method: 'POST', userId, body: { equation: 'NB + H2(g) -> AN + H2O(l)', species } });
+    expect(unbalanced.body).toMatchObject({ isBalanced: false, balanced: 'NB + 3 H2(g) ⇌ AN + 2 H2O(l)' });
     const bad = await callRoute(balance, { method: 'POST', userId, body: { equation: 'NB -> AN', species: { NB: { smiles: 'C1CC', phase: 'l' }, AN: { smiles: 'Nc1ccccc1', phase: 'l' } } } });
     expect(bad.status).toBe(200);
     expect(bad.body).toMatchObject({ error: { code: 'INVALID_STRUCTURE' } });

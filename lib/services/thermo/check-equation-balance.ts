@@ -2,6 +2,7 @@ import { balanceEquation, checkBalance, describeImbalance } from '../../thermo/b
 import { formatEquation, parseEquation } from '../../thermo/equation';
 import { isThermoError } from '../../thermo/errors';
 import { lookupParseOptions } from '../../thermo/lookup-parse-options';
+import type { SpeciesRef } from '../../thermo/notation';
 import type { SpeciesDefinition, StructureLookup } from '../../thermo/structure/structure-lookup-type';
 
 export interface BalanceCheck {
@@ -25,6 +26,10 @@ function unknownOf(parsed: ReturnType<typeof parseEquation>, lookup: Pick<Struct
   return { keys, message };
 }
 
+// Species known by structure carry keys like "{InChIKey}(l)"; the answer writes them as the user did (label or name),
+// so a one-click balance keeps the step's labels, its links and its species map working.
+const asWritten = (s: SpeciesRef): string => (s.key.startsWith('{') ? s.raw : s.key);
+
 // Parse problems are answers here, not errors: the editor shows them while the user types.
 export function checkEquationBalance(text: string, base: StructureLookup, species?: Record<string, SpeciesDefinition>): BalanceCheck | { error: { code: string; message: string; position: number | null; details?: Record<string, unknown> } } {
   try {
@@ -35,18 +40,18 @@ export function checkEquationBalance(text: string, base: StructureLookup, specie
     const unknown = unknownOf(parsed, lookup);
     if (report.isBalanced) {
       const message = unknown.keys.length ? `Balanced, but ${unknown.message}` : 'Balanced.';
-      return { equation: formatEquation(parsed), isBalanced: true, message, balanced: formatEquation(parsed), unknownSpecies: unknown.keys };
+      return { equation: formatEquation(parsed, asWritten), isBalanced: true, message, balanced: formatEquation(parsed, asWritten), unknownSpecies: unknown.keys };
     }
     let balanced: string | null = null;
     let extra = '';
     try {
-      balanced = formatEquation(balanceEquation(parsed));
+      balanced = formatEquation(balanceEquation(parsed), asWritten);
     } catch (error) {
       if (!isThermoError(error)) throw error;
       extra = ` ${error.message}`;
     }
     const unknownText = unknown.keys.length ? ` ${unknown.message}` : '';
-    return { equation: formatEquation(parsed), isBalanced: false, message: `${describeImbalance(report)}.${extra}${unknownText}`, balanced, unknownSpecies: unknown.keys };
+    return { equation: formatEquation(parsed, asWritten), isBalanced: false, message: `${describeImbalance(report)}.${extra}${unknownText}`, balanced, unknownSpecies: unknown.keys };
   } catch (error) {
     if (!isThermoError(error)) throw error;
     // An ambiguous name keeps its choices, so the editor can offer them at the field.
