@@ -66,7 +66,7 @@ test('a designer builds the fine-chemical route from scratch on the board, by na
 
   await page.getByRole('button', { name: 'New route' }).first().click();
   const create = page.getByRole('dialog', { name: 'New route' });
-  await create.getByLabel('Name').fill(`KR-117 building block from scratch ${Date.now().toString(36)}`);
+  await create.getByLabel('Name').fill(`Aminoacetanilide Boc route from scratch ${Date.now().toString(36)}`);
   await create.getByLabel('Target species').fill(NEW_TERM);
   await create.getByRole('button', { name: 'Create route' }).click();
   await expect(page).toHaveURL(/\/routes\/\d+$/);
@@ -159,4 +159,10 @@ test('a designer builds the fine-chemical route from scratch on the board, by na
 
   await expect(page).toHaveURL(new RegExp(`${routePath}$`));
   expect(visited.every((path) => path === routePath), visited.join(' ')).toBe(true);
+
+  // Autosaved: after a reload the three steps and their links are still there.
+  await expect(page.getByTestId('save-status')).toHaveText('Saved', { timeout: 15_000 });
+  await page.reload();
+  await expect(nodes).toHaveCount(3);
+  await expect(page.locator('.react-flow__edge')).toHaveCount(2);
 });
