@@ -1,5 +1,5 @@
 import 'server-only';
-import { loadChem, type Chem, type ParsedStructure } from '../../thermo/structure/chem';
+import { hillBody, loadChem, type Chem, type ParsedStructure } from '../../thermo/structure/chem';
 import { smilesFromMolfile } from '../../thermo/structure/molfile';
 
 /** A pasted structure read by RDKit: a molfile becomes SMILES first; errors name the field the text came from. */
@@ -12,11 +12,7 @@ export async function readStructure(given: { smiles?: string; molfile?: string }
 /** The formula as a team species form writes it (charge sign first, "SO4-2"), from the structure's element counts. */
 export function enteredFormula(structure: Pick<ParsedStructure, 'elements' | 'charge'>): string {
   const { elements, charge } = structure;
-  const symbols = Object.keys(elements).filter((e) => elements[e]! > 0);
-  const ordered = symbols.includes('C')
-    ? ['C', ...(symbols.includes('H') ? ['H'] : []), ...symbols.filter((e) => e !== 'C' && e !== 'H').sort()]
-    : symbols.sort();
-  const body = ordered.map((e) => (elements[e] === 1 ? e : `${e}${elements[e]}`)).join('');
+  const body = hillBody(elements);
   if (charge === 0) return body;
   return `${body}${charge > 0 ? '+' : '-'}${Math.abs(charge) === 1 ? '' : Math.abs(charge)}`;
 }

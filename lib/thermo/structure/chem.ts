@@ -53,12 +53,17 @@ export interface RdkitMolJson {
   }[];
 }
 
-function hillFormula(elements: Record<string, number>, charge: number): string {
+/** The neutral part of a Hill formula: C, then H, then the rest alphabetically (all alphabetical without carbon). */
+export function hillBody(elements: Record<string, number>): string {
   const symbols = Object.keys(elements).filter((e) => elements[e]! > 0);
   const ordered = symbols.includes('C')
     ? ['C', ...(symbols.includes('H') ? ['H'] : []), ...symbols.filter((e) => e !== 'C' && e !== 'H').sort()]
     : symbols.sort();
-  const body = ordered.map((e) => (elements[e] === 1 ? e : `${e}${elements[e]}`)).join('');
+  return ordered.map((e) => (elements[e] === 1 ? e : `${e}${elements[e]}`)).join('');
+}
+
+function hillFormula(elements: Record<string, number>, charge: number): string {
+  const body = hillBody(elements);
   if (charge === 0) return body;
   const size = Math.abs(charge) === 1 ? '' : String(Math.abs(charge));
   return `${body}${size}${charge > 0 ? '+' : '-'}`;
