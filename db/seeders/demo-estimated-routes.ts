@@ -1,5 +1,6 @@
-// Two invented demo routes that rest on estimated values: structures given by SMILES under short labels, every
-// organic the published tables lack estimated by group contribution, so the board shows its estimate marks and σ.
+// Two invented demo routes that rest on estimated values: species named as the identifier table knows them or given
+// by SMILES under short labels, every organic the published tables lack estimated by group contribution, so the board
+// shows its estimate marks and σ.
 // Conditions were checked with `npm run -s thermo -- route`; the notes say what the screen cannot.
 import type { LinkInput, StepInput } from '../../lib/schemas/route';
 
@@ -10,63 +11,69 @@ export interface DemoRoutePlan {
   links: LinkInput[];
 }
 
-const NBA = { smiles: 'NCc1ccc([N+](=O)[O-])cc1', phase: 'l' } as const; // 4-nitrobenzylamine
-const ABA = { smiles: 'NCc1ccc(N)cc1', phase: 'l' } as const; // 4-aminobenzylamine
-const AC_ABA = { smiles: 'CC(=O)NCc1ccc(N)cc1', phase: 'l' } as const; // N-(4-aminobenzyl)acetamide
-const BOC_AC_ABA = { smiles: 'CC(=O)NCc1ccc(NC(=O)OC(C)(C)C)cc1', phase: 'l' } as const; // its tert-butyl carbamate
+// Every species a table names is written by that name (the labels are short handles for the equations), so a designer
+// finds each one by the same name in "Add species"; only the Boc carbamate, which no table has, is given by structure.
+const PPD = { name: 'p-phenylenediamine', phase: 'l' } as const;
+const AC_PPD = { name: "4'-aminoacetanilide", phase: 'l' } as const;
+const BOC_AC_PPD = { smiles: 'CC(=O)Nc1ccc(NC(=O)OC(C)(C)C)cc1', phase: 'l', name: 'tert-butyl N-(4-acetamidophenyl)carbamate' } as const;
 
 const LIQUID_NOTE = 'Pure-liquid values stand in for the solution (a subcooled melt where the pure compound is a solid).';
 
 export const BOC_BUILDING_BLOCK: DemoRoutePlan = {
   name: 'KR-117 building block: nitro reduction, amide, Boc (estimated values)',
-  target: 'BocAcABA',
+  target: 'BocAcPPD',
   steps: [
     {
       id: 'reduce',
-      equation: 'NBA + 3 H2(g) -> ABA + 2 H2O(l)',
-      species: { NBA, ABA },
+      equation: 'PNA + 3 H2(g) -> PPD + 2 H2O(l)',
+      species: { PNA: { name: '4-nitroaniline', phase: 'l' }, PPD },
       temperature: '323.15 K',
       pressures: { 'H2(g)': '5 bar' },
       yieldPct: 97,
       notes: [
-        '4-Nitrobenzylamine (NBA) to 4-aminobenzylamine (ABA) over Pd/C at 5 bar H2 in methanol, 50 °C.',
-        'Nitro reductions are strongly exothermic: hydrogen dosing, cooling and the accumulation of intermediates need a process-safety assessment (reaction calorimetry) before any scale-up.',
+        '4-Nitroaniline (PNA) to p-phenylenediamine (PPD) over Pd/C at 5 bar H2 in methanol, 50 °C.',
+        'Nitro reductions are strongly exothermic: hydrogen dosing, cooling and the accumulation of intermediates need a process-safety assessment (reaction calorimetry) before any scale-up. p-Phenylenediamine is a strong skin sensitiser.',
         `Both organics are estimated (group additivity, then vaporisation); the nitro compound carries the largest σ of the route. ${LIQUID_NOTE}`,
       ].join('\n'),
       position: { x: 0, y: 0 },
     },
     {
       id: 'amide',
-      equation: 'ABA + AcOH -> AcABA + H2O(g)',
-      species: { ABA, AcOH: { name: 'acetic acid', phase: 'l' }, AcABA: AC_ABA },
+      equation: 'PPD + AcOH -> AcPPD + H2O(g)',
+      species: { PPD, AcOH: { name: 'acetic acid', phase: 'l' }, AcPPD: AC_PPD },
       temperature: '384 K',
       pressures: { 'H2O(g)': '0.1 bar' },
       yieldPct: 90,
       notes: [
-        'Direct amidation of the benzylic amine with acetic acid in refluxing toluene; a Dean–Stark trap takes the water off (modelled as 0.1 bar of water vapour).',
-        'Which nitrogen reacts is a matter of rates and selectivity, which a thermodynamic screen cannot judge.',
-        `ABA and the amide AcABA are estimated; acetic acid is tabulated. ${LIQUID_NOTE}`,
+        "Direct amidation of p-phenylenediamine with acetic acid to 4'-aminoacetanilide (AcPPD) in refluxing toluene; a Dean–Stark trap takes the water off (modelled as 0.1 bar of water vapour).",
+        'Mono- against diacetylation is a matter of rates and selectivity, which a thermodynamic screen cannot judge.',
+        `PPD and AcPPD are estimated; acetic acid is tabulated. ${LIQUID_NOTE}`,
       ].join('\n'),
       position: { x: 360, y: 0 },
     },
     {
       id: 'boc',
-      equation: 'AcABA + Boc2O -> BocAcABA + tBuOH + CO2(g)',
-      species: { AcABA: AC_ABA, Boc2O: { name: 'Boc anhydride', phase: 'l' }, tBuOH: { name: 'tert-butanol', phase: 'l' }, BocAcABA: BOC_AC_ABA },
+      equation: 'AcPPD + Boc2O -> BocAcPPD + tBuOH + CO2(g)',
+      species: {
+        AcPPD: AC_PPD,
+        Boc2O: { name: 'di-tert-butyl dicarbonate', phase: 'l' },
+        tBuOH: { name: 'tert-butanol', phase: 'l' },
+        BocAcPPD: BOC_AC_PPD,
+      },
       temperature: '313.15 K',
       pressures: { 'CO2(g)': '1 bar' },
       yieldPct: 95,
       notes: [
-        'Boc protection of the aryl amine with Boc anhydride in ethanol at 40 °C.',
+        'Boc protection of the free aryl amine of AcPPD with di-tert-butyl dicarbonate (Boc2O) in ethanol at 40 °C, to the carbamate BocAcPPD.',
         'Releases one mol of CO2 per mol, and Boc anhydride and Boc groups can give isobutylene on heating: gas evolution, venting and flammability need a process-safety assessment.',
-        `Boc anhydride and both amides are estimated; tert-butanol and CO2 are tabulated. ${LIQUID_NOTE}`,
+        `The carbamate is in no table, so it is given by its structure; it, AcPPD and Boc2O are estimated; tert-butanol and CO2 are tabulated. ${LIQUID_NOTE}`,
       ].join('\n'),
       position: { x: 720, y: 0 },
     },
   ],
   links: [
-    { from: 'reduce', to: 'amide', species: 'ABA' },
-    { from: 'amide', to: 'boc', species: 'AcABA' },
+    { from: 'reduce', to: 'amide', species: 'PPD' },
+    { from: 'amide', to: 'boc', species: 'AcPPD' },
   ],
 };
 

@@ -7,11 +7,11 @@
 // Chemistry (any organic chemistry text; common practice): 4-nitroaniline + 3 H2 → p-phenylenediamine + 2 H2O
 // (catalytic hydrogenation of a nitroarene); p-phenylenediamine + acetic acid → 4'-aminoacetanilide + H2O (direct
 // amidation); 4'-aminoacetanilide + di-tert-butyl dicarbonate → tert-butyl N-(4-acetamidophenyl)carbamate
-// (CC(=O)Nc1ccc(NC(=O)OC(C)(C)C)cc1, C13H18N2O3; structure from memory) + tert-butanol + CO2. The demo route
-// (db/seeders/demo-estimated-routes.ts) runs the same three reactions on the benzylamine analogues, but
-// 4-nitrobenzylamine and both of its amides are in no table, so they could not be found by name; the aniline series
-// is in the identifier table down to 4'-aminoacetanilide (CAS 122-80-5). The engine finds all three steps downhill at
-// 298.15 K on its estimates (npm run -s thermo -- route); the figures themselves are not asserted here.
+// (CC(=O)Nc1ccc(NC(=O)OC(C)(C)C)cc1, C13H18N2O3; structure from memory) + tert-butanol + CO2. These are the demo
+// route's three reactions (db/seeders/demo-estimated-routes.ts, "KR-117 building block"), which names the same
+// species and binds only the carbamate to its SMILES: the aniline series is in the identifier table down to
+// 4'-aminoacetanilide (CAS 122-80-5). The engine finds all three steps downhill at 298.15 K on its estimates
+// (npm run -s thermo -- route); the figures themselves are not asserted here.
 import { expect, test, type Page } from '@playwright/test';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../db/seeders/demo-team';
 import { signIn } from './support/auth';

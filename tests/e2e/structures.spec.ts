@@ -34,6 +34,12 @@ test('the estimated demo route shows named drawings on its nodes, larger on focu
   const strips = page.getByTestId('structure-strip');
   await expect(strips.first()).toBeVisible();
   await expectNamedDrawings(page.getByTestId('route-canvas'), 3);
+  // The aniline series under the names the identifier table gives it, and the carbamate no table has under the name
+  // its structure is bound with (formulas from the structures).
+  const canvasDrawings = page.getByTestId('route-canvas').locator('img[src^="/api/structures/svg"]');
+  await expect
+    .poll(() => canvasDrawings.evaluateAll((imgs) => imgs.map((img) => img.getAttribute('alt') ?? '')))
+    .toEqual(expect.arrayContaining(['4-nitroaniline (C6H6N2O2)', "4'-aminoacetanilide (C8H10N2O)", 'tert-butyl N-(4-acetamidophenyl)carbamate (C13H18N2O3)']));
 
   // Keyboard focus opens the larger view; Escape closes it.
   await strips.first().focus();

@@ -1,7 +1,7 @@
 // The seeded demo routes, evaluated the way the board evaluates them (POST /api/routes/[id]/evaluate as the demo
 // designer): every step evaluates, every link carries extent, and the two routes built on structures use estimated
 // species and say so. Chemistry checked against common practice, from memory: nitro reductions release about
-// −550 kJ/mol of heat (nitrobenzene to aniline), and the isopropanol-coupled ketone reduction has K of order 1.
+// −550 kJ/mol of heat (nitrobenzene to aniline; the demo reduces 4-nitroaniline), and the isopropanol-coupled ketone reduction has K of order 1.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { POST as evaluateSavedRoute } from '@/app/api/routes/[routeId]/evaluate/route';
 import { getDb } from '@/db';
@@ -49,12 +49,24 @@ describe('the seeded demo routes', () => {
     expect(e.order).toEqual(['reduce', 'amide', 'boc']);
     expect(countEstimatedSteps(e.steps)).toBe(3);
     const reduce = e.steps.find((s) => s.id === 'reduce')!;
-    expect(reduce.result!.species.find((s) => s.as_written === 'NBA')!.origin).toBe('estimated');
+    expect(reduce.result!.species.find((s) => s.as_written === 'PNA')!.origin).toBe('estimated');
     expect(reduce.result!.deltaH0_kJ).toBeGreaterThan(-650);
     expect(reduce.result!.deltaH0_kJ).toBeLessThan(-450);
     expect(reduce.notes.map((n) => n.code)).toContain('HEAT_RELEASE');
     expect(e.steps.find((s) => s.id === 'boc')!.notes.map((n) => n.code)).toContain('GAS_EVOLUTION');
     expect(e.overall.overallSigma_kJ!).toBeGreaterThan(0);
+  });
+
+  it('names every species of the Boc building block as the identifier table knows it, all but the carbamate no table has', () => {
+    // Formulas from the structures (4'-aminoacetanilide is CAS 122-80-5; from memory). The designer's e2e
+    // (tests/e2e/fine-chemical-from-scratch.spec.ts) finds the same named species in "Add species".
+    const bySmiles = BOC_BUILDING_BLOCK.steps.flatMap((s) => Object.entries(s.species ?? {}).filter(([, d]) => 'smiles' in d).map(([label]) => label));
+    expect([...new Set(bySmiles)]).toEqual([BOC_BUILDING_BLOCK.target]);
+    const species = new Map(evaluations.get(BOC_BUILDING_BLOCK.name)!.steps.flatMap((s) => s.result!.species).map((s) => [s.as_written, s]));
+    const named = { PNA: ['4-nitroaniline', 'C6H6N2O2'], PPD: ['p-phenylenediamine', 'C6H8N2'], AcPPD: ["4'-aminoacetanilide", 'C8H10N2O'], Boc2O: ['di-tert-butyl dicarbonate', 'C10H18O5'] };
+    for (const [label, [name, formula]] of Object.entries(named)) expect(species.get(label), label).toMatchObject({ name, formula, origin: 'estimated' });
+    expect(species.get('tBuOH')).toMatchObject({ name: 'tert-butanol', formula: 'C4H10O', origin: 'library' });
+    expect(species.get('BocAcPPD')).toMatchObject({ formula: 'C13H18N2O3', smiles: 'CC(=O)Nc1ccc(NC(=O)OC(C)(C)C)cc1', origin: 'estimated' });
   });
 
   it('shows the coupled ketone reduction as estimated and sign-uncertain, step and total', () => {

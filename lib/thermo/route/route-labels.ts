@@ -1,5 +1,5 @@
 // Labels the steps' species maps define, offered to the route's target and links. On the board a link carries the
-// species as written in the equations ("ABA"), and a saved route has no route-level map, so without this a link
+// species as written in the equations ("AcPPD"), and a saved route has no route-level map, so without this a link
 // between labelled species could not be read and a labelled product could not be the target.
 import type { RouteStep } from '../../schemas/route-evaluate';
 import { isThermoError } from '../errors';

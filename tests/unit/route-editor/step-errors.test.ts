@@ -12,7 +12,7 @@ describe('engine paths to step fields', () => {
     expect(fieldOfPath('steps.2.pressures.CO(g)')).toBe('pressure:CO(g)');
     expect(fieldOfPath('steps.2.concentrations.H+(aq)')).toBe('concentration:H+(aq)');
     expect(fieldOfPath('steps.3.yield')).toBe('yieldPct');
-    expect(fieldOfPath('steps.3.species.ABA.smiles')).toBe('equation');
+    expect(fieldOfPath('steps.3.species.AcPPD.smiles')).toBe('equation');
     expect(fieldOfPath(null)).toBe('equation');
     expect(stepIndexOfPath('steps.12.temperature')).toBe(12);
     expect(stepIndexOfPath('target')).toBeNull();
