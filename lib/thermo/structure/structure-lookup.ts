@@ -99,7 +99,9 @@ class StructureAwareLookup implements StructureLookup {
     }
     if ('smiles' in def) {
       const structure = this.chem.parse(def.smiles, at(field, 'smiles'));
-      return this.keyForStructure(structure, def.phase, def.name ?? null, def.estimate === true, { structure: at(field, 'smiles'), phase: at(field, 'phase') });
+      // The memo of estimates is shared by every team, so a name a step gives its structure stays out of it
+      // (withLabels shows that name to the step's own request only).
+      return this.keyForStructure(structure, def.phase, null, def.estimate === true, { structure: at(field, 'smiles'), phase: at(field, 'phase') });
     }
     if (!def.estimate) {
       const known = this.base.resolveAlias(def.name, def.phase);
@@ -111,11 +113,23 @@ class StructureAwareLookup implements StructureLookup {
 
   withLabels(defs: Readonly<Record<string, SpeciesDefinition>>, fieldPrefix = 'species'): SpeciesLookup {
     const labels = new Map<string, string>();
-    for (const [label, def] of Object.entries(defs)) labels.set(label.trim(), this.resolveDefinition(def, `${fieldPrefix}.${label}`));
+    const givenNames = new Map<string, string>();
+    for (const [label, def] of Object.entries(defs)) {
+      const key = this.resolveDefinition(def, `${fieldPrefix}.${label}`);
+      labels.set(label.trim(), key);
+      if ('smiles' in def && def.name?.trim()) givenNames.set(key, def.name.trim());
+    }
     // A step's labels sit over the route's: a label the step does not define is looked up in the route's.
     const parent = this.resolveLabel?.bind(this);
+    const parentGet = this.get.bind(this);
     const resolveLabel = (label: string) => labels.get(label.trim()) ?? parent?.(label);
-    return Object.assign(Object.create(this) as StructureAwareLookup, { resolveLabel });
+    // A structure the step names (SMILES with a name) reads under that name in this request's answers only.
+    const get = (key: string) => {
+      const record = parentGet(key);
+      const name = givenNames.get(key);
+      return record && name && record.estimate ? { ...record, name } : record;
+    };
+    return Object.assign(Object.create(this) as StructureAwareLookup, { resolveLabel, get });
   }
 
   /** The compound a name stands for in the identifier table; several different structures → AMBIGUOUS_NAME. */
