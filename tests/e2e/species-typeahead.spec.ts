@@ -26,7 +26,11 @@ async function addSpecies(page: Page, text: string, side: 'Reactant' | 'Product'
   await page.getByTestId('add-species').getByRole('radio', { name: side }).check();
   const field = page.getByRole('combobox', { name: 'Add species' });
   await field.fill(text);
-  const options = page.getByRole('listbox', { name: /Species matching/ }).getByRole('option');
+  // The answer for the whole text, settled: an earlier answer for part of it may show the same first match.
+  const list = page.getByRole('listbox', { name: `Species matching ${text}`, exact: true });
+  await expect(list).toBeVisible();
+  await expect(list).not.toHaveAttribute('aria-busy', 'true');
+  const options = list.getByRole('option');
   await expect(options.first()).toHaveAccessibleName(expected);
   await field.press('ArrowDown');
   await expect(options.first()).toHaveAttribute('aria-selected', 'true');
