@@ -32,8 +32,12 @@ async function addByName(page: Page, text: string, side: 'Reactant' | 'Product',
   await box.getByLabel('Phase').selectOption(phase);
   const field = box.getByRole('combobox', { name: 'Add species' });
   await field.fill(text);
-  const first = page.getByRole('listbox', { name: /Species matching/ }).getByRole('option').first();
+  // The settled answer for the whole text (an answer for part of it may show the same first match, then change).
   // The first search of a server process builds its index (seconds on a busy machine).
+  const list = page.getByRole('listbox', { name: `Species matching ${text}`, exact: true });
+  await expect(list).toBeVisible({ timeout: 30_000 });
+  await expect(list).not.toHaveAttribute('aria-busy', 'true', { timeout: 30_000 });
+  const first = list.getByRole('option').first();
   await expect(first).toHaveAccessibleName(expected, { timeout: 30_000 });
   await field.press('ArrowDown');
   await expect(first).toHaveAttribute('aria-selected', 'true');
