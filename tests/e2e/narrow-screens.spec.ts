@@ -141,6 +141,8 @@ for (const width of [390, 768] as const) {
         ['/fits', 'Data fits'],
         ['/species/import', 'Import species from CSV'],
         ['/species/from-structure', 'New species from a structure'],
+        // A species page: the drawing and the identity list side by side must wrap, not squeeze.
+        [`/species/${encodeURIComponent('C2H5OH(g)')}`, 'ethanol'],
       ] as const) {
         await page.goto(path);
         await expect(page.getByRole('heading', { level: 1, name: title })).toBeVisible();
