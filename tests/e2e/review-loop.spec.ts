@@ -1,29 +1,15 @@
 // The review loop's small things: what the lead sees before approving, the comment box's counter and @ completion,
 // the caution that folds to one line (and stays whole on paper), the 404 inside the shell and the favicon.
-import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
-import { DEMO_PASSWORD, DEMO_USERS } from '../../db/seeders/demo-team';
+import { expect, test, type Page } from '@playwright/test';
+import { DEMO_PASSWORD } from '../../db/seeders/demo-team';
 import { signIn } from './support/auth';
+import { demoUser, makeReviewRoute } from './support/review-route';
 
-const user = (role: 'lead' | 'designer' | 'reviewer') => DEMO_USERS.find((u) => u.role === role)!;
-const STEPS = [
-  { id: 's1', equation: 'CH4(g) + H2O(g) -> CO(g) + 3 H2(g)', temperature: '1100 K', yieldPct: 100, notes: '', position: { x: 0, y: 40 } },
-  { id: 's2', equation: 'CO(g) + 2 H2(g) -> CH3OH(g)', temperature: '500 K', yieldPct: 100, notes: '', position: { x: 340, y: 40 } },
-];
-const LINKS = [
-  { from: 's1', to: 's2', species: 'CO(g)' },
-  { from: 's1', to: 's2', species: 'H2(g)' },
-];
+const user = demoUser;
 
 test.use({ viewport: { width: 1440, height: 1100 } });
 
-async function makeRoute(request: APIRequestContext, name: string, target = 'CH3OH(g)') {
-  const created = await request.post('/api/routes', { data: { name, target, targetAmount: '1 mol' } });
-  expect(created.status()).toBe(201);
-  const { id, version } = (await created.json()) as { id: number; version: number };
-  const saved = await request.put(`/api/routes/${id}`, { data: { version, name, target, targetAmount: '1 mol', marginalThreshold_kJ: -17, steps: STEPS, links: LINKS } });
-  expect(saved.status()).toBe(200);
-  return id;
-}
+const makeRoute = makeReviewRoute;
 
 const review = (page: Page) => page.getByRole('region', { name: 'Review' });
 const composer = (page: Page) => review(page).getByRole('combobox', { name: 'Comment on the whole route' });

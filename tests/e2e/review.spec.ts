@@ -1,29 +1,16 @@
-import { expect, test, type APIRequestContext, type Browser, type Page } from '@playwright/test';
-import { DEMO_PASSWORD, DEMO_USERS } from '../../db/seeders/demo-team';
+import { expect, test, type Browser, type Page } from '@playwright/test';
+import { DEMO_PASSWORD } from '../../db/seeders/demo-team';
 import { readMailbox } from '../../lib/mail/mailbox';
 import { signIn } from './support/auth';
+import { demoUser, makeReviewRoute } from './support/review-route';
 import { E2E_MAIL_DIR } from './support/e2e-env';
 
-const user = (role: 'lead' | 'designer' | 'reviewer') => DEMO_USERS.find((u) => u.role === role)!;
-const STEPS = [
-  { id: 's1', equation: 'CH4(g) + H2O(g) -> CO(g) + 3 H2(g)', temperature: '1100 K', yieldPct: 100, notes: '', position: { x: 0, y: 40 } },
-  { id: 's2', equation: 'CO(g) + 2 H2(g) -> CH3OH(g)', temperature: '500 K', yieldPct: 100, notes: '', position: { x: 340, y: 40 } },
-];
-const LINKS = [
-  { from: 's1', to: 's2', species: 'CO(g)' },
-  { from: 's1', to: 's2', species: 'H2(g)' },
-];
+const user = demoUser;
 const XSS = '<img src=x onerror="window.__xss=1"><script>window.__xss=2</script> Watch the **water** removal, @designer';
 
 test.use({ viewport: { width: 1440, height: 1100 } });
 
-async function makeRoute(request: APIRequestContext, name: string) {
-  const created = await request.post('/api/routes', { data: { name, target: 'CH3OH(g)', targetAmount: '1 mol' } });
-  const { id, version } = (await created.json()) as { id: number; version: number };
-  const saved = await request.put(`/api/routes/${id}`, { data: { version, name, target: 'CH3OH(g)', targetAmount: '1 mol', marginalThreshold_kJ: -17, steps: STEPS, links: LINKS } });
-  expect(saved.status()).toBe(200);
-  return id;
-}
+const makeRoute = makeReviewRoute;
 
 async function pageAs(browser: Browser, role: 'lead' | 'designer' | 'reviewer'): Promise<Page> {
   const context = await browser.newContext({ viewport: { width: 1440, height: 1100 } });
