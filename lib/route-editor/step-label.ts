@@ -1,9 +1,10 @@
 // How a step is named wherever people read about it: "Step 3 (ethanol dehydrogenation)", never its internal id.
 // The number is the step's place in route order: the links' topological order with ties by document order, the
-// same order the engine evaluates in (lib/thermo/route/route-graph.ts), computed here from the links alone so it
+// same order the engine evaluates in (one rule, lib/thermo/route/step-order.ts), computed here from the links alone so it
 // holds while an evaluation is loading or has failed. Pure: the board, the panels, revisions, notifications and
 // mails all use it.
 import reactionLibrary from '../thermo/data/reaction-library.json';
+import { kahnOrder } from '../thermo/route/step-order';
 
 export interface StepLike {
   id: string;
@@ -27,20 +28,7 @@ export function routeStepOrder(steps: readonly { id: string }[], links: readonly
     succs[from]!.add(to);
     indegree[to]! += 1;
   }
-  const ready = indegree.flatMap((d, i) => (d === 0 ? [i] : []));
-  const order: number[] = [];
-  while (ready.length > 0) {
-    const next = ready.shift()!;
-    order.push(next);
-    for (const s of succs[next]!) {
-      indegree[s]! -= 1;
-      if (indegree[s] === 0) {
-        // The smallest ready index (earliest in the document) goes first, as in the engine.
-        const at = ready.findIndex((r) => r > s);
-        ready.splice(at === -1 ? ready.length : at, 0, s);
-      }
-    }
-  }
+  const order = kahnOrder(succs.map((s) => [...s]), indegree);
   const placed = new Set(order);
   return [...order, ...steps.map((_, i) => i).filter((i) => !placed.has(i))].map((i) => steps[i]!.id);
 }

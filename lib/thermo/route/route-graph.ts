@@ -2,6 +2,7 @@
 // Kahn's algorithm (ties broken by input order), and a cycle named step by step when there is one.
 import type { RouteLink } from '../../schemas/route-evaluate';
 import { routeError } from './route-errors';
+import { kahnOrder } from './step-order';
 
 export interface RouteGraph {
   ids: string[];
@@ -42,16 +43,6 @@ function resolveLinks(links: readonly RouteLink[], indexOf: Map<string, number>)
 }
 
 /** Insert into an ascending array, so the smallest ready index (earliest in the input) goes first. */
-function insertSorted(list: number[], value: number): void {
-  let lo = 0;
-  let hi = list.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >> 1;
-    if (list[mid]! < value) lo = mid + 1;
-    else hi = mid;
-  }
-  list.splice(lo, 0, value);
-}
 
 /** Every step left over by Kahn's algorithm has a left-over predecessor, so walking back must loop. */
 function findCycle(remaining: Set<number>, pred: (step: number) => number[]): number[] {
@@ -80,18 +71,7 @@ export function buildRouteGraph(ids: readonly string[], links: readonly RouteLin
   // In-degree counts distinct predecessors: two links between one pair are one dependency.
   const preds = ids.map((_, i) => [...new Set(incoming[i]!.map((li) => ends[li]!.from))]);
   const succs = ids.map((_, i) => [...new Set(outgoing[i]!.map((li) => ends[li]!.to))]);
-  const indegree = preds.map((p) => p.length);
-  const ready: number[] = [];
-  indegree.forEach((d, i) => d === 0 && ready.push(i));
-  const order: number[] = [];
-  while (ready.length > 0) {
-    const next = ready.shift()!;
-    order.push(next);
-    for (const s of succs[next]!) {
-      indegree[s]! -= 1;
-      if (indegree[s] === 0) insertSorted(ready, s);
-    }
-  }
+  const order = kahnOrder(succs, preds.map((p) => p.length));
   if (order.length < ids.length) {
     const done = new Set(order);
     const remaining = new Set(ids.map((_, i) => i).filter((i) => !done.has(i)));
